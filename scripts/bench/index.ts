@@ -1,0 +1,22 @@
+/**
+ * `npm run bench`: prints figures for the README's performance table. Never a test:
+ * wall-clock numbers depend on the machine. Each section lives in its own file.
+ */
+const sections: Array<[string, () => Promise<{ run: () => Promise<void> }>]> = [
+  ['engine', () => import('./engine')],
+  ['scoring', () => import('./scoring')],
+];
+
+const only = process.argv.slice(2);
+for (const [name, load] of sections) {
+  if (only.length > 0 && !only.includes(name)) continue;
+  let mod: { run: () => Promise<void> };
+  try {
+    mod = await load();
+  } catch (err) {
+    console.log(`[${name}] not available yet: ${(err as Error).message}`);
+    continue;
+  }
+  console.log(`\n== ${name} ==`);
+  await mod.run();
+}

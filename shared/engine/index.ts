@@ -1,0 +1,6 @@
+/**
+ * Sixfold's drill engine: the public contract of the team brief's ENGINE.md.
+ * Pure and browser-safe: no DOM, no node:* modules, no network.
+ */
+export * from './types';
+export { EngineError } from './errors';

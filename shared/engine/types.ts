@@ -1,0 +1,193 @@
+/**
+ * Types of the engine's public contract (../shared/ENGINE.md in the team brief).
+ * Names and shapes here are a contract: outside checks call them exactly like this.
+ */
+
+export type Quality = 'major' | 'minor' | 'diminished' | 'augmented';
+
+export interface Triad {
+  symbol: string;
+  root: string;
+  quality: Quality;
+  /** root, third, fifth */
+  pitchClasses: string[];
+}
+
+export interface TriadPair {
+  a: Triad;
+  b: Triad;
+  /** tonal interval from a's root to b's */
+  interval: string;
+  /** 6 pitch classes, ascending from a's root */
+  hexatonic: string[];
+}
+
+export interface ChordFit {
+  pair: TriadPair;
+  /** tonal scale name without its tonic, rooted on the chord's root ("dorian") */
+  scale: string;
+  /** each hexatonic note's function against the chord, in hexatonic order */
+  functions: string[];
+  /** 1-based position, best first */
+  rank: number;
+}
+
+export type PatternId =
+  | 'stack'
+  | 'weave'
+  | 'weave-four'
+  | 'leap-back'
+  | 'four-three'
+  | 'scale-steps'
+  | 'scale-steps-triplet';
+
+export type Subdivision = 'eighth' | 'triplet' | 'sixteenth';
+
+export type CellEntry = 'start' | 'above' | 'below' | 'same-position' | 'next-position';
+
+export interface TriadCellDef {
+  triad: 'a' | 'b';
+  notes: 3 | 4;
+  shape: 'line' | 'leap';
+  motion: 'up' | 'down';
+  entry: CellEntry;
+}
+
+export type PatternDef =
+  | { name: string; subdivision: Subdivision; source: 'triads'; cells: TriadCellDef[] }
+  | {
+      name: string;
+      subdivision: Subdivision;
+      source: 'scale';
+      /** offsets from d within one cell */
+      degrees: number[];
+      /** d's advance per cell */
+      step: number;
+    };
+
+export type Direction = 'up' | 'down' | 'up-down';
+
+export type InstrumentId =
+  | 'piano'
+  | 'wind-controller'
+  | 'flute'
+  | 'clarinet'
+  | 'soprano-sax'
+  | 'alto-sax'
+  | 'tenor-sax'
+  | 'baritone-sax'
+  | 'trumpet'
+  | 'trombone'
+  | 'guitar';
+
+export interface MidiRange {
+  low: number;
+  high: number;
+}
+
+export interface Instrument {
+  label: string;
+  /** semitones written -> concert (alto sax: -9) */
+  transposition: number;
+  /** concert MIDI, inclusive */
+  range: MidiRange;
+  monophonic: boolean;
+}
+
+export type Meter = [number, number];
+
+export interface DrillSpec {
+  pair: [string, string];
+  pattern: PatternId | PatternDef;
+  direction: Direction;
+  range?: MidiRange;
+  start?: number;
+  instrument?: InstrumentId;
+  tempo?: number;
+  meter?: Meter;
+  chord?: string;
+}
+
+/** A DrillSpec with its defaults filled in, as held by a generated Drill. */
+export interface FilledDrillSpec extends DrillSpec {
+  range: MidiRange;
+  start: number;
+  instrument: InstrumentId;
+  tempo: number;
+  meter: Meter;
+}
+
+export interface DrillNote {
+  midi: number;
+  /** spelled, concert ("Eb4") */
+  name: string;
+  /** spelled, for the instrument */
+  written: string;
+  /** quarter-note beats from the first downbeat, 0-based */
+  beat: number;
+  /** in quarter-note beats */
+  duration: number;
+  /** 1-based */
+  measure: number;
+  /** 1-based, in the meter's own beat unit */
+  beatInMeasure: number;
+  source: 'a' | 'b' | 'scale';
+  /** 0-based index of the note's cell */
+  cell: number;
+}
+
+export interface Drill {
+  spec: FilledDrillSpec;
+  notes: DrillNote[];
+  measures: number;
+}
+
+export type KeyOrder = 'chromatic' | 'fourths' | 'fifths';
+
+export interface PlayedNote {
+  midi: number;
+  /** from the drill's first downbeat, taken from the MIDI event's own timestamp */
+  timeMs: number;
+  velocity?: number;
+  durationMs?: number;
+}
+
+export interface ScoreOptions {
+  tempo: number;
+  mode: 'timed' | 'free';
+  octaveTolerant?: boolean;
+  hitWindowMs?: number;
+  matchWindowMs?: number;
+  /** 0.5 straight (default) .. 0.75 */
+  swing?: number;
+  /** semitones added to every played note before matching */
+  inputTransposition?: number;
+}
+
+export type Verdict = 'hit' | 'early' | 'late' | 'wrong' | 'missed';
+
+export interface NoteResult {
+  verdict: Verdict;
+  playedIndex: number | null;
+  offsetMs: number | null;
+}
+
+export interface TakeScore {
+  results: NoteResult[];
+  extras: number[];
+  accuracy: number;
+  meanOffsetMs: number | null;
+  spreadMs: number | null;
+}
+
+export interface ScoreUpdate {
+  index: number;
+  result: NoteResult;
+  settled: boolean;
+}
+
+export interface LiveScorer {
+  push(note: PlayedNote): ScoreUpdate[];
+  tick(nowMs: number): ScoreUpdate[];
+  finish(): TakeScore;
+}
