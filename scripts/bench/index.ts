@@ -1,3 +1,4 @@
+export {};
 /**
  * `npm run bench`: prints figures for the README's performance table. Never a test:
  * wall-clock numbers depend on the machine. Each section lives in its own file.

@@ -1,0 +1,34 @@
+import { z } from 'zod';
+
+/** Environment, parsed once at start-up; a bad variable stops the server and says which. */
+const EnvSchema = z
+  .object({
+    NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
+    HOST: z.string().min(1).default('127.0.0.1'),
+    PORT: z.coerce.number().int().min(0).max(65535).default(3000),
+    DATABASE_URL: z
+      .string({ error: 'DATABASE_URL is required (npm start sets it to the project database)' })
+      .regex(/^postgres(ql)?:\/\//, 'DATABASE_URL must be a postgres:// URL'),
+    SESSION_SECRET: z.string().min(16, 'SESSION_SECRET must be at least 16 characters').optional(),
+    PUBLIC_URL: z.url('PUBLIC_URL must be a full URL such as https://sixfold.example').optional(),
+    SEED_DEMO: z.enum(['0', '1']).default('0'),
+    TRUST_PROXY: z.enum(['0', '1']).default('0'),
+  })
+  .superRefine((env, ctx) => {
+    if (env.NODE_ENV === 'production' && !env.SESSION_SECRET) {
+      ctx.addIssue({ code: 'custom', path: ['SESSION_SECRET'], message: 'SESSION_SECRET is required in production' });
+    }
+  });
+
+export type Env = z.infer<typeof EnvSchema> & { SESSION_SECRET: string };
+
+export class EnvError extends Error {}
+
+export function parseEnv(source: NodeJS.ProcessEnv = process.env): Env {
+  const parsed = EnvSchema.safeParse(source);
+  if (!parsed.success) {
+    const lines = parsed.error.issues.map((i) => `  - ${i.path.join('.') || '(env)'}: ${i.message}`);
+    throw new EnvError(`Bad environment variables:\n${lines.join('\n')}`);
+  }
+  return { ...parsed.data, SESSION_SECRET: parsed.data.SESSION_SECRET ?? 'sixfold-development-secret-not-for-production' };
+}

@@ -1,0 +1,51 @@
+import type { ErrorRequestHandler, RequestHandler } from 'express';
+import { ZodError } from 'zod';
+import { EngineError } from '../../shared/engine/errors';
+import { AppError } from '../errors';
+
+/** Field errors keyed by dotted path, for a 400 that says which field was wrong and why. */
+export function zodFields(err: ZodError): Record<string, string[]> {
+  const fields: Record<string, string[]> = {};
+  for (const issue of err.issues) {
+    const key = issue.path.map(String).join('.') || '_';
+    fields[key] = [...(fields[key] ?? []), issue.message];
+  }
+  return fields;
+}
+
+export const notFoundApi: RequestHandler = (req, _res, next) => {
+  next(new AppError('not_found', `No API route for ${req.method} ${req.path}`));
+};
+
+export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
+  if (err instanceof ZodError) {
+    const fields = zodFields(err);
+    const names = Object.keys(fields).join(', ');
+    res.status(400).json({ error: { code: 'validation', message: `Check these fields: ${names}`, fields } });
+    return;
+  }
+  if (err instanceof AppError) {
+    res.status(err.status).json({ error: { code: err.code, message: err.message, ...(err.fields ? { fields: err.fields } : {}) } });
+    return;
+  }
+  if (err instanceof EngineError) {
+    res.status(400).json({ error: { code: 'bad_request', message: err.message } });
+    return;
+  }
+  const status = typeof err?.status === 'number' ? err.status : typeof err?.statusCode === 'number' ? err.statusCode : 500;
+  if (status === 400 && err?.type === 'entity.parse.failed') {
+    res.status(400).json({ error: { code: 'bad_request', message: 'The request body is not valid JSON' } });
+    return;
+  }
+  if (status === 413) {
+    res.status(413).json({ error: { code: 'payload_too_large', message: 'The request body is too large' } });
+    return;
+  }
+  if (status >= 400 && status < 500) {
+    res.status(status).json({ error: { code: 'bad_request', message: String(err?.message ?? 'Bad request') } });
+    return;
+  }
+  console.error(err);
+  res.status(500).json({ error: { code: 'internal', message: 'Something went wrong on our side; nothing you sent was lost' } });
+};
+

@@ -1,0 +1,12 @@
+import { Router } from 'express';
+import type { AppDeps } from '../app';
+import { checkDatabase } from '../services/health/check-database';
+
+export function healthRouter({ pool }: AppDeps) {
+  const router = Router();
+  router.get('/', async (_req, res) => {
+    const up = await checkDatabase(pool);
+    res.status(up ? 200 : 503).json({ ok: up, db: up ? 'up' : 'down' });
+  });
+  return router;
+}

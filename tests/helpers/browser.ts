@@ -1,0 +1,69 @@
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { type BrowserContext, chromium, type Page } from 'playwright-core';
+
+export const fakeMidiPath = fileURLToPath(new URL('../e2e/fake-midi.js', import.meta.url));
+
+export interface BrowserSession {
+  context: BrowserContext;
+  page: Page;
+  /** console errors and uncaught page errors seen so far */
+  errors: string[];
+  /** requests that went to any host other than the app's */
+  foreignRequests: string[];
+  close(): Promise<void>;
+}
+
+/**
+ * Debian's Chromium driven by playwright-core (never a downloaded browser), with a fresh
+ * profile and the flags that keep it off the network.
+ */
+export async function openBrowser(appUrl: string, opts: { fakeMidi?: boolean; midiOptions?: unknown } = {}): Promise<BrowserSession> {
+  const profile = mkdtempSync(join(tmpdir(), 'sixfold-chromium-'));
+  const context = await chromium.launchPersistentContext(profile, {
+    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+    headless: true,
+    acceptDownloads: true,
+    viewport: { width: 1280, height: 900 },
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
+  });
+  if (opts.midiOptions !== undefined) {
+    await context.addInitScript((o) => {
+      (window as unknown as { __FAKE_MIDI_OPTIONS__: unknown }).__FAKE_MIDI_OPTIONS__ = o;
+    }, opts.midiOptions);
+  }
+  if (opts.fakeMidi) await context.addInitScript({ path: fakeMidiPath });
+  const errors: string[] = [];
+  const foreignRequests: string[] = [];
+  const appOrigin = new URL(appUrl).origin;
+  context.on('request', (req) => {
+    const url = req.url();
+    if (/^(data|blob|about|chrome|chrome-extension):/.test(url)) return;
+    if (new URL(url).origin !== appOrigin) foreignRequests.push(url);
+  });
+  const page = context.pages()[0] ?? (await context.newPage());
+  page.on('console', (msg) => {
+    if (msg.type() === 'error') errors.push(msg.text());
+  });
+  page.on('pageerror', (err) => errors.push(err.message));
+  return {
+    context,
+    page,
+    errors,
+    foreignRequests,
+    async close() {
+      await context.close();
+      rmSync(profile, { recursive: true, force: true });
+    },
+  };
+}
