@@ -4,3 +4,7 @@
  */
 export * from './types';
 export { EngineError } from './errors';
+export * from './theory';
+export * from './patterns';
+export { instruments } from './instruments';
+// files: below

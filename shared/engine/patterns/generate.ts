@@ -1,0 +1,147 @@
+import { EngineError } from '../errors';
+import { instruments } from '../instruments';
+import { triadPair } from '../theory/pairs';
+import type { Drill, DrillNote, DrillSpec, FilledDrillSpec, PatternDef, TriadPair } from '../types';
+import { type Ladders, type RawNote, runCells } from './cells';
+import { type Ladder, ladderOf } from './ladder';
+import {
+  checkDirection,
+  resolveInstrument,
+  resolveMeter,
+  resolvePattern,
+  resolveRange,
+  resolveTempo,
+} from './spec';
+import { NOTES_PER_BEAT, measuresFor, placeBeat } from './timing';
+
+const hexCache = new Map<string, Ladders>();
+
+function laddersFor(pair: TriadPair, transposition: number): Ladders {
+  const key = `${pair.a.symbol}|${pair.b.symbol}|${transposition}`;
+  const hit = hexCache.get(key);
+  if (hit) return hit;
+  const a = ladderOf(pair.a, transposition);
+  const b = ladderOf(pair.b, transposition);
+  const hex: Ladders['hex'] = [];
+  const hexIndexOf = new Int16Array(128).fill(-1);
+  for (let m = 0; m < 128; m++) {
+    const triad = a.indexOf[m] >= 0 ? 'a' : b.indexOf[m] >= 0 ? 'b' : null;
+    if (!triad) continue;
+    hexIndexOf[m] = hex.length;
+    hex.push({ triad, idx: (triad === 'a' ? a : b).indexOf[m], midi: m });
+  }
+  const ladders = { a, b, hex, hexIndexOf };
+  hexCache.set(key, ladders);
+  return ladders;
+}
+
+/** The triad whose tones the drill starts on: the first cell's (a for every preset). */
+function startLadder(def: PatternDef, ladders: Ladders): Ladder {
+  return def.source === 'triads' && def.cells[0].triad === 'b' ? ladders.b : ladders.a;
+}
+
+/** Cells that must fit for a default start: the first a cell and the first b cell. */
+function cellsToFit(def: PatternDef): number {
+  if (def.source === 'scale') return 2;
+  const firstA = def.cells.findIndex((c) => c.triad === 'a');
+  const firstB = def.cells.findIndex((c) => c.triad === 'b');
+  return Math.max(firstA, firstB) + 1;
+}
+
+function defaultStart(def: PatternDef, ladders: Ladders, spec: FilledDrillSpec, descending: boolean): number {
+  const lad = startLadder(def, ladders);
+  const need = cellsToFit(def);
+  const { low, high } = spec.range;
+  const tones = lad.midi.filter((m) => m >= low && m <= high);
+  if (descending) tones.reverse();
+  for (const start of tones) {
+    const notes = runCells(def, ladders, { start, range: spec.range, descending, maxCells: need });
+    if (notes.length > 0 && notes[notes.length - 1].cell === need - 1) return start;
+  }
+  throw new EngineError(
+    `The range ${low}-${high} is too narrow for this pattern on ${spec.pair[0]}/${spec.pair[1]}: widen it.`,
+  );
+}
+
+/** Moves a start that is not a tone of the first triad to the next one in the drill's direction. */
+function snapStart(start: number, lad: Ladder, descending: boolean): number {
+  if (!Number.isInteger(start) || start < 0 || start > 127) {
+    throw new EngineError('The start note is a MIDI note number from 0 to 127.');
+  }
+  if (lad.indexOf[start] >= 0) return start;
+  const idx = descending ? lad.below[start] : lad.above[start];
+  const m = lad.midi[idx];
+  if (m === undefined) throw new EngineError('No tone of the first triad lies that way from the start note.');
+  return m;
+}
+
+function place(raw: RawNote[], spec: FilledDrillSpec, def: PatternDef): { notes: DrillNote[]; measures: number } {
+  const perBeat = NOTES_PER_BEAT[def.subdivision];
+  const duration = 1 / perBeat;
+  const notes = raw.map((n, i) => {
+    const beat = i / perBeat;
+    return { ...n, beat, duration, ...placeBeat(beat, spec.meter) };
+  });
+  return { notes, measures: measuresFor(raw.length / perBeat, spec.meter) };
+}
+
+/**
+ * Generates a drill: the pair moved through a pattern in one direction over a range.
+ * Throws EngineError for a spec a player could have got wrong.
+ *
+ * @example
+ * generateDrill({ pair: ['F', 'Eb'], pattern: 'weave', direction: 'up', start: 65 })
+ *   .notes.slice(0, 6).map((n) => n.name) // ['F4', 'A4', 'C5', 'Eb5', 'Bb4', 'G4']
+ */
+export function generateDrill(spec: DrillSpec): Drill {
+  if (!spec || typeof spec !== 'object') throw new EngineError('A drill needs a spec.');
+  if (!Array.isArray(spec.pair) || spec.pair.length !== 2) {
+    throw new EngineError('A drill needs a pair of two triads, such as ["F", "Eb"].');
+  }
+  const pair = triadPair(spec.pair[0], spec.pair[1]);
+  const def = resolvePattern(spec.pattern);
+  checkDirection(spec.direction);
+  const instrument = resolveInstrument(spec.instrument);
+  const inst = instruments[instrument];
+  const filled: FilledDrillSpec = {
+    ...spec,
+    pair: [spec.pair[0], spec.pair[1]],
+    range: resolveRange(spec.range, inst.range),
+    start: 0,
+    instrument,
+    tempo: resolveTempo(spec.tempo),
+    meter: resolveMeter(spec.meter),
+  };
+  const ladders = laddersFor(pair, inst.transposition);
+  const descending = spec.direction === 'down';
+  const lad = startLadder(def, ladders);
+  let start: number;
+  if (spec.start === undefined) {
+    start = defaultStart(def, ladders, filled, descending);
+  } else {
+    start = snapStart(spec.start, lad, descending);
+  }
+  filled.start = start;
+  const raw = runCells(def, ladders, { start, range: filled.range, descending });
+  if (raw.length === 0) {
+    throw new EngineError(
+      `The first cell from MIDI note ${start} does not fit in the range ${filled.range.low}-${filled.range.high}.`,
+    );
+  }
+  if (spec.direction === 'up-down') {
+    let top = raw[0].midi;
+    for (const n of raw) if (n.midi > top) top = n.midi;
+    const turn = lad.indexOf[top] >= 0 ? top : lad.midi[lad.below[top]];
+    if (turn !== undefined && turn >= filled.range.low) {
+      const down = runCells(def, ladders, { start: turn, range: filled.range, descending: true });
+      const base = raw[raw.length - 1].cell + 1;
+      const lastMidi = raw[raw.length - 1].midi;
+      down.forEach((n, i) => {
+        if (i === 0 && n.midi === lastMidi) return;
+        raw.push({ ...n, cell: n.cell + base });
+      });
+    }
+  }
+  const { notes, measures } = place(raw, filled, def);
+  return { spec: filled, notes, measures };
+}

@@ -1,0 +1,68 @@
+import { Chord } from 'tonal';
+import { EngineError } from '../errors';
+import { parseTriad, QUALITY_SUFFIX } from '../theory/triads';
+import { chromaOf, rootSpelling } from '../theory/spelling';
+import type { Drill, DrillSpec, KeyOrder } from '../types';
+import { generateDrill } from './generate';
+
+const STEP: Record<KeyOrder, number> = { chromatic: 1, fourths: 5, fifths: 7 };
+
+function moveTriad(symbol: string, semitones: number): string {
+  const t = parseTriad(symbol);
+  return rootSpelling(chromaOf(t.root) + semitones) + QUALITY_SUFFIX[t.quality];
+}
+
+function moveChord(chord: string, semitones: number): string {
+  const [tonic, type, bass] = Chord.tokenize(chord);
+  if (!tonic) return chord;
+  const moved = rootSpelling(chromaOf(tonic) + semitones) + type;
+  return bass ? `${moved}/${rootSpelling(chromaOf(bass) + semitones)}` : moved;
+}
+
+/**
+ * The same drill in all 12 keys, from the spec's own: up a half step, a fourth or a fifth each
+ * time. Roots are respelled from C Db D Eb E F F# G Ab A Bb B; a given start moves with the key,
+ * then by octaves into the range (else the default start is used).
+ *
+ * @example
+ * inAllKeys({ pair: ['F', 'Eb'], pattern: 'weave', direction: 'up' }, 'fourths')
+ *   .map((d) => d.spec.pair[0]) // ['F', 'Bb', 'Eb', 'Ab', 'Db', 'F#', 'B', 'E', 'A', 'D', 'G', 'C']
+ */
+export function inAllKeys(spec: DrillSpec, order: KeyOrder = 'chromatic'): Drill[] {
+  if (!Object.hasOwn(STEP, order)) throw new EngineError('A key cycle goes chromatic, in fourths or in fifths.');
+  const first = generateDrill(spec);
+  const { range } = first.spec;
+  const drills: Drill[] = [];
+  for (let k = 0; k < 12; k++) {
+    const shift = (k * STEP[order]) % 12;
+    const moved: DrillSpec = {
+      ...spec,
+      pair: [moveTriad(spec.pair[0], shift), moveTriad(spec.pair[1], shift)],
+      chord: spec.chord === undefined ? undefined : moveChord(spec.chord, shift),
+    };
+    if (spec.chord === undefined) delete moved.chord;
+    drills.push(withMovedStart(moved, spec.start === undefined ? undefined : first.spec.start + shift, range));
+  }
+  return drills;
+}
+
+/** Tries the moved start, then the octaves nearest to it inside the range, then the default start. */
+function withMovedStart(moved: DrillSpec, start: number | undefined, range: { low: number; high: number }): Drill {
+  if (start !== undefined) {
+    const candidates: number[] = [];
+    for (let o = 0; o <= 10; o++) {
+      for (const s of o === 0 ? [start] : [start - 12 * o, start + 12 * o]) {
+        if (s >= range.low && s <= range.high) candidates.push(s);
+      }
+    }
+    for (const s of candidates) {
+      try {
+        return generateDrill({ ...moved, start: s });
+      } catch (err) {
+        if (!(err instanceof EngineError)) throw err;
+      }
+    }
+  }
+  const { start: _drop, ...rest } = moved;
+  return generateDrill(rest);
+}
