@@ -7,4 +7,4 @@ export { EngineError } from './errors';
 export * from './theory';
 export * from './patterns';
 export { instruments } from './instruments';
-// files: below
+export * from './files';

@@ -1,0 +1,3 @@
+export { drillToMidi } from './drill-midi';
+export { midiToPlayed } from './midi-to-played';
+export { drillToMusicXml } from './musicxml';
