@@ -1,0 +1,78 @@
+import { useEffect, useState } from 'react';
+import { InputPanel } from '@/components/midi/input-panel';
+import { KeyboardDiagram, type KeyMark, keyLabel } from '@/components/midi/keyboard-diagram';
+import { useNoteInput } from '@/hooks/use-note-input';
+import type { NoteEvent } from '@/lib/midi-input';
+
+const HELD: KeyMark = { className: 'fill-brass-300', label: 'held' };
+
+/** A sound check before practice: which input is live, and what arrives from it. */
+export function InputCheckRoute() {
+  const { input, status } = useNoteInput();
+  const [events, setEvents] = useState<NoteEvent[]>([]);
+  const [held, setHeld] = useState<Map<number, KeyMark>>(new Map());
+
+  useEffect(
+    () =>
+      input.onNote((e) => {
+        setEvents((prev) => [e, ...prev].slice(0, 12));
+        setHeld((prev) => {
+          const next = new Map(prev);
+          if (e.type === 'on') next.set(e.midi, HELD);
+          else next.delete(e.midi);
+          return next;
+        });
+      }),
+    [input],
+  );
+
+  return (
+    <div className="grid gap-6">
+      <header>
+        <h1 className="text-title">Input check</h1>
+        <p className="mt-1 text-muted">Play a few notes: each one should appear below with its velocity and the moment it was played.</p>
+      </header>
+      <InputPanel input={input} status={status} />
+      <div className="rounded-card border border-line bg-raised p-4">
+        <KeyboardDiagram
+          low={48}
+          high={84}
+          marks={held}
+          label="On-screen keyboard, C3 to C6"
+          onNote={(type, midi, t) => input.screenNote(type, midi, t)}
+        />
+      </div>
+      <section aria-labelledby="log-heading">
+        <h2 id="log-heading" className="text-lead font-bold">
+          Last notes
+        </h2>
+        {events.length === 0 ? (
+          <p className="mt-2 text-muted">Nothing yet.</p>
+        ) : (
+          <table className="mt-2 w-full text-left text-body" data-testid="note-log">
+            <thead className="text-caption text-muted">
+              <tr>
+                <th className="py-1">Event</th>
+                <th>Note</th>
+                <th>Velocity</th>
+                <th>Time (ms)</th>
+                <th>From</th>
+              </tr>
+            </thead>
+            <tbody>
+              {events.map((e, i) => (
+                <tr key={`${e.timeStamp}-${i}`} className="border-t border-line" data-midi={e.midi} data-type={e.type} data-time={e.timeStamp} data-source={e.source}>
+                  <td className="py-1">{e.type === 'on' ? 'on' : 'off'}</td>
+                  <td>{keyLabel(e.midi)}</td>
+                  <td>{e.velocity}</td>
+                  <td>{e.timeStamp.toFixed(1)}</td>
+                  <td>{e.source === 'midi' ? 'MIDI' : e.source === 'screen' ? 'screen' : 'computer keys'}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        )}
+      </section>
+    </div>
+  );
+}

@@ -1,0 +1,110 @@
+import { memo, type PointerEvent } from 'react';
+
+const BLACK = new Set([1, 3, 6, 8, 10]);
+const NAMES = ['C', 'C#', 'D', 'D#', 'E', 'F', 'F#', 'G', 'G#', 'A', 'A#', 'B'];
+
+export const isBlackKey = (midi: number) => BLACK.has(((midi % 12) + 12) % 12);
+export const keyLabel = (midi: number) => `${NAMES[((midi % 12) + 12) % 12]}${Math.floor(midi / 12) - 1}`;
+
+/** A mark on one key: a colour class for the fill and a word for screen readers. */
+export interface KeyMark {
+  className: string;
+  label: string;
+}
+
+interface Props {
+  low: number;
+  high: number;
+  /** concert MIDI -> mark */
+  marks?: Map<number, KeyMark>;
+  /** keys outside this range are drawn dimmed (an instrument's reach) */
+  reach?: { low: number; high: number };
+  onNote?: (type: 'on' | 'off', midi: number, timeStamp: number) => void;
+  label: string;
+  height?: number;
+}
+
+/**
+ * A keyboard drawn from `low` to `high`: a range diagram when given marks, an instrument when
+ * given `onNote` (pointer down plays, up releases).
+ */
+export const KeyboardDiagram = memo(function KeyboardDiagram({ low, high, marks, reach, onNote, label, height = 90 }: Props) {
+  const whites: number[] = [];
+  for (let m = low; m <= high; m++) if (!isBlackKey(m)) whites.push(m);
+  const w = 20;
+  const width = whites.length * w;
+  const whiteX = new Map(whites.map((m, i) => [m, i * w]));
+  const blacks: Array<{ midi: number; x: number }> = [];
+  for (let m = low; m <= high; m++) {
+    if (!isBlackKey(m)) continue;
+    const left = whiteX.get(m - 1);
+    if (left !== undefined) blacks.push({ midi: m, x: left + w * 0.68 });
+  }
+  const outside = (m: number) => (reach ? m < reach.low || m > reach.high : false);
+  const handlers = (midi: number) =>
+    onNote
+      ? {
+          onPointerDown: (e: PointerEvent) => {
+            (e.target as Element).setPointerCapture?.(e.pointerId);
+            onNote('on', midi, e.timeStamp);
+          },
+          onPointerUp: (e: PointerEvent) => onNote('off', midi, e.timeStamp),
+          role: 'button',
+          tabIndex: -1,
+        }
+      : {};
+  return (
+    <svg
+      viewBox={`0 0 ${width} ${height}`}
+      className="h-auto w-full touch-none select-none"
+      role={onNote ? 'group' : 'img'}
+      aria-label={label}
+      preserveAspectRatio="xMidYMid meet"
+    >
+      {whites.map((m) => {
+        const mark = marks?.get(m);
+        return (
+          <rect
+            key={m}
+            x={whiteX.get(m)}
+            y={0}
+            width={w - 1}
+            height={height}
+            rx={3}
+            data-midi={m}
+            className={`${mark ? mark.className : outside(m) ? 'fill-line' : 'fill-white'} stroke-ink-300`}
+            aria-label={mark ? `${keyLabel(m)}: ${mark.label}` : undefined}
+            {...handlers(m)}
+          >
+            {mark ? <title>{`${keyLabel(m)}: ${mark.label}`}</title> : null}
+          </rect>
+        );
+      })}
+      {blacks.map(({ midi, x }) => {
+        const mark = marks?.get(midi);
+        return (
+          <rect
+            key={midi}
+            x={x}
+            y={0}
+            width={w * 0.64}
+            height={height * 0.6}
+            rx={2}
+            data-midi={midi}
+            className={`${mark ? mark.className : outside(midi) ? 'fill-ink-300' : 'fill-ink-900'} stroke-ink-900`}
+            {...handlers(midi)}
+          >
+            {mark ? <title>{`${keyLabel(midi)}: ${mark.label}`}</title> : null}
+          </rect>
+        );
+      })}
+      {whites
+        .filter((m) => m % 12 === 0)
+        .map((m) => (
+          <text key={`c${m}`} x={(whiteX.get(m) ?? 0) + w / 2} y={height - 6} textAnchor="middle" className="pointer-events-none fill-ink-500 text-[9px]">
+            {keyLabel(m)}
+          </text>
+        ))}
+    </svg>
+  );
+});
