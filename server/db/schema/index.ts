@@ -1,2 +1,7 @@
 // Every table, one file per entity; drizzle-kit reads this file.
+export * from './dev-outbox';
+export * from './password-resets';
 export * from './session';
+export * from './sign-in-failures';
+export * from './studios';
+export * from './users';
