@@ -5,3 +5,4 @@ export * from './session';
 export * from './sign-in-failures';
 export * from './studios';
 export * from './users';
+export * from './takes';
