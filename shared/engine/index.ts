@@ -8,3 +8,4 @@ export * from './theory';
 export * from './patterns';
 export { instruments } from './instruments';
 export * from './files';
+export * from './scoring';
