@@ -6,3 +6,5 @@ export * from './sign-in-failures';
 export * from './studios';
 export * from './users';
 export * from './takes';
+export * from './saved-drills';
+export * from './custom-patterns';

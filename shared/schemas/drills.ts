@@ -1,0 +1,223 @@
+import { Chord } from 'tonal';
+import { z } from 'zod';
+import { EngineError, generateDrill, instruments, PRESET_IDS, triadPair } from '../engine';
+import type { Drill, DrillSpec as EngineDrillSpec, InstrumentId, PatternId as EnginePatternId } from '../engine';
+
+/**
+ * The drill contracts used by the browser and the API alike: a DrillSpec and a PatternDef as
+ * the engine reads them, every field checked with a message a player can act on.
+ */
+
+const SUBDIVISION = z.enum(['eighth', 'triplet', 'sixteenth'], { error: 'Choose eighths, triplets or sixteenths' });
+
+export const TriadCell = z.object({
+  triad: z.enum(['a', 'b'], { error: 'A cell plays triad a or triad b' }),
+  notes: z.union([z.literal(3), z.literal(4)], { error: 'A cell holds 3 or 4 notes' }),
+  shape: z.enum(['line', 'leap'], { error: 'A cell moves as a line or a leap' }),
+  motion: z.enum(['up', 'down'], { error: 'A cell moves up or down' }),
+  entry: z.enum(['start', 'above', 'below', 'same-position', 'next-position'], {
+    error: 'A cell enters at the start, above, below, at the same position or at the next position',
+  }),
+});
+export type TriadCell = z.infer<typeof TriadCell>;
+
+const PatternName = z
+  .string({ error: 'Name the pattern' })
+  .trim()
+  .min(1, { error: 'Name the pattern' })
+  .max(60, { error: 'Keep the name under 60 characters' });
+
+export const TriadPatternDef = z.object({
+  name: PatternName,
+  subdivision: SUBDIVISION,
+  source: z.literal('triads'),
+  cells: z.array(TriadCell).min(1, { error: 'A pattern needs at least one cell' }).max(32, { error: 'A pattern holds at most 32 cells' }),
+});
+
+export const ScalePatternDef = z.object({
+  name: PatternName,
+  subdivision: SUBDIVISION,
+  source: z.literal('scale'),
+  degrees: z
+    .array(z.number().int({ error: 'Degrees are whole numbers' }).min(-48).max(48), { error: 'List the degrees as numbers' })
+    .min(1, { error: 'A scale pattern needs at least one degree' })
+    .max(64, { error: 'A scale pattern holds at most 64 notes per cell' }),
+  step: z.number({ error: 'The step is a whole number' }).int({ error: 'The step is a whole number' }).min(-24).max(24),
+});
+
+export const PatternDef = z.discriminatedUnion('source', [TriadPatternDef, ScalePatternDef], {
+  error: 'A pattern is built from the triads or from the six-note scale',
+});
+export type PatternDef = z.infer<typeof PatternDef>;
+
+export const PatternId = z.enum(PRESET_IDS as [EnginePatternId, ...EnginePatternId[]], { error: 'There is no preset pattern by that name' });
+
+const INSTRUMENT_IDS = Object.keys(instruments) as [InstrumentId, ...InstrumentId[]];
+export const InstrumentIdSchema = z.enum(INSTRUMENT_IDS, { error: 'Sixfold has no such instrument' });
+
+/** The meters ENGINE.md allows. */
+export const METERS = [
+  [4, 4],
+  [3, 4],
+  [5, 4],
+  [6, 8],
+  [7, 8],
+] as const satisfies ReadonlyArray<readonly [number, number]>;
+
+const Midi = z.number({ error: 'A MIDI note number' }).int({ error: 'A whole MIDI note number' }).min(0, { error: 'At least 0' }).max(127, { error: 'At most 127' });
+
+/** Spells a chord symbol the way tonal reads it ("Cm(maj7)" -> "CmMaj7", "C7(b9)" -> "C7b9"). */
+function tonalChordSymbol(symbol: string): string {
+  return symbol.trim().replace(/m\(maj7\)|m\(M7\)|-\(maj7\)/, 'mMaj7').replace(/\(([^)]*)\)/g, '$1');
+}
+
+/**
+ * The chord's tones as pitch classes, root first; empty when the symbol is not a chord.
+ *
+ * @example
+ * chordTones('D7') // ['D', 'F#', 'A', 'C']
+ */
+export function chordTones(symbol: string): string[] {
+  return Chord.get(tonalChordSymbol(symbol)).notes;
+}
+
+const TriadSymbol = z
+  .string({ error: 'Name a triad, such as F, Fm, Fdim or Faug' })
+  .trim()
+  .min(1, { error: 'Name a triad, such as F, Fm, Fdim or Faug' })
+  .max(12, { error: 'That is not a triad symbol' });
+
+export const DrillSpec = z.object({
+  pair: z.tuple([TriadSymbol, TriadSymbol], { error: 'A pair is two triad symbols, such as ["D", "C"]' }),
+  pattern: z.union([PatternId, PatternDef], { error: 'Choose a preset pattern or define one' }),
+  direction: z.enum(['up', 'down', 'up-down'], { error: 'A drill goes up, down or up-down' }),
+  range: z
+    .object({ low: Midi, high: Midi })
+    .refine((r) => r.low <= r.high, { error: 'The low note must not be above the high note', path: ['low'] })
+    .optional(),
+  start: Midi.optional(),
+  instrument: InstrumentIdSchema.optional(),
+  tempo: z
+    .number({ error: 'The tempo is a number of beats per minute' })
+    .min(20, { error: 'The tempo is at least 20' })
+    .max(400, { error: 'The tempo is at most 400' })
+    .optional(),
+  meter: z
+    .tuple([z.number().int(), z.number().int()], { error: 'A meter is two numbers, such as [4, 4]' })
+    .refine((m) => METERS.some(([n, d]) => n === m[0] && d === m[1]), { error: 'Choose 4/4, 3/4, 5/4, 6/8 or 7/8' })
+    .optional(),
+  chord: z
+    .string()
+    .trim()
+    .max(24, { error: 'That chord symbol is too long' })
+    .refine((c) => chordTones(c).length > 0, { error: 'That is not a chord symbol Sixfold can read (try D7, Bbm7, Cmaj7#11)' })
+    .optional(),
+});
+export type DrillSpec = z.infer<typeof DrillSpec>;
+/** The same schema under the name request bodies use (takes carry the spec they were played from). */
+export const DrillSpecInput = DrillSpec;
+export type DrillSpecInput = DrillSpec;
+
+export const KeyOrder = z.enum(['chromatic', 'fourths', 'fifths'], { error: 'A key cycle goes chromatic, in fourths or in fifths' });
+export type KeyOrder = z.infer<typeof KeyOrder>;
+
+/** Field name -> messages, as the API's 400 answers carry them. */
+export type FieldErrors = Record<string, string[]>;
+
+export type DrillResult = { ok: true; drill: Drill } | { ok: false; fields: FieldErrors; message: string };
+
+/**
+ * Generates the drill for a checked spec, or says which field makes it impossible: the pair
+ * (unknown triad, or a shared note), the start (its first cell does not fit) or the range.
+ * The browser and `GET /api/drills/preview` both call this, so they agree on the drill.
+ *
+ * @example
+ * generateChecked({ pair: ['D', 'Dm'], pattern: 'weave', direction: 'up' })
+ * // { ok: false, fields: { pair: ['D and Dm share ...'] }, ... }
+ */
+export function generateChecked(spec: DrillSpec): DrillResult {
+  const fail = (field: string, err: EngineError): DrillResult => ({ ok: false, fields: { [field]: [err.message] }, message: err.message });
+  try {
+    triadPair(spec.pair[0], spec.pair[1]);
+  } catch (err) {
+    if (err instanceof EngineError) return fail('pair', err);
+    throw err;
+  }
+  const engineSpec = spec as EngineDrillSpec;
+  try {
+    return { ok: true, drill: generateDrill(engineSpec) };
+  } catch (err) {
+    if (!(err instanceof EngineError)) throw err;
+    if (spec.start === undefined) return fail('range', err);
+    // A given start is to blame when the same drill works from the default start.
+    const { start: _start, ...rest } = engineSpec;
+    try {
+      generateDrill(rest);
+      return fail('start', err);
+    } catch {
+      return fail('range', err);
+    }
+  }
+}
+
+/** `GET /api/drills/preview?spec=<URL-encoded DrillSpec JSON>` */
+export const PreviewQuery = z.object({
+  spec: z.string({ error: 'Send the drill spec as JSON in ?spec=' }).min(2, { error: 'Send the drill spec as JSON in ?spec=' }).max(8000, { error: 'The spec is too long' }),
+});
+export type PreviewQuery = z.infer<typeof PreviewQuery>;
+export const PreviewResponse = z.object({ drill: z.custom<Drill>() });
+export type PreviewResponse = z.infer<typeof PreviewResponse>;
+
+/* ---------- saved drills and custom patterns ---------- */
+
+const SavedName = z
+  .string({ error: 'Name it' })
+  .trim()
+  .min(1, { error: 'Name it' })
+  .max(80, { error: 'Keep the name under 80 characters' });
+
+export const SavedDrill = z.object({
+  id: z.string(),
+  name: z.string(),
+  spec: DrillSpec,
+  keyOrder: KeyOrder.nullable(),
+  owner: z.object({ id: z.string(), name: z.string(), role: z.string() }),
+  mine: z.boolean(),
+  createdAt: z.string(),
+  updatedAt: z.string(),
+});
+export type SavedDrill = z.infer<typeof SavedDrill>;
+
+export const CreateSavedDrillInput = z.object({ name: SavedName, spec: DrillSpec, keyOrder: KeyOrder.nullable().optional() });
+export type CreateSavedDrillInput = z.infer<typeof CreateSavedDrillInput>;
+
+export const UpdateSavedDrillInput = CreateSavedDrillInput.partial().refine((v) => Object.keys(v).length > 0, { error: 'Send at least one of name, spec, keyOrder' });
+export type UpdateSavedDrillInput = z.infer<typeof UpdateSavedDrillInput>;
+
+export const SavedDrillResponse = z.object({ drill: SavedDrill });
+export type SavedDrillResponse = z.infer<typeof SavedDrillResponse>;
+export const SavedDrillsResponse = z.object({ drills: z.array(SavedDrill) });
+export type SavedDrillsResponse = z.infer<typeof SavedDrillsResponse>;
+
+export const CustomPattern = z.object({
+  id: z.string(),
+  name: z.string(),
+  def: PatternDef,
+  owner: z.object({ id: z.string(), name: z.string(), role: z.string() }),
+  mine: z.boolean(),
+  createdAt: z.string(),
+  updatedAt: z.string(),
+});
+export type CustomPattern = z.infer<typeof CustomPattern>;
+
+export const CreateCustomPatternInput = z.object({ name: SavedName, def: PatternDef });
+export type CreateCustomPatternInput = z.infer<typeof CreateCustomPatternInput>;
+export const UpdateCustomPatternInput = CreateCustomPatternInput.partial().refine((v) => Object.keys(v).length > 0, { error: 'Send a name or a def' });
+export type UpdateCustomPatternInput = z.infer<typeof UpdateCustomPatternInput>;
+
+export const CustomPatternResponse = z.object({ pattern: CustomPattern });
+export type CustomPatternResponse = z.infer<typeof CustomPatternResponse>;
+export const CustomPatternsResponse = z.object({ patterns: z.array(CustomPattern) });
+export type CustomPatternsResponse = z.infer<typeof CustomPatternsResponse>;
+
+export const IdParams = z.object({ id: z.string().max(64) });
