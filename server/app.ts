@@ -1,52 +1,51 @@
 import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import connectPgSimple from 'connect-pg-simple';
 import express from 'express';
-import session from 'express-session';
 import type pg from 'pg';
 import type { Db } from './db/client';
 import type { Env } from './env';
+import { type Mailer, mailerFromEnv } from './mail/mailer';
+import { loadUser } from './middleware/auth';
+import { requireCsrf } from './middleware/csrf';
 import { errorHandler, notFoundApi } from './middleware/error-handler';
+import { sessionMiddleware } from './middleware/session';
+import { adminRouter } from './routes/admin';
+import { authRouter } from './routes/auth';
+import { devRouter } from './routes/dev';
 import { healthRouter } from './routes/health';
+import { studiosRouter } from './routes/studios';
 
 export interface AppDeps {
   db: Db;
   pool: pg.Pool;
   env: Env;
+  /** defaults to SMTP as the environment says */
+  mailer?: Mailer;
 }
+
+export type AppContext = AppDeps & { mailer: Mailer };
 
 const clientDir = fileURLToPath(new URL('../dist/client', import.meta.url));
 
 /** The Express app: API under /api, the built client for everything else. */
 export function createApp(deps: AppDeps) {
-  const { env, pool } = deps;
+  const ctx: AppContext = { ...deps, mailer: deps.mailer ?? mailerFromEnv(deps.env) };
+  const { env, pool, db } = ctx;
   const app = express();
   app.disable('x-powered-by');
   if (env.TRUST_PROXY === '1') app.set('trust proxy', 1);
 
-  const PgStore = connectPgSimple(session);
-  app.use(
-    '/api',
-    session({
-      store: new PgStore({ pool, tableName: 'session', createTableIfMissing: false }),
-      name: 'sixfold.sid',
-      secret: env.SESSION_SECRET,
-      resave: false,
-      saveUninitialized: false,
-      rolling: true,
-      cookie: {
-        httpOnly: true,
-        sameSite: 'lax',
-        // Secure whenever the request came over HTTPS (directly or through a trusted proxy).
-        secure: 'auto',
-        maxAge: 1000 * 60 * 60 * 24 * 14,
-      },
-    }),
-  );
+  app.use('/api', sessionMiddleware(env, pool));
   app.use('/api', express.json({ limit: '2mb' }));
+  app.use('/api', requireCsrf);
+  app.use('/api', loadUser(db));
 
-  app.use('/api/health', healthRouter(deps));
+  app.use('/api/health', healthRouter(ctx));
+  app.use('/api/auth', authRouter(ctx));
+  app.use('/api/admin', adminRouter(ctx));
+  app.use('/api/studios', studiosRouter(ctx));
+  if (env.NODE_ENV !== 'production') app.use('/api/dev', devRouter(ctx));
   app.use('/api', notFoundApi);
 
   if (existsSync(clientDir)) {

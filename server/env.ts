@@ -13,6 +13,15 @@ const EnvSchema = z
     PUBLIC_URL: z.url('PUBLIC_URL must be a full URL such as https://sixfold.example').optional(),
     SEED_DEMO: z.enum(['0', '1']).default('0'),
     TRUST_PROXY: z.enum(['0', '1']).default('0'),
+    // Mail: in development and test the server runs its own fake SMTP server on this port.
+    SMTP_HOST: z.string().min(1).default('127.0.0.1'),
+    SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(2525),
+    SMTP_SECURE: z.enum(['0', '1']).default('0'),
+    SMTP_USER: z.string().min(1).optional(),
+    SMTP_PASS: z.string().min(1).optional(),
+    MAIL_FROM: z.string().min(3).default('Sixfold <desk@sixfold.test>'),
+    // Failed sign-ins from one IP within a minute before a 429; tests raise it, since they all come from 127.0.0.1.
+    SIGN_IN_IP_LIMIT: z.coerce.number().int().min(1).default(5),
   })
   .superRefine((env, ctx) => {
     if (env.NODE_ENV === 'production' && !env.SESSION_SECRET) {

@@ -2,10 +2,27 @@ import { createApp } from './app';
 import { createDb } from './db/client';
 import { runMigrations } from './db/migrate';
 import { seedDemo } from './db/seed';
-import { EnvError, parseEnv } from './env';
+import { type Env, EnvError, parseEnv } from './env';
+import { type FakeSmtp, startFakeSmtp } from './mail/fake-smtp';
+
+/** Outside production the server runs its own fake SMTP server; another instance's is reused. */
+async function startMailFake(env: Env, db: ReturnType<typeof createDb>['db']): Promise<FakeSmtp | null> {
+  if (env.NODE_ENV === 'production') return null;
+  try {
+    const fake = await startFakeSmtp({ db, port: env.SMTP_PORT, host: env.SMTP_HOST });
+    console.log(`Mail goes to a local fake SMTP server on ${env.SMTP_HOST}:${fake.port}; admins read it at /api/dev/outbox`);
+    return fake;
+  } catch (err) {
+    if ((err as NodeJS.ErrnoException).code === 'EADDRINUSE') {
+      console.log(`Port ${env.SMTP_PORT} is taken (another Sixfold's fake SMTP server?); sending mail there`);
+      return null;
+    }
+    throw err;
+  }
+}
 
 async function main() {
-  let env: ReturnType<typeof parseEnv>;
+  let env: Env;
   try {
     env = parseEnv();
   } catch (err) {
@@ -18,6 +35,10 @@ async function main() {
   const { db, pool } = createDb(env.DATABASE_URL);
   await runMigrations(db);
   if (env.SEED_DEMO === '1') await seedDemo(db);
+  const fake = await startMailFake(env, db);
+  if (env.NODE_ENV === 'production' && !env.PUBLIC_URL) {
+    console.warn('PUBLIC_URL is not set: password-reset e-mails will not be sent until it is');
+  }
 
   const app = createApp({ db, pool, env });
   const server = app.listen(env.PORT, env.HOST, () => {
@@ -29,7 +50,7 @@ async function main() {
   });
   const shutdown = () => {
     server.close();
-    pool.end().finally(() => process.exit(0));
+    Promise.allSettled([fake?.close()]).finally(() => pool.end().finally(() => process.exit(0)));
   };
   process.on('SIGINT', shutdown);
   process.on('SIGTERM', shutdown);

@@ -1,0 +1,44 @@
+import type { RequestHandler } from 'express';
+import type { Role, User } from '../../shared/schemas/auth';
+import type { Db } from '../db/client';
+import { forbidden, unauthenticated } from '../errors';
+import { getSessionUser } from '../services/auth/get-session-user';
+
+declare module 'express-serve-static-core' {
+  interface Request {
+    /** the signed-in user, set by loadUser when the session has one that still works */
+    user?: User;
+  }
+}
+
+/**
+ * Looks up the session's user on every API request (a primary-key read), so an account that
+ * was switched off or removed stops working at once: the session forgets it.
+ */
+export function loadUser(db: Db): RequestHandler {
+  return async (req, _res, next) => {
+    const id = req.session?.userId;
+    if (!id) return next();
+    const user = await getSessionUser(db, id);
+    if (user) {
+      req.user = user;
+      return next();
+    }
+    delete req.session.userId;
+    next();
+  };
+}
+
+/** Signed out -> 401. */
+export const requireUser: RequestHandler = (req, _res, next) => {
+  next(req.user ? undefined : unauthenticated());
+};
+
+/** Signed out -> 401; a role that may never use the route -> 403. */
+export function requireRole(...roles: Role[]): RequestHandler {
+  return (req, _res, next) => {
+    if (!req.user) return next(unauthenticated());
+    if (!roles.includes(req.user.role)) return next(forbidden(`This is for ${roles.map((r) => `${r}s`).join(' and ')} only`));
+    next();
+  };
+}

@@ -1,0 +1,17 @@
+import { Router } from 'express';
+import { OutboxQuery } from '../../shared/schemas/dev';
+import type { AppDeps } from '../app';
+import { requireRole } from '../middleware/auth';
+import { parseQuery } from '../middleware/validate';
+import { listOutbox } from '../services/dev/list-outbox';
+
+/** Development and test only (never mounted in production): what the fake SMTP server received. */
+export function devRouter({ db }: AppDeps) {
+  const router = Router();
+  router.use(requireRole('admin'));
+  router.get('/outbox', async (req, res) => {
+    const { to } = parseQuery(OutboxQuery, req);
+    res.json({ messages: await listOutbox(db, { to }) });
+  });
+  return router;
+}
