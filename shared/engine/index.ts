@@ -9,3 +9,4 @@ export * from './patterns';
 export { instruments } from './instruments';
 export * from './files';
 export * from './scoring';
+export { takeToMidi } from './files/take-midi';
