@@ -13,7 +13,9 @@ import { sessionMiddleware } from './middleware/session';
 import { adminRouter } from './routes/admin';
 import { authRouter } from './routes/auth';
 import { devRouter } from './routes/dev';
+import { drillsRouter } from './routes/drills';
 import { healthRouter } from './routes/health';
+import { patternsRouter } from './routes/patterns';
 import { studiosRouter } from './routes/studios';
 
 export interface AppDeps {
@@ -45,6 +47,8 @@ export function createApp(deps: AppDeps) {
   app.use('/api/auth', authRouter(ctx));
   app.use('/api/admin', adminRouter(ctx));
   app.use('/api/studios', studiosRouter(ctx));
+  app.use('/api/drills', drillsRouter(ctx));
+  app.use('/api/patterns', patternsRouter(ctx));
   if (env.NODE_ENV !== 'production') app.use('/api/dev', devRouter(ctx));
   app.use('/api', notFoundApi);
 

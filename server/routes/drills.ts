@@ -1,0 +1,38 @@
+import { Router } from 'express';
+import { CreateSavedDrillInput, IdParams, PreviewQuery, UpdateSavedDrillInput } from '../../shared/schemas/drills';
+import type { AppDeps } from '../app';
+import { requireUser } from '../middleware/auth';
+import { parseBody, parseParams, parseQuery } from '../middleware/validate';
+import { createSavedDrill } from '../services/drills/create';
+import { deleteSavedDrill } from '../services/drills/delete';
+import { getSavedDrill } from '../services/drills/get';
+import { listSavedDrills } from '../services/drills/list';
+import { previewDrill } from '../services/drills/preview';
+import { updateSavedDrill } from '../services/drills/update';
+
+/** The drill preview (public: pure computation) and the signed-in user's saved drills. */
+export function drillsRouter({ db }: AppDeps) {
+  const router = Router();
+  router.get('/preview', (req, res) => {
+    res.json({ drill: previewDrill(parseQuery(PreviewQuery, req)) });
+  });
+  router.use(requireUser);
+  router.get('/', async (req, res) => {
+    res.json({ drills: await listSavedDrills(db, req.user!) });
+  });
+  router.post('/', async (req, res) => {
+    res.status(201).json({ drill: await createSavedDrill(db, req.user!, parseBody(CreateSavedDrillInput, req)) });
+  });
+  router.get('/:id', async (req, res) => {
+    res.json({ drill: await getSavedDrill(db, req.user!, parseParams(IdParams, req).id) });
+  });
+  router.patch('/:id', async (req, res) => {
+    const { id } = parseParams(IdParams, req);
+    res.json({ drill: await updateSavedDrill(db, req.user!, id, parseBody(UpdateSavedDrillInput, req)) });
+  });
+  router.delete('/:id', async (req, res) => {
+    await deleteSavedDrill(db, req.user!, parseParams(IdParams, req).id);
+    res.status(204).end();
+  });
+  return router;
+}

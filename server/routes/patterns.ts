@@ -1,0 +1,34 @@
+import { Router } from 'express';
+import { CreateCustomPatternInput, IdParams, UpdateCustomPatternInput } from '../../shared/schemas/drills';
+import type { AppDeps } from '../app';
+import { requireUser } from '../middleware/auth';
+import { parseBody, parseParams } from '../middleware/validate';
+import { createCustomPattern } from '../services/patterns/create';
+import { deleteCustomPattern } from '../services/patterns/delete';
+import { getCustomPattern } from '../services/patterns/get';
+import { listCustomPatterns } from '../services/patterns/list';
+import { updateCustomPattern } from '../services/patterns/update';
+
+/** The signed-in user's custom patterns (and their studios' teachers', to read). */
+export function patternsRouter({ db }: AppDeps) {
+  const router = Router();
+  router.use(requireUser);
+  router.get('/', async (req, res) => {
+    res.json({ patterns: await listCustomPatterns(db, req.user!) });
+  });
+  router.post('/', async (req, res) => {
+    res.status(201).json({ pattern: await createCustomPattern(db, req.user!, parseBody(CreateCustomPatternInput, req)) });
+  });
+  router.get('/:id', async (req, res) => {
+    res.json({ pattern: await getCustomPattern(db, req.user!, parseParams(IdParams, req).id) });
+  });
+  router.patch('/:id', async (req, res) => {
+    const { id } = parseParams(IdParams, req);
+    res.json({ pattern: await updateCustomPattern(db, req.user!, id, parseBody(UpdateCustomPatternInput, req)) });
+  });
+  router.delete('/:id', async (req, res) => {
+    await deleteCustomPattern(db, req.user!, parseParams(IdParams, req).id);
+    res.status(204).end();
+  });
+  return router;
+}
