@@ -1,0 +1,80 @@
+import type { Drill } from '@shared/engine';
+import { chordTones } from '@shared/schemas/drills';
+import { Note } from 'tonal';
+
+/** One sound to make, in seconds from the start of playback (the count-in included). */
+export type AudioEvent =
+  | { kind: 'note'; time: number; duration: number; midi: number; velocity: number; index: number }
+  | { kind: 'click'; time: number; accent: boolean; countIn: boolean }
+  | { kind: 'pad'; time: number; duration: number; midis: number[] };
+
+export interface ScheduleOptions {
+  /** a click on every beat of the meter (default on) */
+  click?: boolean;
+  /** the spec's chord held under each measure (default off; nothing when the drill has no chord) */
+  pad?: boolean;
+  /** measures of clicks before the first downbeat (default 1) */
+  countInMeasures?: number;
+}
+
+export interface Schedule {
+  events: AudioEvent[];
+  /** where the drill's first downbeat falls */
+  downbeat: number;
+  /** the end of the last measure */
+  end: number;
+}
+
+/** The chord's tones voiced upward from the C below middle C, for a pad that sits under the drill. */
+export function padVoicing(chord: string): number[] {
+  const out: number[] = [];
+  let last = 47;
+  for (const pc of chordTones(chord)) {
+    const chroma = Note.chroma(pc);
+    if (chroma === undefined || Number.isNaN(chroma)) continue;
+    let m = 48 + chroma;
+    while (m <= last) m += 12;
+    out.push(m);
+    last = m;
+  }
+  return out;
+}
+
+/**
+ * Turns a drill into timed sounds: each note at beat x 60 / tempo seconds after the downbeat,
+ * a click on each beat of the meter (accented on the measure's first), a count-in before it,
+ * and the chord pad once per measure. Pure, so tests read it without any audio hardware.
+ *
+ * @example
+ * scheduleDrill(drill, { countInMeasures: 0 }).events.find((e) => e.kind === 'note')?.time // 0
+ */
+export function scheduleDrill(drill: Drill, opts: ScheduleOptions = {}): Schedule {
+  const { tempo, meter, chord } = drill.spec;
+  const click = opts.click ?? true;
+  const countIn = Math.max(0, Math.floor(opts.countInMeasures ?? 1));
+  const secPerQuarter = 60 / tempo;
+  const beatUnit = 4 / meter[1]; // the meter's beat, in quarter notes
+  const measureQuarters = meter[0] * beatUnit;
+  const downbeat = countIn * measureQuarters * secPerQuarter;
+  const end = downbeat + drill.measures * measureQuarters * secPerQuarter;
+  const events: AudioEvent[] = [];
+
+  const clicks = click ? countIn + drill.measures : countIn;
+  for (let m = 0; m < clicks; m++) {
+    for (let b = 0; b < meter[0]; b++) {
+      const time = (m * measureQuarters + b * beatUnit) * secPerQuarter;
+      events.push({ kind: 'click', time, accent: b === 0, countIn: m < countIn });
+    }
+  }
+  const voicing = opts.pad && chord ? padVoicing(chord) : [];
+  if (voicing.length > 0) {
+    for (let m = 0; m < drill.measures; m++) {
+      events.push({ kind: 'pad', time: downbeat + m * measureQuarters * secPerQuarter, duration: measureQuarters * secPerQuarter * 0.95, midis: voicing });
+    }
+  }
+  drill.notes.forEach((n, index) => {
+    events.push({ kind: 'note', time: downbeat + n.beat * secPerQuarter, duration: n.duration * secPerQuarter * 0.85, midi: n.midi, velocity: 96, index });
+  });
+  events.sort((x, y) => x.time - y.time);
+  return { events, downbeat, end };
+}
