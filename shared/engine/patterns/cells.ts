@@ -1,13 +1,11 @@
-import type { MidiRange, PatternDef, TriadCellDef } from '../types';
+import type { DrillNote, MidiRange, PatternDef, TriadCellDef } from '../types';
 import type { Ladder } from './ladder';
 
-/** A generated note before it is placed in time. */
-export interface RawNote {
-  midi: number;
-  name: string;
-  written: string;
-  source: 'a' | 'b' | 'scale';
-  cell: number;
+/** A generated note before it is placed in time (its time fields are filled in later). */
+export type RawNote = DrillNote;
+
+function rawNote(midi: number, name: string, written: string, source: RawNote['source'], cell: number): RawNote {
+  return { midi, name, written, beat: 0, duration: 0, measure: 0, beatInMeasure: 0, source, cell };
 }
 
 export interface Ladders {
@@ -30,10 +28,12 @@ export interface Run {
   descending: boolean;
   /** stop after this many cells (used to test a start) */
   maxCells?: number;
+  /** a shipped preset: it always moves, so the repeat check is skipped */
+  trusted?: boolean;
 }
 
 function pushNote(out: RawNote[], lad: Ladder, idx: number, source: RawNote['source'], cell: number): void {
-  out.push({ midi: lad.midi[idx], name: lad.name[idx], written: lad.written[idx], source, cell });
+  out.push(rawNote(lad.midi[idx], lad.name[idx], lad.written[idx], source, cell));
 }
 
 /**
@@ -54,7 +54,7 @@ export function runTriadCells(cells: TriadCellDef[], ladders: Ladders, run: Run)
   for (let k = 0; ; k++) {
     if (run.maxCells !== undefined && k >= run.maxCells) break;
     const ci = k % cells.length;
-    if (ci === 0 && k > 0) {
+    if (ci === 0 && k > 0 && !run.trusted) {
       // A cycle that repeats notes already played, or a state already met, never moves on.
       const cycle = out.slice(cycleStart).map((n) => n.midi).join(',');
       const state = `${last}|${prevEntry.a}|${prevEntry.b}|${lastEntryMidi}|${lastEntryPos}`;
@@ -138,7 +138,7 @@ export function runScaleCells(def: Extract<PatternDef, { source: 'scale' }>, lad
         break;
       }
       const lad = ladders[h.triad];
-      out.push({ midi: h.midi, name: lad.name[h.idx], written: lad.written[h.idx], source: 'scale', cell: c });
+      out.push(rawNote(h.midi, lad.name[h.idx], lad.written[h.idx], 'scale', c));
     }
     if (!fits) {
       out.length = cellStart;

@@ -1,6 +1,6 @@
 import { EngineError } from '../errors';
 import { instruments } from '../instruments';
-import { triadPair } from '../theory/pairs';
+import { pairOf } from '../theory/pairs';
 import type { Drill, DrillNote, DrillSpec, FilledDrillSpec, PatternDef, TriadPair } from '../types';
 import { type Ladders, type RawNote, runCells } from './cells';
 import { type Ladder, ladderOf } from './ladder';
@@ -12,7 +12,7 @@ import {
   resolveRange,
   resolveTempo,
 } from './spec';
-import { NOTES_PER_BEAT, measuresFor, placeBeat } from './timing';
+import { NOTES_PER_BEAT, measuresFor, placeBeat, tidy } from './timing';
 
 const hexCache = new Map<string, Ladders>();
 
@@ -41,7 +41,7 @@ function startLadder(def: PatternDef, ladders: Ladders): Ladder {
 }
 
 /** Cells that must fit for a default start: the first a cell and the first b cell. */
-function cellsToFit(def: PatternDef): number {
+export function cellsToFit(def: PatternDef): number {
   if (def.source === 'scale') return 2;
   const firstA = def.cells.findIndex((c) => c.triad === 'a');
   const firstB = def.cells.findIndex((c) => c.triad === 'b');
@@ -75,14 +75,30 @@ function snapStart(start: number, lad: Ladder, descending: boolean): number {
   return m;
 }
 
+/** Places the notes one subdivision apart from beat 0 (in place: they are fresh objects). */
 function place(raw: RawNote[], spec: FilledDrillSpec, def: PatternDef): { notes: DrillNote[]; measures: number } {
   const perBeat = NOTES_PER_BEAT[def.subdivision];
   const duration = 1 / perBeat;
-  const notes = raw.map((n, i) => {
+  const [num, den] = spec.meter;
+  // whole notes per measure, in subdivisions, when that is a whole number (it nearly always is)
+  const perMeasure = (num * 4 * perBeat) / den;
+  const whole = Number.isInteger(perMeasure);
+  for (let i = 0; i < raw.length; i++) {
+    const n = raw[i];
     const beat = i / perBeat;
-    return { ...n, beat, duration, ...placeBeat(beat, spec.meter) };
-  });
-  return { notes, measures: measuresFor(raw.length / perBeat, spec.meter) };
+    n.beat = beat;
+    n.duration = duration;
+    if (whole) {
+      const inMeasure = i % perMeasure;
+      n.measure = (i - inMeasure) / perMeasure + 1;
+      n.beatInMeasure = tidy((inMeasure * den) / (4 * perBeat) + 1);
+    } else {
+      const p = placeBeat(beat, spec.meter);
+      n.measure = p.measure;
+      n.beatInMeasure = p.beatInMeasure;
+    }
+  }
+  return { notes: raw, measures: measuresFor(raw.length / perBeat, spec.meter) };
 }
 
 /**
@@ -98,7 +114,7 @@ export function generateDrill(spec: DrillSpec): Drill {
   if (!Array.isArray(spec.pair) || spec.pair.length !== 2) {
     throw new EngineError('A drill needs a pair of two triads, such as ["F", "Eb"].');
   }
-  const pair = triadPair(spec.pair[0], spec.pair[1]);
+  const pair = pairOf(spec.pair[0], spec.pair[1]);
   const def = resolvePattern(spec.pattern);
   checkDirection(spec.direction);
   const instrument = resolveInstrument(spec.instrument);
@@ -122,7 +138,8 @@ export function generateDrill(spec: DrillSpec): Drill {
     start = snapStart(spec.start, lad, descending);
   }
   filled.start = start;
-  const raw = runCells(def, ladders, { start, range: filled.range, descending });
+  const trusted = typeof spec.pattern === 'string';
+  const raw = runCells(def, ladders, { start, range: filled.range, descending, trusted });
   if (raw.length === 0) {
     throw new EngineError(
       `The first cell from MIDI note ${start} does not fit in the range ${filled.range.low}-${filled.range.high}.`,
@@ -133,13 +150,15 @@ export function generateDrill(spec: DrillSpec): Drill {
     for (const n of raw) if (n.midi > top) top = n.midi;
     const turn = lad.indexOf[top] >= 0 ? top : lad.midi[lad.below[top]];
     if (turn !== undefined && turn >= filled.range.low) {
-      const down = runCells(def, ladders, { start: turn, range: filled.range, descending: true });
+      const down = runCells(def, ladders, { start: turn, range: filled.range, descending: true, trusted });
       const base = raw[raw.length - 1].cell + 1;
       const lastMidi = raw[raw.length - 1].midi;
-      down.forEach((n, i) => {
-        if (i === 0 && n.midi === lastMidi) return;
-        raw.push({ ...n, cell: n.cell + base });
-      });
+      for (let i = 0; i < down.length; i++) {
+        const n = down[i];
+        if (i === 0 && n.midi === lastMidi) continue;
+        n.cell += base;
+        raw.push(n);
+      }
     }
   }
   const { notes, measures } = place(raw, filled, def);

@@ -3,7 +3,8 @@ import { EngineError } from '../errors';
 import { parseTriad, QUALITY_SUFFIX } from '../theory/triads';
 import { chromaOf, rootSpelling } from '../theory/spelling';
 import type { Drill, DrillSpec, KeyOrder } from '../types';
-import { generateDrill } from './generate';
+import { cellsToFit, generateDrill } from './generate';
+import { resolvePattern } from './spec';
 
 const STEP: Record<KeyOrder, number> = { chromatic: 1, fourths: 5, fifths: 7 };
 
@@ -55,9 +56,12 @@ function withMovedStart(moved: DrillSpec, start: number | undefined, range: { lo
         if (s >= range.low && s <= range.high) candidates.push(s);
       }
     }
+    // A moved start must leave room for what a default start does: the first a and b cells.
+    const need = cellsToFit(resolvePattern(moved.pattern));
     for (const s of candidates) {
       try {
-        return generateDrill({ ...moved, start: s });
+        const drill = generateDrill({ ...moved, start: s });
+        if (drill.notes[drill.notes.length - 1].cell >= need - 1) return drill;
       } catch (err) {
         if (!(err instanceof EngineError)) throw err;
       }

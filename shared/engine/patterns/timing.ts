@@ -10,7 +10,8 @@ export function measureLength([num, den]: Meter): number {
 
 const EPS = 1e-9;
 
-function tidy(x: number): number {
+/** Rounds away floating-point dust (7/3 x 3 is 7). */
+export function tidy(x: number): number {
   const r = Math.round(x);
   return Math.abs(x - r) < EPS ? r : x;
 }

@@ -28,6 +28,28 @@ function makePair(a: Triad, b: Triad): TriadPair {
  * triadPair('Fm', 'Eb').hexatonic // ['F', 'G', 'Ab', 'Bb', 'C', 'Eb']
  */
 export function triadPair(a: string, b: string): TriadPair {
+  const p = pairOf(a, b);
+  return {
+    a: { ...p.a, pitchClasses: [...p.a.pitchClasses] },
+    b: { ...p.b, pitchClasses: [...p.b.pitchClasses] },
+    interval: p.interval,
+    hexatonic: [...p.hexatonic],
+  };
+}
+
+const pairCache = new Map<string, TriadPair>();
+
+/** triadPair, cached and shared: for the engine's own reading only, never handed out. */
+export function pairOf(a: string, b: string): TriadPair {
+  const key = `${a}|${b}`;
+  const hit = pairCache.get(key);
+  if (hit) return hit;
+  const pair = readPair(a, b);
+  pairCache.set(key, pair);
+  return pair;
+}
+
+function readPair(a: string, b: string): TriadPair {
   const ta = parseTriad(a);
   const tb = parseTriad(b);
   const shared = chromas(ta).filter((c) => chromas(tb).includes(c));

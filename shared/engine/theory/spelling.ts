@@ -5,8 +5,15 @@ export const ROOT_SPELLINGS = ['C', 'Db', 'D', 'Eb', 'E', 'F', 'F#', 'G', 'Ab', 
 
 /** Pitch class of a spelled note or pitch-class name, 0..11 (C = 0). */
 export function chromaOf(name: string): number {
-  return Note.chroma(name) ?? Number.NaN;
+  let c = chromaCache.get(name);
+  if (c === undefined) {
+    c = Note.chroma(name) ?? Number.NaN;
+    chromaCache.set(name, c);
+  }
+  return c;
 }
+
+const chromaCache = new Map<string, number>();
 
 /**
  * The root spelling from {@link ROOT_SPELLINGS} of a pitch class.
