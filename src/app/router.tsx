@@ -1,13 +1,28 @@
 import { createBrowserRouter, RouterProvider } from 'react-router-dom';
-import { AppShell } from '@/components/layout/app-shell';
-import { LandingRoute } from './routes/landing';
+import { RequireRole, VisitorsOnly } from './guards';
+import { RootLayout } from './root-layout';
+import { AccountRoute } from './routes/account';
+import { AdminUsersRoute } from './routes/admin-users';
+import { ForgotPasswordRoute } from './routes/forgot-password';
+import { HomeRoute } from './routes/home';
+import { IndexRoute } from './routes/index';
 import { NotFoundRoute } from './routes/not-found';
+import { ResetPasswordRoute } from './routes/reset-password';
+import { SignInRoute } from './routes/sign-in';
+import { SignUpRoute } from './routes/sign-up';
 
 const router = createBrowserRouter([
   {
-    element: <AppShell />,
+    element: <RootLayout />,
     children: [
-      { path: '/', element: <LandingRoute /> },
+      { path: '/', element: <IndexRoute /> },
+      { path: '/sign-in', element: <VisitorsOnly><SignInRoute /></VisitorsOnly> },
+      { path: '/sign-up', element: <VisitorsOnly><SignUpRoute /></VisitorsOnly> },
+      { path: '/forgot-password', element: <ForgotPasswordRoute /> },
+      { path: '/reset-password', element: <ResetPasswordRoute /> },
+      { path: '/home', element: <RequireRole><HomeRoute /></RequireRole> },
+      { path: '/account', element: <RequireRole><AccountRoute /></RequireRole> },
+      { path: '/admin/users', element: <RequireRole roles={['admin']}><AdminUsersRoute /></RequireRole> },
       { path: '*', element: <NotFoundRoute /> },
     ],
   },

@@ -1,0 +1,26 @@
+import type { Role } from '@shared/schemas/auth';
+import { AppShell, type NavItem } from '@/components/layout/app-shell';
+import { useMe } from '@/features/auth/api/session';
+import { UserMenu } from '@/features/auth/components/user-menu';
+
+/** Each role's places; pages that are still to come are linked already. */
+const navByRole: Record<Role, NavItem[]> = {
+  player: [
+    { to: '/home', label: 'Home' },
+    { to: '/drills', label: 'Drills' },
+    { to: '/practice', label: 'Practice' },
+  ],
+  teacher: [
+    { to: '/home', label: 'Home' },
+    { to: '/studio', label: 'Studio' },
+  ],
+  admin: [
+    { to: '/home', label: 'Home' },
+    { to: '/admin/users', label: 'Users' },
+  ],
+};
+
+export function RootLayout() {
+  const { user } = useMe();
+  return <AppShell nav={user ? navByRole[user.role] : []} aside={<UserMenu />} />;
+}

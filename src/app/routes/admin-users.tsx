@@ -1,0 +1,11 @@
+import { UsersTable } from '@/features/admin/components/users-table';
+
+export function AdminUsersRoute() {
+  return (
+    <section className="grid gap-4">
+      <h1 className="text-title">Accounts</h1>
+      <p className="text-muted">Everyone with an account on this Sixfold.</p>
+      <UsersTable />
+    </section>
+  );
+}

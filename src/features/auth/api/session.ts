@@ -1,0 +1,18 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { SessionResponse, User } from '@shared/schemas/auth';
+import { api } from '@/lib/api-client';
+
+export const sessionKey = ['auth', 'session'] as const;
+
+/** Who is signed in (null for a visitor; this route never answers 401). */
+export function fetchSession(): Promise<SessionResponse> {
+  return api.get<SessionResponse>('/api/auth/session');
+}
+
+export const sessionQueryOptions = queryOptions({ queryKey: sessionKey, queryFn: fetchSession, staleTime: 60_000 });
+
+/** The signed-in user, which drives navigation, guards and the home page. */
+export function useMe(): { user: User | null; isLoading: boolean } {
+  const query = useQuery(sessionQueryOptions);
+  return { user: query.data?.user ?? null, isLoading: query.isPending };
+}
