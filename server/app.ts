@@ -17,6 +17,7 @@ import { drillsRouter } from './routes/drills';
 import { healthRouter } from './routes/health';
 import { patternsRouter } from './routes/patterns';
 import { studiosRouter } from './routes/studios';
+import { takesRouter } from './routes/takes';
 
 export interface AppDeps {
   db: Db;
@@ -47,6 +48,7 @@ export function createApp(deps: AppDeps) {
   app.use('/api/auth', authRouter(ctx));
   app.use('/api/admin', adminRouter(ctx));
   app.use('/api/studios', studiosRouter(ctx));
+  app.use('/api/takes', takesRouter(ctx));
   app.use('/api/drills', drillsRouter(ctx));
   app.use('/api/patterns', patternsRouter(ctx));
   if (env.NODE_ENV !== 'production') app.use('/api/dev', devRouter(ctx));

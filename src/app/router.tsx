@@ -6,6 +6,7 @@ import { AdminUsersRoute } from './routes/admin-users';
 import { ForgotPasswordRoute } from './routes/forgot-password';
 import { HomeRoute } from './routes/home';
 import { IndexRoute } from './routes/index';
+import { InputCheckRoute } from './routes/input-check';
 import { NotFoundRoute } from './routes/not-found';
 import { ResetPasswordRoute } from './routes/reset-password';
 import { SignInRoute } from './routes/sign-in';
@@ -20,6 +21,7 @@ const router = createBrowserRouter([
       { path: '/sign-up', element: <VisitorsOnly><SignUpRoute /></VisitorsOnly> },
       { path: '/forgot-password', element: <ForgotPasswordRoute /> },
       { path: '/reset-password', element: <ResetPasswordRoute /> },
+      { path: '/input', element: <InputCheckRoute /> },
       { path: '/home', element: <RequireRole><HomeRoute /></RequireRole> },
       { path: '/account', element: <RequireRole><AccountRoute /></RequireRole> },
       { path: '/admin/users', element: <RequireRole roles={['admin']}><AdminUsersRoute /></RequireRole> },

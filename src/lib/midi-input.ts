@@ -222,11 +222,14 @@ export class NoteInput {
   private refreshDevices(autoSelect = true) {
     const devices: MidiDevice[] = WebMidi.inputs.map((i) => ({ id: i.id, name: i.name, manufacturer: i.manufacturer }));
     let message = '';
+    let lost = false;
     if (this.selected && !devices.some((d) => d.id === this.selected?.id)) {
       message = `${this.selected.name} was disconnected. Plug it back in, or choose another input.`;
       this.detach();
+      lost = true;
     }
-    if (autoSelect && !this.selected && devices.length > 0) {
+    // After a disconnection, wait for that device rather than switch silently to another one.
+    if (autoSelect && !lost && !this.selected && devices.length > 0) {
       const wanted = devices.find((d) => d.name === this.remembered.deviceName) ?? (this.remembered.deviceName ? undefined : devices[0]);
       if (wanted) {
         const input = WebMidi.getInputById(wanted.id);
@@ -234,6 +237,7 @@ export class NoteInput {
           this.selected = input;
           input.addListener('midimessage', this.onMidiMessage as never);
           message = `Listening to ${input.name}.`;
+          this.remember({ deviceName: input.name });
         }
       }
     }

@@ -1,0 +1,85 @@
+import { type DrillSpec as SpecInput, generateChecked } from '../../../shared/schemas/drills';
+import { AppError } from '../../errors';
+import { chromaOf, rootSpelling } from '../../../shared/engine/theory/spelling';
+import {
+  type Drill,
+  type DrillNote,
+  type DrillSpec,
+  type PlayedNote,
+  parseTriad,
+  type ScoreOptions,
+  scoreTake,
+  sliceDrill,
+  type TakeScore,
+} from '../../../shared/engine';
+
+/** The windows a client may ask for; anything wider would let sloppy playing count as clean. */
+export const WINDOW_BOUNDS = { hitMin: 20, hitMax: 150, matchMax: 400 } as const;
+
+export interface ScoredTake {
+  drill: Drill;
+  /** the expected notes that were scored (after a ladder slice and a stop point) */
+  expected: DrillNote[];
+  options: ScoreOptions;
+  score: TakeScore;
+  key: string;
+  pattern: string;
+  pair: string;
+}
+
+const clamp = (v: number, lo: number, hi: number) => Math.min(hi, Math.max(lo, v));
+
+/** Keeps the client's options inside the bounds and the tempo at the drill's own. */
+export function boundOptions(options: ScoreOptions, tempo: number): ScoreOptions {
+  const bounded: ScoreOptions = { ...options, tempo };
+  if (bounded.hitWindowMs !== undefined) bounded.hitWindowMs = clamp(bounded.hitWindowMs, WINDOW_BOUNDS.hitMin, WINDOW_BOUNDS.hitMax);
+  if (bounded.matchWindowMs !== undefined) {
+    const floor = bounded.hitWindowMs ?? WINDOW_BOUNDS.hitMin;
+    bounded.matchWindowMs = clamp(bounded.matchWindowMs, floor, WINDOW_BOUNDS.matchMax);
+  }
+  return bounded;
+}
+
+/** The drill's key: the root of its first triad, spelled from C Db D Eb E F F# G Ab A Bb B. */
+export function drillKey(spec: DrillSpec): string {
+  return rootSpelling(chromaOf(parseTriad(spec.pair[0]).root));
+}
+
+export function patternName(spec: DrillSpec): string {
+  return typeof spec.pattern === 'string' ? spec.pattern : `custom:${spec.pattern.name}`;
+}
+
+/**
+ * Scores raw notes with the same engine the browser uses: the server never trusts a score
+ * sent to it. A ladder step is scored on its slice; a take stopped early leaves out the
+ * notes that were due after the stop.
+ */
+export function scoreRawTake(input: {
+  spec: DrillSpec;
+  played: PlayedNote[];
+  options: ScoreOptions;
+  measures?: [number, number] | null;
+  stoppedAtMs?: number | null;
+}): ScoredTake {
+  const checked = generateChecked(input.spec as SpecInput);
+  if (!checked.ok) {
+    const fields = Object.fromEntries(Object.entries(checked.fields).map(([k, v]) => [`spec.${k}`, v]));
+    throw new AppError('validation', checked.message, fields);
+  }
+  let drill = checked.drill;
+  if (input.measures) drill = sliceDrill(drill, input.measures[0], input.measures[1]);
+  const options = boundOptions(input.options, drill.spec.tempo);
+  const msPerBeat = 60000 / drill.spec.tempo;
+  const stop = input.stoppedAtMs;
+  const expected = stop === undefined || stop === null ? drill.notes : drill.notes.filter((n) => n.beat * msPerBeat <= stop);
+  const score = scoreTake(expected, input.played, options);
+  return {
+    drill,
+    expected,
+    options,
+    score,
+    key: drillKey(drill.spec),
+    pattern: patternName(drill.spec),
+    pair: `${drill.spec.pair[0]}/${drill.spec.pair[1]}`,
+  };
+}

@@ -1,0 +1,44 @@
+import { z } from 'zod';
+import { DrillSpecInput } from './drills';
+
+/** The most notes one take may hold: far beyond any drill, small enough to score at once. */
+export const MAX_PLAYED_NOTES = 20_000;
+
+export const PlayedNoteInput = z.object({
+  midi: z.number({ error: 'midi must be a note number' }).int().min(0).max(127),
+  timeMs: z.number({ error: 'timeMs must be a number of milliseconds' }).finite(),
+  velocity: z.number().int().min(0).max(127).optional(),
+  durationMs: z.number().finite().min(0).optional(),
+});
+
+export const ScoreOptionsInput = z.object({
+  tempo: z.number().finite().min(20).max(400),
+  mode: z.enum(['timed', 'free'], { error: 'mode is timed or free' }),
+  octaveTolerant: z.boolean().optional(),
+  hitWindowMs: z.number().finite().positive().optional(),
+  matchWindowMs: z.number().finite().positive().optional(),
+  swing: z.number().min(0.5, { error: 'swing runs from 0.5 (straight) to 0.75' }).max(0.75, { error: 'swing runs from 0.5 (straight) to 0.75' }).optional(),
+  inputTransposition: z.number().int().min(-48).max(48).optional(),
+});
+
+export const CreateTakeInput = z
+  .object({
+    id: z.uuid({ error: 'id must be a UUID made by the client' }),
+    spec: DrillSpecInput,
+    played: z
+      .array(PlayedNoteInput, { error: 'played must be a list of notes' })
+      .max(MAX_PLAYED_NOTES, { error: `A take holds at most ${MAX_PLAYED_NOTES.toLocaleString('en')} notes` }),
+    options: ScoreOptionsInput,
+    startedAt: z.iso.datetime({ offset: true, error: 'startedAt must be an ISO date-time' }),
+    measures: z
+      .tuple([z.number().int().min(1), z.number().int().min(1)])
+      .refine(([a, b]) => a <= b, { error: 'measures must run from a lower to a higher measure' })
+      .optional()
+      .nullable(),
+    stoppedAtMs: z.number().finite().min(0).optional().nullable(),
+    assignmentId: z.uuid().optional().nullable(),
+  })
+  .strict();
+export type CreateTakeInput = z.infer<typeof CreateTakeInput>;
+
+export const TakeIdParams = z.object({ id: z.uuid({ error: 'That is not a take id' }) });
