@@ -8,3 +8,5 @@ export * from './users';
 export * from './takes';
 export * from './saved-drills';
 export * from './custom-patterns';
+export * from './player-settings';
+export * from './tempo-climbs';
