@@ -16,3 +16,4 @@ export * from './remarks';
 export * from './notifications';
 export * from './audit-log';
 export * from './weekly-summaries';
+export * from './map-summaries';

@@ -30,6 +30,8 @@ export const takes = pgTable(
     accuracy: real('accuracy').notNull(),
     meanOffsetMs: real('mean_offset_ms'),
     noteCount: integer('note_count').notNull(),
+    /** how long the take ran (the later of the drill's end and the last note played): practice minutes */
+    durationMs: real('duration_ms'),
     startedAt: timestamp('started_at', { withTimezone: true }).notNull(),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   },
