@@ -39,13 +39,13 @@ export async function startFakeSmtp(opts: { db: Db; port?: number; host?: string
       }
     },
   });
-  server.on('error', (err) => console.error('[mail] fake SMTP error:', err.message));
   const host = opts.host ?? '127.0.0.1';
   await new Promise<void>((resolve, reject) => {
     const onError = (err: Error) => reject(err);
-    server.server.once('error', onError);
+    server.once('error', onError);
     server.listen(opts.port ?? 0, host, () => {
-      server.server.off('error', onError);
+      server.off('error', onError);
+      server.on('error', (err) => console.error('[mail] fake SMTP error:', err.message));
       resolve();
     });
   });

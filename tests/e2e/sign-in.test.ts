@@ -49,6 +49,8 @@ describe('signing in through the page in Chromium', () => {
     expect(await page.getByRole('link', { name: /Find a pair/ }).getAttribute('href')).toBe('/drills');
     await page.getByText('Harbour Lane Music Collective').waitFor();
     expect(await page.getByTestId('signed-in-name').textContent()).toBe('Theo Park');
+    const nav = page.getByRole('navigation', { name: 'Main' });
+    expect(await nav.getByRole('link').allTextContents()).toEqual(['Home', 'Drills', 'Practice']);
     // A player's nav has no admin pages; an admin page says it is not for this role.
     await page.goto(`${server.url}/admin/users`, { waitUntil: 'networkidle' });
     expect(await page.getByText('Not for your role').count()).toBe(1);

@@ -1,4 +1,4 @@
-import { eq, inArray } from 'drizzle-orm';
+import { and, eq, inArray } from 'drizzle-orm';
 import { afterAll, describe, expect, it } from 'vitest';
 import { studioMembers, studios, users } from '../../server/db/schema';
 import { DEMO_ACCOUNTS, DEMO_PASSWORD, DEMO_STUDIO, seedDemo } from '../../server/db/seed';
@@ -23,9 +23,10 @@ describe('demo seed', () => {
         ['wind@sixfold.test', 'Sam Okafor', 'player'],
       ].sort(),
     );
-    const found = await ctx.db.select().from(studios).where(eq(studios.name, DEMO_STUDIO));
+    const mara = rows.find((r) => r.email === 'teacher@sixfold.test')!;
+    // Other tests may make studios of the same name; the demo one is Mara's.
+    const found = await ctx.db.select().from(studios).where(and(eq(studios.name, DEMO_STUDIO), eq(studios.teacherId, mara.id)));
     expect(found).toHaveLength(1);
-    expect(found[0].teacherId).toBe(rows.find((r) => r.email === 'teacher@sixfold.test')!.id);
     const members = await ctx.db.select().from(studioMembers).where(eq(studioMembers.studioId, found[0].id));
     expect(members).toHaveLength(3);
   });

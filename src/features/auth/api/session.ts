@@ -1,4 +1,4 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { type QueryClient, queryOptions, useQuery } from '@tanstack/react-query';
 import type { SessionResponse, User } from '@shared/schemas/auth';
 import { api } from '@/lib/api-client';
 
@@ -15,4 +15,13 @@ export const sessionQueryOptions = queryOptions({ queryKey: sessionKey, queryFn:
 export function useMe(): { user: User | null; isLoading: boolean } {
   const query = useQuery(sessionQueryOptions);
   return { user: query.data?.user ?? null, isLoading: query.isPending };
+}
+
+/**
+ * After the account changes (sign-in, sign-up, sign-out): forget every cached answer of the
+ * previous account, but keep the session query itself, which mounted components watch.
+ */
+export function switchAccount(queryClient: QueryClient, user: User | null) {
+  queryClient.setQueryData(sessionKey, { user });
+  queryClient.removeQueries({ predicate: (q) => q.queryKey[0] !== sessionKey[0] });
 }

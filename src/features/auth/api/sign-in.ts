@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { SignInInput, UserResponse } from '@shared/schemas/auth';
 import { api, resetCsrfToken } from '@/lib/api-client';
-import { sessionKey } from './session';
+import { switchAccount } from './session';
 
 export function signIn(input: SignInInput): Promise<UserResponse> {
   return api.post<UserResponse>('/api/auth/sign-in', input);
@@ -14,8 +14,7 @@ export function useSignIn() {
     onSuccess: ({ user }) => {
       // A new session comes with a new CSRF token.
       resetCsrfToken();
-      queryClient.removeQueries();
-      queryClient.setQueryData(sessionKey, { user });
+      switchAccount(queryClient, user);
     },
   });
 }

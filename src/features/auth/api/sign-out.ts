@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api, resetCsrfToken } from '@/lib/api-client';
-import { sessionKey } from './session';
+import { switchAccount } from './session';
 
 export function signOut(): Promise<unknown> {
   return api.post('/api/auth/sign-out');
@@ -11,8 +11,7 @@ export function useSignOut() {
   const forget = () => {
     resetCsrfToken();
     // Nothing of this account may linger for the next one on this browser.
-    queryClient.removeQueries();
-    queryClient.setQueryData(sessionKey, { user: null });
+    switchAccount(queryClient, null);
   };
   // A 401 means the session was already over: signed out either way.
   return useMutation({ mutationFn: signOut, onSuccess: forget, onError: forget });

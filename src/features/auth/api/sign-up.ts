@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { SignUpInput, UserResponse } from '@shared/schemas/auth';
 import { api, resetCsrfToken } from '@/lib/api-client';
-import { sessionKey } from './session';
+import { switchAccount } from './session';
 
 export function signUp(input: SignUpInput): Promise<UserResponse> {
   return api.post<UserResponse>('/api/auth/sign-up', input);
@@ -13,8 +13,7 @@ export function useSignUp() {
     mutationFn: signUp,
     onSuccess: ({ user }) => {
       resetCsrfToken();
-      queryClient.removeQueries();
-      queryClient.setQueryData(sessionKey, { user });
+      switchAccount(queryClient, user);
     },
   });
 }
