@@ -11,12 +11,19 @@ import { requireCsrf } from './middleware/csrf';
 import { errorHandler, notFoundApi } from './middleware/error-handler';
 import { sessionMiddleware } from './middleware/session';
 import { adminRouter } from './routes/admin';
+import { assignmentsRouter } from './routes/assignments';
 import { authRouter } from './routes/auth';
 import { devRouter } from './routes/dev';
 import { drillsRouter } from './routes/drills';
 import { healthRouter } from './routes/health';
+import { invitesRouter } from './routes/invites';
+import { notificationsRouter } from './routes/notifications';
+import { mapsRouter } from './routes/maps';
 import { patternsRouter } from './routes/patterns';
+import { remarksRouter } from './routes/remarks';
 import { studiosRouter } from './routes/studios';
+import { practiceRouter } from './routes/practice';
+import { settingsRouter } from './routes/settings';
 import { takesRouter } from './routes/takes';
 
 export interface AppDeps {
@@ -48,7 +55,14 @@ export function createApp(deps: AppDeps) {
   app.use('/api/auth', authRouter(ctx));
   app.use('/api/admin', adminRouter(ctx));
   app.use('/api/studios', studiosRouter(ctx));
+  app.use('/api/invites', invitesRouter(ctx));
+  app.use('/api/assignments', assignmentsRouter(ctx));
+  app.use('/api/notifications', notificationsRouter(ctx));
+  app.use('/api/takes/:takeId/remarks', remarksRouter(ctx));
   app.use('/api/takes', takesRouter(ctx));
+  app.use('/api/maps', mapsRouter(ctx));
+  app.use('/api/settings', settingsRouter(ctx));
+  app.use('/api/practice', practiceRouter(ctx));
   app.use('/api/drills', drillsRouter(ctx));
   app.use('/api/patterns', patternsRouter(ctx));
   if (env.NODE_ENV !== 'production') app.use('/api/dev', devRouter(ctx));

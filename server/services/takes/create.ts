@@ -3,6 +3,8 @@ import type { DrillSpec, PlayedNote, ScoreOptions } from '../../../shared/engine
 import type { Db } from '../../db/client';
 import { type TakeRow, takes } from '../../db/schema/takes';
 import { AppError } from '../../errors';
+import { climbTempo } from '../practice/climb-tempo';
+import { takeDurationMs } from './duration';
 import { scoreRawTake } from './score-take';
 
 export interface CreateTakeArgs {
@@ -51,6 +53,7 @@ export async function createTake(db: Db, args: CreateTakeArgs): Promise<{ take: 
         accuracy: score.accuracy,
         meanOffsetMs: score.meanOffsetMs,
         noteCount: scored.expected.length,
+        durationMs: takeDurationMs(scored.expected, args.played, drill.spec.tempo, args.stoppedAtMs),
         startedAt: args.startedAt,
       })
       .onConflictDoNothing({ target: takes.id })
@@ -80,6 +83,7 @@ export async function createTake(db: Db, args: CreateTakeArgs): Promise<{ take: 
         FROM jsonb_to_recordset(${JSON.stringify(rows)}::jsonb)
           AS x(idx int, midi int, beat real, measure int, position real, verdict text, offset_ms real)`);
     }
+    await climbTempo(tx, args.playerId, scored, !args.measures && (args.stoppedAtMs === undefined || args.stoppedAtMs === null));
     return { take: inserted[0], created: true };
   });
 }

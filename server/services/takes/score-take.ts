@@ -1,17 +1,18 @@
+import { drillKey, patternName } from '../../../shared/practice/drill-identity';
 import { type DrillSpec as SpecInput, generateChecked } from '../../../shared/schemas/drills';
 import { AppError } from '../../errors';
-import { chromaOf, rootSpelling } from '../../../shared/engine/theory/spelling';
 import {
   type Drill,
   type DrillNote,
   type DrillSpec,
   type PlayedNote,
-  parseTriad,
   type ScoreOptions,
   scoreTake,
   sliceDrill,
   type TakeScore,
 } from '../../../shared/engine';
+
+export { drillKey, patternName };
 
 /** The windows a client may ask for; anything wider would let sloppy playing count as clean. */
 export const WINDOW_BOUNDS = { hitMin: 20, hitMax: 150, matchMax: 400 } as const;
@@ -38,15 +39,6 @@ export function boundOptions(options: ScoreOptions, tempo: number): ScoreOptions
     bounded.matchWindowMs = clamp(bounded.matchWindowMs, floor, WINDOW_BOUNDS.matchMax);
   }
   return bounded;
-}
-
-/** The drill's key: the root of its first triad, spelled from C Db D Eb E F F# G Ab A Bb B. */
-export function drillKey(spec: DrillSpec): string {
-  return rootSpelling(chromaOf(parseTriad(spec.pair[0]).root));
-}
-
-export function patternName(spec: DrillSpec): string {
-  return typeof spec.pattern === 'string' ? spec.pattern : `custom:${spec.pattern.name}`;
 }
 
 /**

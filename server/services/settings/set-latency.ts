@@ -1,0 +1,19 @@
+import { sql } from 'drizzle-orm';
+import type { PlayerSettings } from '../../../shared/schemas/settings';
+import type { Db } from '../../db/client';
+import { playerSettings } from '../../db/schema/player-settings';
+import { presentSettings } from './get';
+
+/** Stores one input device's measured latency, keeping the other devices'. */
+export async function setLatency(db: Db, userId: string, device: string, offsetMs: number): Promise<PlayerSettings> {
+  const entry = JSON.stringify({ [device]: Math.round(offsetMs * 10) / 10 });
+  const [row] = await db
+    .insert(playerSettings)
+    .values({ userId, latency: JSON.parse(entry) })
+    .onConflictDoUpdate({
+      target: playerSettings.userId,
+      set: { latency: sql`${playerSettings.latency} || ${entry}::jsonb`, updatedAt: sql`now()` },
+    })
+    .returning();
+  return presentSettings(row);
+}
