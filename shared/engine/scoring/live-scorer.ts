@@ -71,12 +71,21 @@ export function createLiveScorer(expected: DrillNote[], options: ScoreOptions): 
       grid = buildGrid(d, a, b, rowEnd, m);
     }
     const g = grid;
+    // The provisional reading: the frontier state that is cheapest if every expected note the
+    // known notes could still reach, and that it leaves open, went unplayed. That makes a wrong
+    // note read as wrong at once rather than as an extra with its expected note pending.
     let best = -1;
+    let bestP = Number.POSITIVE_INFINITY;
+    let bestS = Number.POSITIVE_INFINITY;
     for (let i = kk; i <= rowEnd; i++) {
       const c = cellOf(g, i, m);
       if (c < 0) continue;
-      const bc = best < 0 ? -1 : cellOf(g, best, m);
-      if (best < 0 || g.prim[c] < g.prim[bc] || (g.prim[c] === g.prim[bc] && g.sec[c] < g.sec[bc])) best = i;
+      const p = g.prim[c] + 2 * (rowEnd - i);
+      if (p < bestP || (p === bestP && g.sec[c] < bestS)) {
+        best = i;
+        bestP = p;
+        bestS = g.sec[c];
+      }
     }
     if (best < 0) return [];
     const path = traceBack(g, best, m);
