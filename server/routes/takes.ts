@@ -1,12 +1,18 @@
-import { Router } from 'express';
+import { type RequestHandler, Router } from 'express';
+import multer from 'multer';
+import { ImportTakeFields, ListTakesQuery, MAX_IMPORT_BYTES } from '../../shared/schemas/history';
 import { CreateTakeInput, TakeIdParams } from '../../shared/schemas/takes';
 import type { AppContext } from '../app';
 import { requireRole, requireUser } from '../middleware/auth';
-import { parseBody, parseParams } from '../middleware/validate';
+import { parseBody, parseParams, parseQuery } from '../middleware/validate';
 import { createTake } from '../services/takes/create';
 import { deleteTake } from '../services/takes/delete';
 import { exportTakeMidi, takeFileName } from '../services/takes/export-midi';
 import { getTake } from '../services/takes/get';
+import { importTake } from '../services/takes/import';
+import { listTakes } from '../services/takes/list';
+import { subjectPlayerId } from '../services/maps/subject';
+import { AppError } from '../errors';
 import { presentTake } from '../services/takes/present';
 
 export function takesRouter({ db }: AppContext) {
@@ -21,6 +27,19 @@ export function takesRouter({ db }: AppContext) {
       measures: input.measures ?? null,
     });
     res.status(created ? 201 : 200).json({ take: presentTake(take) });
+  });
+
+  router.get('/', requireUser, async (req, res) => {
+    const query = parseQuery(ListTakesQuery, req);
+    const playerId = await subjectPlayerId(db, req.user!, query.player);
+    res.json(await listTakes(db, playerId, query));
+  });
+
+  router.post('/import', requireRole('player'), midiUpload, async (req, res) => {
+    if (!req.file) throw new AppError('bad_request', 'Attach the MIDI file as "file"', { file: ['Attach a MIDI file'] });
+    const fields = parseBody(ImportTakeFields, req);
+    const { take } = await importTake(db, { playerId: req.user!.id, bytes: new Uint8Array(req.file.buffer), ...fields });
+    res.status(201).json({ take: presentTake(take) });
   });
 
   router.get('/:id', requireUser, async (req, res) => {
@@ -45,3 +64,17 @@ export function takesRouter({ db }: AppContext) {
 
   return router;
 }
+
+const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: MAX_IMPORT_BYTES, files: 1, fields: 8 } }).single('file');
+
+/** One MIDI file in memory, at most 1 MB; its type is judged later by its content, not its name. */
+const midiUpload: RequestHandler = (req, res, next) => {
+  upload(req, res, (err: unknown) => {
+    if (!err) return next();
+    if (err instanceof multer.MulterError && err.code === 'LIMIT_FILE_SIZE') {
+      return next(new AppError('payload_too_large', 'The file is larger than 1 MB; a MIDI take is far smaller', { file: ['At most 1 MB'] }));
+    }
+    if (err instanceof multer.MulterError) return next(new AppError('bad_request', `The upload was refused: ${err.message}`));
+    next(err);
+  });
+};
