@@ -37,7 +37,9 @@ function expectResult(actual: NoteResult | undefined, wanted: NoteResult, what: 
 
 function expectScore(actual: TakeScore, wanted: TakeScore) {
   expect(actual.results).toHaveLength(wanted.results.length);
-  wanted.results.forEach((r, k) => expectResult(actual.results[k], r, `result ${k}`));
+  wanted.results.forEach((r, k) => {
+    expectResult(actual.results[k], r, `result ${k}`);
+  });
   expect(actual.extras).toEqual(wanted.extras);
   expect(actual.accuracy).toBeCloseTo(wanted.accuracy, 12);
   expectNumber(actual.meanOffsetMs, wanted.meanOffsetMs, 'meanOffsetMs');
