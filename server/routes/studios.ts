@@ -1,20 +1,86 @@
 import { Router } from 'express';
-import { StudioParams } from '../../shared/schemas/studios';
-import type { AppDeps } from '../app';
-import { requireUser } from '../middleware/auth';
-import { parseParams } from '../middleware/validate';
+import { CreateAssignmentInput } from '../../shared/schemas/assignments';
+import { CreateInviteInput, CreateStudioInput, StudioParams, StudioPlayerParams } from '../../shared/schemas/studios';
+import type { AppContext } from '../app';
+import { linkOrigin } from '../mail/link-origin';
+import { requireRole, requireUser } from '../middleware/auth';
+import { parseBody, parseParams } from '../middleware/validate';
+import { createAssignment } from '../services/assignments/create';
+import { listStudioAssignments } from '../services/assignments/list';
+import { createInvite } from '../services/invites/create';
+import { listInvites } from '../services/invites/list';
+import { teacherAccess } from '../services/studios/access';
+import { getStudioBoard } from '../services/studios/board';
+import { createStudio } from '../services/studios/create';
 import { getStudio } from '../services/studios/get';
+import { leaveStudio } from '../services/studios/leave';
 import { listStudios } from '../services/studios/list';
+import { getStudioPlayer } from '../services/studios/player-detail';
 
-export function studiosRouter({ db }: AppDeps) {
+/**
+ * Studios. Someone outside a studio gets 404 on every route under /:id (as for a studio that
+ * does not exist); its players get 403 on what only the teacher may do. The teacher check
+ * runs before the body is read, so an outsider never learns more from a 400.
+ */
+export function studiosRouter(deps: AppContext) {
+  const { db, env } = deps;
   const router = Router();
   router.use(requireUser);
+
   router.get('/', async (req, res) => {
     res.json({ studios: await listStudios(db, req.user!) });
   });
+
+  router.post('/', requireRole('teacher'), async (req, res) => {
+    const input = parseBody(CreateStudioInput, req);
+    res.status(201).json({ studio: await createStudio(db, req.user!, input) });
+  });
+
   router.get('/:id', async (req, res) => {
     const { id } = parseParams(StudioParams, req);
     res.json({ studio: await getStudio(db, req.user!, id) });
   });
+
+  router.get('/:id/board', async (req, res) => {
+    const { id } = parseParams(StudioParams, req);
+    res.json(await getStudioBoard(db, req.user!, id));
+  });
+
+  router.get('/:id/players/:playerId', async (req, res) => {
+    const { id, playerId } = parseParams(StudioPlayerParams, req);
+    res.json(await getStudioPlayer(db, req.user!, id, playerId));
+  });
+
+  router.delete('/:id/membership', async (req, res) => {
+    const { id } = parseParams(StudioParams, req);
+    await leaveStudio(db, req.user!, id);
+    res.status(204).end();
+  });
+
+  router.get('/:id/invites', async (req, res) => {
+    const { id } = parseParams(StudioParams, req);
+    res.json({ invites: await listInvites(db, req.user!, id) });
+  });
+
+  router.post('/:id/invites', async (req, res) => {
+    const { id } = parseParams(StudioParams, req);
+    await teacherAccess(db, req.user!, id);
+    const input = parseBody(CreateInviteInput, req);
+    const invite = await createInvite(db, deps.mailer, req.user!, id, { ...input, origin: linkOrigin(req, env) });
+    res.status(201).json({ invite });
+  });
+
+  router.get('/:id/assignments', async (req, res) => {
+    const { id } = parseParams(StudioParams, req);
+    res.json({ assignments: await listStudioAssignments(db, req.user!, id) });
+  });
+
+  router.post('/:id/assignments', async (req, res) => {
+    const { id } = parseParams(StudioParams, req);
+    await teacherAccess(db, req.user!, id);
+    const input = parseBody(CreateAssignmentInput, req);
+    res.status(201).json({ assignment: await createAssignment(db, req.user!, id, input) });
+  });
+
   return router;
 }

@@ -8,7 +8,7 @@ import { studioMembers, studios, users } from '../../db/schema';
 export async function presentStudios(db: Db, viewer: User, ids: string[]): Promise<Studio[]> {
   if (ids.length === 0) return [];
   const rows = await db
-    .select({ id: studios.id, name: studios.name, teacherId: users.id, teacherName: users.name })
+    .select({ id: studios.id, name: studios.name, teacherId: users.id, teacherName: users.name, teacherEmail: users.email })
     .from(studios)
     .innerJoin(users, eq(users.id, studios.teacherId))
     .where(inArray(studios.id, ids))
@@ -26,11 +26,13 @@ export async function presentStudios(db: Db, viewer: User, ids: string[]): Promi
     .where(inArray(studioMembers.studioId, ids))
     .orderBy(asc(users.name));
   return rows.map((r) => {
-    const mayList = viewer.role === 'admin' || viewer.id === r.teacherId;
+    const role = viewer.id === r.teacherId ? 'teacher' : viewer.role === 'admin' ? 'admin' : 'player';
+    const mayList = role !== 'player';
     return {
       id: r.id,
       name: r.name,
-      teacher: { id: r.teacherId, name: r.teacherName },
+      role,
+      teacher: { id: r.teacherId, name: r.teacherName, email: r.teacherEmail },
       playerCount: countOf.get(r.id) ?? 0,
       ...(mayList
         ? { members: members.filter((m) => m.studioId === r.id).map((m) => ({ id: m.id, name: m.name, joinedAt: m.joinedAt.toISOString() })) }

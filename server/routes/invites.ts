@@ -1,0 +1,39 @@
+import { Router } from 'express';
+import { InviteSignUpInput, InviteTokenParams } from '../../shared/schemas/studios';
+import type { AppContext } from '../app';
+import { requireUser } from '../middleware/auth';
+import { csrfTokenFor } from '../middleware/csrf';
+import { regenerateSession, saveSession } from '../middleware/session';
+import { parseBody, parseParams } from '../middleware/validate';
+import { acceptInvite } from '../services/invites/accept';
+import { previewInvite } from '../services/invites/preview';
+import { signUpThroughInvite } from '../services/invites/sign-up';
+
+/** The e-mailed invite link: look at it signed out, accept it signed in, or sign up through it. */
+export function invitesRouter({ db }: AppContext) {
+  const router = Router();
+
+  router.get('/:token', async (req, res) => {
+    const { token } = parseParams(InviteTokenParams, req);
+    res.json({ invite: await previewInvite(db, token) });
+  });
+
+  router.post('/:token/accept', requireUser, async (req, res) => {
+    const { token } = parseParams(InviteTokenParams, req);
+    res.json({ studio: await acceptInvite(db, req.user!, token) });
+  });
+
+  router.post('/:token/sign-up', async (req, res) => {
+    const { token } = parseParams(InviteTokenParams, req);
+    const input = parseBody(InviteSignUpInput, req);
+    const user = await signUpThroughInvite(db, token, input);
+    // Signed in under a new session id (no fixation), with a new CSRF token.
+    await regenerateSession(req);
+    req.session.userId = user.id;
+    csrfTokenFor(req);
+    await saveSession(req);
+    res.status(201).json({ user });
+  });
+
+  return router;
+}

@@ -1,0 +1,91 @@
+import { z } from 'zod';
+import { DrillSpec, KeyOrder } from './drills';
+
+export const AssignmentStatus = z.enum(['open', 'overdue', 'met']);
+export type AssignmentStatus = z.infer<typeof AssignmentStatus>;
+
+export const CreateAssignmentInput = z.object({
+  savedDrillId: z.uuid({ error: 'Pick one of your saved drills' }),
+  /** null or absent: the drill's own key only; an order: the key cycle through all 12 keys */
+  keyOrder: KeyOrder.nullable().optional(),
+  targetTempo: z.number({ error: 'Set a target tempo' }).int({ error: 'Use a whole number of bpm' }).min(20, { error: 'At least 20 bpm' }).max(400, { error: 'At most 400 bpm' }),
+  /** 0..1 */
+  targetAccuracy: z.number({ error: 'Set a target accuracy' }).min(0.05, { error: 'At least 5%' }).max(1, { error: 'At most 100%' }),
+  dueAt: z.iso.datetime({ offset: true, error: 'Pick a due date' }),
+  note: z.string().trim().max(1000, { error: 'Keep the note under 1000 characters' }).optional().default(''),
+  title: z.string().trim().min(1).max(120, { error: 'Keep the title under 120 characters' }).optional(),
+});
+export type CreateAssignmentInput = z.input<typeof CreateAssignmentInput>;
+
+/** How far one player is with an assignment. */
+export const PlayerProgress = z.object({
+  playerId: z.string(),
+  status: AssignmentStatus,
+  /** keys with a take at the targets, made after the assignment was set */
+  keysMet: z.array(z.string()),
+});
+export type PlayerProgress = z.infer<typeof PlayerProgress>;
+
+export const Assignment = z.object({
+  id: z.string(),
+  studioId: z.string(),
+  studioName: z.string(),
+  savedDrillId: z.string().nullable(),
+  title: z.string(),
+  spec: DrillSpec,
+  keyOrder: KeyOrder.nullable(),
+  keys: z.array(z.string()),
+  targetTempo: z.number(),
+  targetAccuracy: z.number(),
+  dueAt: z.string(),
+  note: z.string(),
+  createdAt: z.string(),
+  /** the viewer's own status (a player), or null for the teacher */
+  status: AssignmentStatus.nullable(),
+  keysMet: z.array(z.string()),
+  /** every player's progress: for the teacher and admins only */
+  players: z.array(PlayerProgress).optional(),
+});
+export type Assignment = z.infer<typeof Assignment>;
+
+export const AssignmentResponse = z.object({ assignment: Assignment });
+export type AssignmentResponse = z.infer<typeof AssignmentResponse>;
+export const AssignmentsResponse = z.object({ assignments: z.array(Assignment) });
+export type AssignmentsResponse = z.infer<typeof AssignmentsResponse>;
+
+export const AssignmentParams = z.object({ id: z.uuid({ error: 'That is not an assignment id' }) });
+
+/** One row of the studio table: a player, their last practice, their accuracy by week. */
+export const BoardRow = z.object({
+  player: z.object({ id: z.string(), name: z.string(), email: z.string() }),
+  lastPracticeAt: z.string().nullable(),
+  /** mean accuracy (0..1) for each of the last six weeks, oldest first; null for a week without takes */
+  trend: z.array(z.number().nullable()),
+  takesThisWeek: z.number().int(),
+  statuses: z.record(z.string(), AssignmentStatus),
+});
+export type BoardRow = z.infer<typeof BoardRow>;
+
+export const BoardResponse = z.object({ assignments: z.array(Assignment), rows: z.array(BoardRow) });
+export type BoardResponse = z.infer<typeof BoardResponse>;
+
+/** A take in a teacher's list of one player's takes. */
+export const TakeSummary = z.object({
+  id: z.string(),
+  assignmentId: z.string().nullable(),
+  key: z.string(),
+  pattern: z.string(),
+  pair: z.string(),
+  tempo: z.number(),
+  accuracy: z.number(),
+  startedAt: z.string(),
+  remarkCount: z.number().int(),
+});
+export type TakeSummary = z.infer<typeof TakeSummary>;
+
+export const StudioPlayerResponse = z.object({
+  player: z.object({ id: z.string(), name: z.string(), email: z.string() }),
+  takes: z.array(TakeSummary),
+  assignments: z.array(Assignment),
+});
+export type StudioPlayerResponse = z.infer<typeof StudioPlayerResponse>;
