@@ -1,0 +1,5 @@
+// midi-writer-js ships its types, but its package "exports" do not point at them.
+declare module 'midi-writer-js' {
+  import MidiWriter from '../../node_modules/midi-writer-js/build/types/main';
+  export default MidiWriter;
+}
