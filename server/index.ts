@@ -4,6 +4,8 @@ import { runMigrations } from './db/migrate';
 import { seedDemo } from './db/seed';
 import { type Env, EnvError, parseEnv } from './env';
 import { type FakeSmtp, startFakeSmtp } from './mail/fake-smtp';
+import { mailerFromEnv } from './mail/mailer';
+import { scheduleWeeklySummaries } from './services/studios/weekly-summary';
 
 /** Outside production the server runs its own fake SMTP server; another instance's is reused. */
 async function startMailFake(env: Env, db: ReturnType<typeof createDb>['db']): Promise<FakeSmtp | null> {
@@ -41,6 +43,8 @@ async function main() {
   }
 
   const app = createApp({ db, pool, env });
+  // Hourly, every instance tries; an advisory lock and a row per studio and week make it once.
+  const stopSummaries = scheduleWeeklySummaries(db, mailerFromEnv(env), env.PUBLIC_URL ?? `http://${env.HOST}:${env.PORT}`);
   const server = app.listen(env.PORT, env.HOST, () => {
     const url = `http://${env.HOST}:${env.PORT}`;
     console.log(`\nSixfold is running at ${url}\n`);
@@ -49,6 +53,7 @@ async function main() {
     console.log('');
   });
   const shutdown = () => {
+    stopSummaries();
     server.close();
     Promise.allSettled([fake?.close()]).finally(() => pool.end().finally(() => process.exit(0)));
   };

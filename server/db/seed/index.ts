@@ -2,6 +2,7 @@ import { and, eq } from 'drizzle-orm';
 import { hashPassword } from '../../services/auth/password-hash';
 import type { Db } from '../client';
 import { studioMembers, studios, users } from '../schema';
+import { seedStudioWeek } from './studio';
 
 export const DEMO_PASSWORD = 'sixfold-demo';
 export const DEMO_STUDIO = 'Harbour Lane Music Collective';
@@ -46,4 +47,7 @@ export async function seedDemo(db: Db): Promise<void> {
       .values({ studioId: studio.id, playerId: ids.get(email)! })
       .onConflictDoNothing();
   }
+
+  // Last, so the demo takes (seeded above, when there) can carry a remark.
+  await seedStudioWeek(db, studio.id);
 }
