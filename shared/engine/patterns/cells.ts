@@ -103,8 +103,9 @@ export function runTriadCells(cells: TriadCellDef[], ladders: Ladders, run: Run)
     let fits = e >= 0 && e < lad.midi.length;
     for (let i = 0; fits && i < def.notes; i++) {
       const idx = e + motion * (def.shape === 'line' ? i : LEAP[i]);
-      const m = lad.midi[idx];
-      if (m === undefined || m < range.low || m > range.high) fits = false;
+      // bounds first: reading past an array's end is slow in JS engines
+      const m = idx >= 0 && idx < lad.midi.length ? lad.midi[idx] : -1;
+      if (m < range.low || m > range.high) fits = false;
       else pushNote(out, lad, idx, def.triad, k);
     }
     if (!fits) {
@@ -132,7 +133,8 @@ export function runScaleCells(def: Extract<PatternDef, { source: 'scale' }>, lad
     const cellStart = out.length;
     let fits = true;
     for (const off of def.degrees) {
-      const h = ladders.hex[s0 + dir * (c * def.step + off)];
+      const at = s0 + dir * (c * def.step + off);
+      const h = at >= 0 && at < ladders.hex.length ? ladders.hex[at] : null;
       if (!h || h.midi < range.low || h.midi > range.high) {
         fits = false;
         break;

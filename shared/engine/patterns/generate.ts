@@ -52,9 +52,13 @@ function defaultStart(def: PatternDef, ladders: Ladders, spec: FilledDrillSpec, 
   const lad = startLadder(def, ladders);
   const need = cellsToFit(def);
   const { low, high } = spec.range;
-  const tones = lad.midi.filter((m) => m >= low && m <= high);
-  if (descending) tones.reverse();
-  for (const start of tones) {
+  // the lowest tone of the triad in the range going up, the highest going down
+  const step = descending ? -1 : 1;
+  const edge = descending ? high : low;
+  const first = lad.indexOf[edge] >= 0 ? lad.indexOf[edge] : descending ? lad.below[edge] : lad.above[edge];
+  for (let i = first; i >= 0 && i < lad.midi.length; i += step) {
+    const start = lad.midi[i];
+    if (start < low || start > high) break;
     const notes = runCells(def, ladders, { start, range: spec.range, descending, maxCells: need });
     if (notes.length > 0 && notes[notes.length - 1].cell === need - 1) return start;
   }
@@ -120,14 +124,16 @@ export function generateDrill(spec: DrillSpec): Drill {
   const instrument = resolveInstrument(spec.instrument);
   const inst = instruments[instrument];
   const filled: FilledDrillSpec = {
-    ...spec,
     pair: [spec.pair[0], spec.pair[1]],
+    pattern: spec.pattern,
+    direction: spec.direction,
     range: resolveRange(spec.range, inst.range),
     start: 0,
     instrument,
     tempo: resolveTempo(spec.tempo),
     meter: resolveMeter(spec.meter),
   };
+  if (spec.chord !== undefined) filled.chord = spec.chord;
   const ladders = laddersFor(pair, inst.transposition);
   const descending = spec.direction === 'down';
   const lad = startLadder(def, ladders);
