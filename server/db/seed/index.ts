@@ -3,6 +3,7 @@ import { hashPassword } from '../../services/auth/password-hash';
 import type { Db } from '../client';
 import { studioMembers, studios, users } from '../schema';
 import { seedStudioWeek } from './studio';
+import { seedDemoHistory } from './history';
 
 export const DEMO_PASSWORD = 'sixfold-demo';
 export const DEMO_STUDIO = 'Harbour Lane Music Collective';
@@ -47,6 +48,8 @@ export async function seedDemo(db: Db): Promise<void> {
       .values({ studioId: studio.id, playerId: ids.get(email)! })
       .onConflictDoNothing();
   }
+
+  await seedDemoHistory(db);
 
   // Last, so the demo takes (seeded above, when there) can carry a remark.
   await seedStudioWeek(db, studio.id);
