@@ -79,7 +79,12 @@ export const instruments: Record<InstrumentId, InstrumentEntry> = {
   guitar: { label: 'Guitar', transposition: -12, range: { low: 40, high: 86 }, monophonic: false, program: 26, clef: 'treble' },
 };
 
-/** Reads an instrument id, or undefined when Sixfold has no such instrument. */
+/**
+ * Reads an instrument id, or undefined when Sixfold has no such instrument.
+ *
+ * @example
+ * instrumentOf('kazoo') // undefined
+ */
 export function instrumentOf(id: string): InstrumentEntry | undefined {
   return Object.hasOwn(instruments, id) ? instruments[id as InstrumentId] : undefined;
 }

@@ -99,7 +99,7 @@ describe('every preset, key, direction and instrument', () => {
       fc.property(specArb, (v) => {
         checkDrill(generateDrill(specOf(v)));
       }),
-      { numRuns: 600 },
+      { numRuns: 400 },
     );
   });
 
@@ -149,7 +149,7 @@ describe('every preset, key, direction and instrument', () => {
         }
         expect(roots.size).toBe(12);
       }),
-      { numRuns: 150 },
+      { numRuns: 80 },
     );
   });
 

@@ -40,7 +40,12 @@ function startLadder(def: PatternDef, ladders: Ladders): Ladder {
   return def.source === 'triads' && def.cells[0].triad === 'b' ? ladders.b : ladders.a;
 }
 
-/** Cells that must fit for a default start: the first a cell and the first b cell. */
+/**
+ * Cells that must fit for a default start: the first a cell and the first b cell.
+ *
+ * @example
+ * cellsToFit(presets.weave) // 2
+ */
 export function cellsToFit(def: PatternDef): number {
   if (def.source === 'scale') return 2;
   const firstA = def.cells.findIndex((c) => c.triad === 'a');

@@ -39,7 +39,12 @@ export function writtenPitchClasses(triad: Triad, transposition: number): string
   return QUALITY_INTERVALS[triad.quality].map((ivl) => Note.transpose(root, ivl));
 }
 
-/** The ladder of a triad for an instrument's transposition (cached). */
+/**
+ * The ladder of a triad for an instrument's transposition (cached).
+ *
+ * @example
+ * ladderOf(parseTriad('F'), 0).name[ladderOf(parseTriad('F'), 0).indexOf[65]] // 'F4'
+ */
 export function ladderOf(triad: Triad, transposition: number): Ladder {
   const key = `${triad.symbol}|${transposition}`;
   const hit = cache.get(key);

@@ -62,5 +62,10 @@ export const presets: Record<PatternId, PatternDef> = {
   },
 };
 
-/** Preset ids, in the order the product lists them. */
+/**
+ * Preset ids, in the order the product lists them.
+ *
+ * @example
+ * PRESET_IDS[0] // 'stack'
+ */
 export const PRESET_IDS = Object.keys(presets) as PatternId[];

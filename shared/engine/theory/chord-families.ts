@@ -47,6 +47,9 @@ export const CHORD_FAMILIES: Record<FamilyId, ChordFamily> = {
 /**
  * A chord's family from the semitones above its root that it holds (a set of 0..11).
  * Returns null for chords outside the table.
+ *
+ * @example
+ * familyOf((st) => [0, 4, 7, 10].includes(st)) // 'dominant'
  */
 export function familyOf(has: (semitones: number) => boolean): FamilyId | null {
   const maj3 = has(4);

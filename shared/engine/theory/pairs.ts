@@ -39,7 +39,12 @@ export function triadPair(a: string, b: string): TriadPair {
 
 const pairCache = new Map<string, TriadPair>();
 
-/** triadPair, cached and shared: for the engine's own reading only, never handed out. */
+/**
+ * triadPair, cached and shared: for the engine's own reading only, never handed out.
+ *
+ * @example
+ * pairOf('F', 'Eb') === pairOf('F', 'Eb') // true
+ */
 export function pairOf(a: string, b: string): TriadPair {
   const key = `${a}|${b}`;
   const hit = pairCache.get(key);

@@ -1,9 +1,19 @@
 import { Note } from 'tonal';
 
-/** The root spellings a moved or listed triad takes: one per pitch class, from C. */
+/**
+ * The root spellings a moved or listed triad takes: one per pitch class, from C.
+ *
+ * @example
+ * ROOT_SPELLINGS[6] // 'F#'
+ */
 export const ROOT_SPELLINGS = ['C', 'Db', 'D', 'Eb', 'E', 'F', 'F#', 'G', 'Ab', 'A', 'Bb', 'B'] as const;
 
-/** Pitch class of a spelled note or pitch-class name, 0..11 (C = 0). */
+/**
+ * Pitch class of a spelled note or pitch-class name, 0..11 (C = 0); read by tonal, cached.
+ *
+ * @example
+ * chromaOf('Cb') // 11
+ */
 export function chromaOf(name: string): number {
   let c = chromaCache.get(name);
   if (c === undefined) {
