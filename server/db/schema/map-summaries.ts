@@ -42,3 +42,21 @@ export const mapBeatDays = pgTable(
   { ...scope, meter: text('meter').notNull(), position: real('position').notNull(), ...counts },
   (t) => [primaryKey({ columns: [t.playerId, t.day, t.instrument, t.pattern, t.pair, t.meter, t.position] })],
 );
+
+/**
+ * The range map over all time, without days: a pitch x pair grid stays a few thousand rows
+ * however long the history, where the daily table grows by one row per pitch per day and pair.
+ * Kept by the same triggers.
+ */
+export const mapRangeTotals = pgTable(
+  'map_range_totals',
+  {
+    playerId: scope.playerId,
+    instrument: text('instrument').notNull(),
+    pattern: text('pattern').notNull(),
+    pair: text('pair').notNull(),
+    midi: smallint('midi').notNull(),
+    ...counts,
+  },
+  (t) => [primaryKey({ columns: [t.playerId, t.instrument, t.pattern, t.pair, t.midi] })],
+);
