@@ -1,6 +1,8 @@
 import type { User } from '@shared/schemas/auth';
 import { Link } from 'react-router-dom';
 import { useMe } from '@/features/auth/api/session';
+import { MyAssignments } from '@/features/studios/components/my-assignments';
+import { NotificationList } from '@/features/studios/components/notification-list';
 import { StudioSummary } from '@/features/studios/components/studio-summary';
 
 function NextStep({ to, title, text }: { to: string; title: string; text: string }) {
@@ -19,6 +21,8 @@ function PlayerHome() {
         <NextStep to="/drills" title="Find a pair" text="Type the chord you're soloing over; pick a pair whose six notes fit it and a pattern to drill." />
         <NextStep to="/practice" title="Practise" text="Plug in your keyboard or wind controller, take the count-in, and play the drill through the key cycle." />
       </div>
+      <h2 className="mt-8 text-lead font-bold">Assignments</h2>
+      <MyAssignments />
       <h2 className="mt-8 text-lead font-bold">Your studio</h2>
       <StudioSummary empty="You're not in a studio yet; when a teacher adds you, their assignments show up here." />
     </>
@@ -63,6 +67,7 @@ export function HomeRoute() {
         <h1 className="mt-1 text-display">Welcome back, {first}.</h1>
         <p className="mt-2 text-lead text-muted">{lead[user.role]}</p>
       </header>
+      <NotificationList />
       <div>{user.role === 'player' ? <PlayerHome /> : user.role === 'teacher' ? <TeacherHome /> : <AdminHome />}</div>
     </section>
   );

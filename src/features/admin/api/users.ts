@@ -1,5 +1,5 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { AdminUsersResponse } from '@shared/schemas/admin';
+import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { AdminUserResponse, AdminUsersResponse, UpdateAdminUserInput } from '@shared/schemas/admin';
 import { api } from '@/lib/api-client';
 
 export const adminUsersKey = ['admin', 'users'] as const;
@@ -12,4 +12,13 @@ export const adminUsersQueryOptions = queryOptions({ queryKey: adminUsersKey, qu
 
 export function useAdminUsers() {
   return useQuery(adminUsersQueryOptions);
+}
+
+/** Change an account's role, or switch it off or on; the audit log gets a line for each. */
+export function useUpdateAdminUser() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: ({ id, ...input }: UpdateAdminUserInput & { id: string }) => api.patch<AdminUserResponse>(`/api/admin/users/${encodeURIComponent(id)}`, input),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: ['admin'] }),
+  });
 }

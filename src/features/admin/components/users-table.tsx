@@ -1,13 +1,25 @@
-import { useAdminUsers } from '../api/users';
+import type { Role } from '@shared/schemas/auth';
+import { useMe } from '@/features/auth/api/session';
+import { useAdminUsers, useUpdateAdminUser } from '../api/users';
 
 const dateFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium' });
 
-/** Every account on this Sixfold, for the admin. */
+const ROLES: Role[] = ['player', 'teacher', 'admin'];
+
+/** Every account on this Sixfold, for the admin: change a role, switch an account off or on. */
 export function UsersTable() {
   const { data, isPending, error } = useAdminUsers();
+  const update = useUpdateAdminUser();
+  const { user: me } = useMe();
   if (isPending) return <p className="text-muted">Loading accounts…</p>;
   if (error) return <p role="alert" className="text-ember-700">{error.message}</p>;
   return (
+    <div className="grid gap-2">
+      {update.error ? (
+        <p role="alert" className="text-ember-700">
+          {update.error.message}
+        </p>
+      ) : null}
     <div className="overflow-x-auto rounded-card border border-line bg-raised">
       <table className="w-full text-left text-body">
         <caption className="sr-only">Accounts</caption>
@@ -18,6 +30,9 @@ export function UsersTable() {
             <th scope="col" className="px-4 py-3">Role</th>
             <th scope="col" className="px-4 py-3">Status</th>
             <th scope="col" className="px-4 py-3">Joined</th>
+            <th scope="col" className="px-4 py-3">
+              <span className="sr-only">Switch</span>
+            </th>
           </tr>
         </thead>
         <tbody>
@@ -25,15 +40,46 @@ export function UsersTable() {
             <tr key={u.id} className="border-b border-line last:border-0">
               <td className="px-4 py-3 font-semibold">{u.name}</td>
               <td className="px-4 py-3">{u.email}</td>
-              <td className="px-4 py-3 capitalize">{u.role}</td>
+              <td className="px-4 py-3">
+                {u.id === me?.id ? (
+                  <span className="capitalize">{u.role}</span>
+                ) : (
+                  <select
+                    aria-label={`Role of ${u.name}`}
+                    value={u.role}
+                    disabled={update.isPending}
+                    onChange={(e) => update.mutate({ id: u.id, role: e.target.value as Role })}
+                    className="rounded-lg border border-line bg-raised px-2 py-1 capitalize"
+                  >
+                    {ROLES.map((r) => (
+                      <option key={r} value={r}>
+                        {r}
+                      </option>
+                    ))}
+                  </select>
+                )}
+              </td>
               <td className="px-4 py-3">
                 {u.disabled ? <span className="text-ember-700 dark:text-ember-100">Switched off</span> : <span className="text-reed-700 dark:text-reed-100">Active</span>}
               </td>
               <td className="px-4 py-3 text-muted">{dateFormat.format(new Date(u.createdAt))}</td>
+              <td className="px-4 py-3">
+                {u.id === me?.id ? null : (
+                  <button
+                    type="button"
+                    className="rounded-lg border border-line px-3 py-1 font-semibold hover:border-ink-300"
+                    disabled={update.isPending}
+                    onClick={() => update.mutate({ id: u.id, disabled: !u.disabled })}
+                  >
+                    {u.disabled ? `Switch ${u.name} on` : `Switch ${u.name} off`}
+                  </button>
+                )}
+              </td>
             </tr>
           ))}
         </tbody>
       </table>
+    </div>
     </div>
   );
 }

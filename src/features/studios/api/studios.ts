@@ -1,5 +1,5 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { StudiosResponse } from '@shared/schemas/studios';
+import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { CreateStudioInput, StudioResponse, StudiosResponse } from '@shared/schemas/studios';
 import { api } from '@/lib/api-client';
 
 export const studiosKey = ['studios'] as const;
@@ -13,4 +13,28 @@ export const studiosQueryOptions = queryOptions({ queryKey: studiosKey, queryFn:
 /** The studios the signed-in user teaches or belongs to. */
 export function useStudios() {
   return useQuery(studiosQueryOptions);
+}
+
+export const studioQueryOptions = (id: string) =>
+  queryOptions({ queryKey: [...studiosKey, id], queryFn: () => api.get<StudioResponse>(`/api/studios/${encodeURIComponent(id)}`) });
+
+export function useStudio(id: string) {
+  return useQuery(studioQueryOptions(id));
+}
+
+export function useCreateStudio() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: CreateStudioInput) => api.post<StudioResponse>('/api/studios', input),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: studiosKey }),
+  });
+}
+
+/** A player leaves a studio. */
+export function useLeaveStudio() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (id: string) => api.delete<void>(`/api/studios/${encodeURIComponent(id)}/membership`),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: studiosKey }),
+  });
 }

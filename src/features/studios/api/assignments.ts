@@ -1,0 +1,41 @@
+import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { AssignmentResponse, AssignmentsResponse, CreateAssignmentInput } from '@shared/schemas/assignments';
+import type { SavedDrillsResponse } from '@shared/schemas/drills';
+import { api } from '@/lib/api-client';
+import { studiosKey } from './studios';
+
+export const myAssignmentsKey = ['assignments', 'mine'] as const;
+
+/** A player's assignments across their studios, with their own status. */
+export function useMyAssignments(enabled = true) {
+  return useQuery({ queryKey: myAssignmentsKey, queryFn: () => api.get<AssignmentsResponse>('/api/assignments'), enabled });
+}
+
+export function useCreateAssignment(studioId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: CreateAssignmentInput) => api.post<AssignmentResponse>(`/api/studios/${encodeURIComponent(studioId)}/assignments`, input),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: [...studiosKey, studioId] }),
+  });
+}
+
+export function useDeleteAssignment(studioId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (id: string) => api.delete<void>(`/api/assignments/${encodeURIComponent(id)}`),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: [...studiosKey, studioId] }),
+  });
+}
+
+/** The teacher's saved drills, to pick one for an assignment. */
+export function useTeacherDrills() {
+  return useQuery({ queryKey: ['drills', 'saved'], queryFn: () => api.get<SavedDrillsResponse>('/api/drills') });
+}
+
+/** The practice page, opened on the assignment's drill in one of its keys. */
+export function practiceLink(a: { id: string; savedDrillId: string | null; targetTempo: number }, key?: string): string | null {
+  if (!a.savedDrillId) return null;
+  const q = new URLSearchParams({ drill: a.savedDrillId, assignment: a.id, tempo: String(a.targetTempo) });
+  if (key) q.set('key', key);
+  return `/practice?${q.toString()}`;
+}

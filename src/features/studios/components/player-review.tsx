@@ -1,0 +1,64 @@
+import { Link } from 'react-router-dom';
+import { useStudioPlayer } from '../api/board';
+import { dueFormat, pct, StatusBadge } from './status-badge';
+
+const when = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+
+/** One player as their teacher reviews them: assignments, their takes, and their own views (read-only). */
+export function PlayerReview({ studioId, playerId }: { studioId: string; playerId: string }) {
+  const { data, isPending, error } = useStudioPlayer(studioId, playerId);
+  if (isPending) return <p className="text-muted">Loading…</p>;
+  if (error) return <p role="alert" className="text-ember-700">{error.message}</p>;
+  const q = `player=${encodeURIComponent(playerId)}`;
+  return (
+    <div className="grid gap-6">
+      <header>
+        <h1 className="text-title">{data.player.name}</h1>
+        <p className="text-muted">{data.player.email}</p>
+        <nav aria-label="Their views" className="mt-2 flex gap-4">
+          <Link className="underline" to={`/history?${q}`}>History</Link>
+          <Link className="underline" to={`/progress?${q}`}>Maps and charts</Link>
+        </nav>
+      </header>
+      <section className="grid gap-2">
+        <h2 className="text-lead font-bold">Assignments</h2>
+        {data.assignments.length === 0 ? <p className="text-muted">None set yet.</p> : null}
+        <ul className="grid gap-1">
+          {data.assignments.map((a) => (
+            <li key={a.id}>
+              {a.status ? <StatusBadge status={a.status} /> : null} {a.title} · due {dueFormat.format(new Date(a.dueAt))} · {a.keysMet.length}/{a.keys.length} keys
+            </li>
+          ))}
+        </ul>
+      </section>
+      <section className="grid gap-2">
+        <h2 className="text-lead font-bold">Takes</h2>
+        {data.takes.length === 0 ? <p className="text-muted">No takes yet.</p> : null}
+        <table className="w-full text-left text-body" data-testid="player-takes">
+          <thead className="text-caption text-muted">
+            <tr>
+              <th className="py-1">When</th>
+              <th>Drill</th>
+              <th>Tempo</th>
+              <th>Accuracy</th>
+              <th>Remarks</th>
+            </tr>
+          </thead>
+          <tbody>
+            {data.takes.map((t) => (
+              <tr key={t.id} className="border-t border-line">
+                <td className="py-1">
+                  <Link className="underline" to={`/takes/${t.id}`}>{when.format(new Date(t.startedAt))}</Link>
+                </td>
+                <td>{t.pair} · {t.pattern} · {t.key}</td>
+                <td>{t.tempo}</td>
+                <td>{pct(t.accuracy)}</td>
+                <td>{t.remarkCount || ''}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </section>
+    </div>
+  );
+}

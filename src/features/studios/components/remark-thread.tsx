@@ -1,0 +1,62 @@
+import type { DrillNote } from '@shared/engine';
+import type { Remark } from '@shared/schemas/remarks';
+import { type FormEvent, useState } from 'react';
+import { Button } from '@/components/ui/button';
+import { FormMessage } from '@/components/ui/form-message';
+import { useCreateRemark } from '../api/remarks';
+
+const when = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+
+export const noteLabel = (notes: DrillNote[], i: number) => {
+  const n = notes[i];
+  return n ? `note ${i + 1} (${n.written}, measure ${n.measure})` : `note ${i + 1}`;
+};
+
+function Reply({ takeId, parentId }: { takeId: string; parentId: string }) {
+  const create = useCreateRemark(takeId);
+  const [body, setBody] = useState('');
+  const onSubmit = (e: FormEvent) => {
+    e.preventDefault();
+    create.mutate({ body, parentId }, { onSuccess: () => setBody('') });
+  };
+  return (
+    <form onSubmit={onSubmit} className="mt-2 flex flex-wrap items-end gap-2" aria-label="Answer">
+      <label className="grid flex-1 gap-1 text-caption font-semibold">
+        Your answer
+        <textarea value={body} onChange={(e) => setBody(e.target.value)} rows={2} className="rounded-lg border border-line bg-raised px-3 py-2 text-body font-normal" />
+      </label>
+      <Button type="submit" variant="quiet" disabled={create.isPending || !body.trim()}>Send answer</Button>
+      {create.error ? <FormMessage tone="error">{create.error.message}</FormMessage> : null}
+    </form>
+  );
+}
+
+/** The remarks on a take, each with its answers; the player may answer. */
+export function RemarkThread({ takeId, remarks, notes, canAnswer }: { takeId: string; remarks: Remark[]; notes: DrillNote[]; canAnswer: boolean }) {
+  const top = remarks.filter((r) => !r.parentId);
+  if (top.length === 0) return <p className="text-muted">No remarks on this take yet.</p>;
+  return (
+    <ol className="grid gap-3" data-testid="remarks">
+      {top.map((r) => (
+        <li key={r.id} className="rounded-card border border-line bg-raised p-4" data-note-index={r.noteIndex ?? undefined}>
+          <p className="text-caption text-muted">
+            {r.author.name} · {when.format(new Date(r.createdAt))}
+            {r.noteIndex !== null ? <span className="ml-2 font-semibold text-dusk-700 dark:text-dusk-100">pinned to {noteLabel(notes, r.noteIndex)}</span> : null}
+          </p>
+          <p className="mt-1 whitespace-pre-wrap">{r.body}</p>
+          <ul className="mt-2 grid gap-2 border-l-2 border-line pl-3">
+            {remarks
+              .filter((a) => a.parentId === r.id)
+              .map((a) => (
+                <li key={a.id}>
+                  <p className="text-caption text-muted">{a.author.name} · {when.format(new Date(a.createdAt))}</p>
+                  <p className="whitespace-pre-wrap">{a.body}</p>
+                </li>
+              ))}
+          </ul>
+          {canAnswer ? <Reply takeId={takeId} parentId={r.id} /> : null}
+        </li>
+      ))}
+    </ol>
+  );
+}

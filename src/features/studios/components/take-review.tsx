@@ -1,0 +1,107 @@
+import { type Drill, generateDrill, sliceDrill } from '@shared/engine';
+import { type FormEvent, useMemo, useState } from 'react';
+import { DrillStaff, type NoteMarks } from '@/components/notation/drill-staff';
+import { Button } from '@/components/ui/button';
+import { FormMessage } from '@/components/ui/form-message';
+import { SelectField } from '@/components/ui/select-field';
+import { ApiError } from '@/lib/api-client';
+import { useCreateRemark, useRemarks } from '../api/remarks';
+import { type ReviewTake, useTake } from '../api/take';
+import { useTakeReplay } from '../hooks/use-take-replay';
+import { noteLabel, RemarkThread } from './remark-thread';
+import { pct } from './status-badge';
+import './take-review.css';
+
+function drillOf(take: ReviewTake): Drill | null {
+  try {
+    const full = generateDrill(take.spec);
+    return take.measures ? sliceDrill(full, take.measures[0], take.measures[1]) : full;
+  } catch {
+    return null;
+  }
+}
+
+function RemarkForm({ take, drill }: { take: ReviewTake; drill: Drill }) {
+  const create = useCreateRemark(take.id);
+  const [body, setBody] = useState('');
+  const firstMiss = take.score.results.findIndex((r) => r.verdict !== 'hit');
+  const [pin, setPin] = useState(firstMiss >= 0 ? String(firstMiss) : '');
+  const options = [
+    { value: '', label: 'Not pinned: the whole take' },
+    ...take.score.results.map((r, i) => ({ value: String(i), label: `${noteLabel(drill.notes, i)}: ${r.verdict}` })),
+  ];
+  const onSubmit = (e: FormEvent) => {
+    e.preventDefault();
+    create.mutate({ body, noteIndex: pin === '' ? null : Number(pin) }, { onSuccess: () => setBody('') });
+  };
+  const fields = create.error instanceof ApiError ? (create.error.fields ?? {}) : {};
+  return (
+    <form onSubmit={onSubmit} className="grid gap-3" aria-label="Leave a remark">
+      <SelectField label="Pin to a note" value={pin} onChange={(e) => setPin(e.target.value)} options={options} errors={fields.noteIndex} />
+      <label className="grid gap-1 font-semibold">
+        Remark
+        <textarea value={body} onChange={(e) => setBody(e.target.value)} rows={3} className="rounded-lg border border-line bg-raised px-3 py-2 font-normal" />
+      </label>
+      <div>
+        <Button type="submit" disabled={create.isPending || !body.trim()}>Leave the remark</Button>
+      </div>
+      {create.error && !(create.error instanceof ApiError && create.error.fields) ? <FormMessage tone="error">{create.error.message}</FormMessage> : null}
+      {fields.body ? <FormMessage tone="error">{fields.body.join(' ')}</FormMessage> : null}
+    </form>
+  );
+}
+
+/**
+ * One take: the staff with each note's verdict and the notes remarks are pinned to, replay
+ * against the drill, the MIDI file, and the remarks (the teacher writes, the player answers).
+ */
+export function TakeReview({ takeId, viewerId }: { takeId: string; viewerId: string }) {
+  const { data, isPending, error } = useTake(takeId);
+  const remarks = useRemarks(takeId);
+  const take = data?.take;
+  const drill = useMemo(() => (take ? drillOf(take) : null), [take]);
+  const replay = useTakeReplay(drill, take?.played ?? []);
+  const marks: NoteMarks = useMemo(() => {
+    const m = new Map<number, string>();
+    for (const [i, r] of (take?.score.results ?? []).entries()) m.set(i, `sf-mark-${r.verdict}`);
+    for (const r of remarks.data?.remarks ?? []) {
+      if (r.noteIndex !== null) m.set(r.noteIndex, `${m.get(r.noteIndex) ?? ''} sf-pinned`.trim());
+    }
+    return m;
+  }, [take, remarks.data]);
+  if (isPending) return <p className="text-muted">Loading the take…</p>;
+  if (error) return <FormMessage tone="error">{error.message}</FormMessage>;
+  if (!take) return null;
+  const mine = take.playerId === viewerId;
+  const counts: Record<string, number> = {};
+  for (const r of take.score.results) counts[r.verdict] = (counts[r.verdict] ?? 0) + 1;
+  return (
+    <div className="grid gap-5">
+      <header>
+        <h1 className="text-title">
+          {take.pair} · {take.pattern} · {take.key}
+        </h1>
+        <p className="text-muted">
+          {new Date(take.startedAt).toLocaleString()} · {take.tempo} bpm · accuracy {pct(take.accuracy)} ·{' '}
+          {Object.entries(counts)
+            .map(([v, n]) => `${n} ${v}`)
+            .join(', ')}
+        </p>
+      </header>
+      {drill ? <DrillStaff drill={drill} marks={marks} label={`The take's drill with each note's verdict; pinned notes are ringed`} /> : <FormMessage tone="error">This take's drill could not be rebuilt.</FormMessage>}
+      <div className="flex flex-wrap gap-3">
+        <Button variant="quiet" onClick={() => (replay.playing ? replay.stop() : void replay.play())} disabled={!drill}>
+          {replay.playing ? 'Stop' : 'Replay over the drill'}
+        </Button>
+        <a href={`/api/takes/${take.id}/midi`} download className="inline-flex items-center rounded-lg border border-line bg-raised px-4 py-2 font-semibold hover:border-ink-300">
+          Download MIDI
+        </a>
+      </div>
+      <section className="grid gap-3" aria-labelledby="remarks-heading">
+        <h2 id="remarks-heading" className="text-lead font-bold">Remarks</h2>
+        {remarks.data && drill ? <RemarkThread takeId={take.id} remarks={remarks.data.remarks} notes={drill.notes} canAnswer={mine} /> : null}
+        {!mine && drill ? <RemarkForm take={take} drill={drill} /> : null}
+      </section>
+    </div>
+  );
+}
