@@ -33,7 +33,10 @@ function makeVoices(Tone: Tone) {
     else if (e.kind === 'click') click.triggerAttackRelease(e.accent ? 1760 : 1320, 0.02, time, e.accent ? 1 : 0.6);
     else pad.triggerAttackRelease(e.midis.map(midiToHz), e.duration, time, 0.5);
   };
-  return { play, dispose: () => [lead, click, pad].forEach((v) => v.dispose()) };
+  const dispose = () => {
+    for (const v of [lead, click, pad]) v.dispose();
+  };
+  return { play, dispose };
 }
 
 export interface Playback {

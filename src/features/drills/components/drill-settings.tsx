@@ -1,0 +1,129 @@
+import { type InstrumentId, instruments, PRESET_IDS, presets } from '@shared/engine';
+import { type CustomPattern, type FieldErrors, METERS } from '@shared/schemas/drills';
+import { SelectField } from '@/components/ui/select-field';
+import { TextField } from '@/components/ui/text-field';
+import { keyLabel } from '@/components/midi/keyboard-diagram';
+import type { Draft } from '../hooks/use-drill-draft';
+import { NEW_TRIAD_PATTERN } from './pattern-form';
+
+const INSTRUMENT_OPTIONS = (Object.keys(instruments) as InstrumentId[]).map((id) => ({ value: id, label: instruments[id].label }));
+const METER_OPTIONS = METERS.map(([n, d]) => ({ value: `${n}/${d}`, label: `${n}/${d}` }));
+const pick = (fields: FieldErrors, ...keys: string[]) => {
+  const out = keys.flatMap((k) => Object.entries(fields).filter(([f]) => f === k || f.startsWith(`${k}.`)).flatMap(([, v]) => v));
+  return out.length ? out : undefined;
+};
+
+/** The pattern choice: a preset, one of the saved patterns, or a custom one built in the form. */
+export function patternValue(draft: Draft, saved: CustomPattern[]): string {
+  if (typeof draft.pattern === 'string') return draft.pattern;
+  const match = saved.find((p) => JSON.stringify(p.def) === JSON.stringify(draft.pattern));
+  return match ? `saved:${match.id}` : 'custom';
+}
+
+/** Pair, pattern, direction, instrument, range, tempo, meter and key-cycle order. */
+export function DrillSettings({
+  draft,
+  update,
+  fields,
+  savedPatterns,
+}: {
+  draft: Draft;
+  update: (patch: Partial<Draft>) => void;
+  fields: FieldErrors;
+  savedPatterns: CustomPattern[];
+}) {
+  const range = draft.range ?? instruments[draft.instrument].range;
+  const patternOptions = [
+    ...PRESET_IDS.map((id) => ({ value: id, label: `${presets[id].name} (${id})` })),
+    ...savedPatterns.map((p) => ({ value: `saved:${p.id}`, label: `${p.name}${p.mine ? '' : ` — ${p.owner.name}`}` })),
+    { value: 'custom', label: 'Custom: build one…' },
+  ];
+  const setRange = (patch: Partial<{ low: number; high: number }>) => update({ range: { ...range, ...patch } });
+  return (
+    <section aria-labelledby="settings-heading" className="grid content-start gap-4">
+      <h2 id="settings-heading" className="text-lead font-bold">
+        The drill
+      </h2>
+      <div className="grid items-start gap-3 sm:grid-cols-2">
+        <TextField className="min-w-0" label="Triad a" value={draft.pair[0]} errors={pick(fields, 'pair.0')} onChange={(e) => update({ pair: [e.target.value, draft.pair[1]] })} />
+        <TextField className="min-w-0" label="Triad b" value={draft.pair[1]} errors={pick(fields, 'pair.1')} onChange={(e) => update({ pair: [draft.pair[0], e.target.value] })} />
+      </div>
+      {fields.pair ? (
+        <p role="alert" className="text-caption font-semibold text-ember-700 dark:text-ember-100" data-testid="pair-error">
+          {fields.pair.join(' ')}
+        </p>
+      ) : null}
+      <div className="grid items-start gap-3 sm:grid-cols-2 lg:grid-cols-3">
+        <SelectField
+          label="Pattern"
+          value={patternValue(draft, savedPatterns)}
+          options={patternOptions}
+          errors={typeof draft.pattern === 'string' ? pick(fields, 'pattern') : undefined}
+          onChange={(e) => {
+            const v = e.target.value;
+            if (v === 'custom') update({ pattern: typeof draft.pattern === 'string' ? { ...NEW_TRIAD_PATTERN } : draft.pattern });
+            else if (v.startsWith('saved:')) update({ pattern: savedPatterns.find((p) => `saved:${p.id}` === v)?.def ?? draft.pattern });
+            else update({ pattern: v as Draft['pattern'] });
+          }}
+        />
+        <SelectField
+          label="Direction"
+          value={draft.direction}
+          options={[
+            { value: 'up', label: 'Up' },
+            { value: 'down', label: 'Down' },
+            { value: 'up-down', label: 'Up, then down' },
+          ]}
+          onChange={(e) => update({ direction: e.target.value as Draft['direction'] })}
+        />
+        <SelectField label="Instrument" value={draft.instrument} options={INSTRUMENT_OPTIONS} onChange={(e) => update({ instrument: e.target.value as InstrumentId })} />
+        <TextField
+          className="min-w-0"
+          label="Lowest note (MIDI, sounding)"
+          type="number"
+          min={0}
+          max={127}
+          value={String(range.low)}
+          hint={keyLabel(range.low)}
+          errors={pick(fields, 'range.low', 'range')}
+          onChange={(e) => setRange({ low: Number(e.target.value) })}
+        />
+        <TextField
+          className="min-w-0"
+          label="Highest note (MIDI, sounding)"
+          type="number"
+          min={0}
+          max={127}
+          value={String(range.high)}
+          hint={keyLabel(range.high)}
+          errors={pick(fields, 'range.high')}
+          onChange={(e) => setRange({ high: Number(e.target.value) })}
+        />
+        <TextField className="min-w-0" label="Tempo (quarter notes per minute)" type="number" min={20} max={400} value={String(draft.tempo)} errors={pick(fields, 'tempo')} onChange={(e) => update({ tempo: Number(e.target.value) })} />
+        <SelectField
+          label="Meter"
+          value={`${draft.meter[0]}/${draft.meter[1]}`}
+          options={METER_OPTIONS}
+          errors={pick(fields, 'meter')}
+          onChange={(e) => update({ meter: e.target.value.split('/').map(Number) as [number, number] })}
+        />
+        <SelectField
+          label="Key cycle order"
+          value={draft.order}
+          options={[
+            { value: 'chromatic', label: 'Chromatic (up a half step)' },
+            { value: 'fourths', label: 'Fourths' },
+            { value: 'fifths', label: 'Fifths' },
+          ]}
+          onChange={(e) => update({ order: e.target.value as Draft['order'] })}
+        />
+        <TextField className="min-w-0" label="Chord (for the pad)" value={draft.chord} errors={pick(fields, 'chord')} placeholder="none" onChange={(e) => update({ chord: e.target.value })} />
+      </div>
+      {fields.start ? (
+        <p role="alert" className="text-caption font-semibold text-ember-700 dark:text-ember-100">
+          {fields.start.join(' ')}
+        </p>
+      ) : null}
+    </section>
+  );
+}
