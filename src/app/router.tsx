@@ -2,6 +2,7 @@ import { createBrowserRouter, RouterProvider } from 'react-router-dom';
 import { RequireRole, VisitorsOnly } from './guards';
 import { RootLayout } from './root-layout';
 import { AccountRoute } from './routes/account';
+import { AdminAuditRoute } from './routes/admin-audit';
 import { AdminUsersRoute } from './routes/admin-users';
 import { DrillsRoute } from './routes/drills';
 import { DrillsPrintRoute } from './routes/drills-print';
@@ -9,10 +10,15 @@ import { ForgotPasswordRoute } from './routes/forgot-password';
 import { HomeRoute } from './routes/home';
 import { IndexRoute } from './routes/index';
 import { InputCheckRoute } from './routes/input-check';
+import { InviteRoute } from './routes/invite';
 import { NotFoundRoute } from './routes/not-found';
 import { ResetPasswordRoute } from './routes/reset-password';
 import { SignInRoute } from './routes/sign-in';
 import { SignUpRoute } from './routes/sign-up';
+import { StudioDetailRoute } from './routes/studio-detail';
+import { StudioListRoute } from './routes/studio-list';
+import { StudioPlayerRoute } from './routes/studio-player';
+import { TakeRoute } from './routes/take';
 
 const router = createBrowserRouter([
   {
@@ -29,6 +35,12 @@ const router = createBrowserRouter([
       { path: '/drills', element: <RequireRole><DrillsRoute /></RequireRole> },
       { path: '/drills/print', element: <RequireRole><DrillsPrintRoute /></RequireRole> },
       { path: '/admin/users', element: <RequireRole roles={['admin']}><AdminUsersRoute /></RequireRole> },
+      { path: '/admin/audit', element: <RequireRole roles={['admin']}><AdminAuditRoute /></RequireRole> },
+      { path: '/studio', element: <RequireRole><StudioListRoute /></RequireRole> },
+      { path: '/studio/:id', element: <RequireRole><StudioDetailRoute /></RequireRole> },
+      { path: '/studio/:id/players/:playerId', element: <RequireRole roles={['teacher', 'admin']}><StudioPlayerRoute /></RequireRole> },
+      { path: '/takes/:id', element: <RequireRole><TakeRoute /></RequireRole> },
+      { path: '/invite', element: <InviteRoute /> },
       { path: '*', element: <NotFoundRoute /> },
     ],
   },
