@@ -2,6 +2,7 @@ import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { AppProvider } from './app/provider';
 import { AppRouter } from './app/router';
+import { startTakeSync } from './lib/take-queue';
 import './index.css';
 
 const root = document.getElementById('root');
@@ -13,3 +14,6 @@ createRoot(root).render(
     </AppProvider>
   </StrictMode>,
 );
+
+// Takes an earlier visit could not send go out now (and whenever the connection returns).
+startTakeSync();

@@ -11,6 +11,7 @@ import { HomeRoute } from './routes/home';
 import { IndexRoute } from './routes/index';
 import { InputCheckRoute } from './routes/input-check';
 import { InviteRoute } from './routes/invite';
+import { PracticeRoute } from './routes/practice';
 import { NotFoundRoute } from './routes/not-found';
 import { ResetPasswordRoute } from './routes/reset-password';
 import { SignInRoute } from './routes/sign-in';
@@ -30,6 +31,7 @@ const router = createBrowserRouter([
       { path: '/forgot-password', element: <ForgotPasswordRoute /> },
       { path: '/reset-password', element: <ResetPasswordRoute /> },
       { path: '/input', element: <InputCheckRoute /> },
+      { path: '/practice', element: <RequireRole roles={['player']}><PracticeRoute /></RequireRole> },
       { path: '/home', element: <RequireRole><HomeRoute /></RequireRole> },
       { path: '/account', element: <RequireRole><AccountRoute /></RequireRole> },
       { path: '/drills', element: <RequireRole><DrillsRoute /></RequireRole> },

@@ -67,3 +67,12 @@ export async function openBrowser(appUrl: string, opts: { fakeMidi?: boolean; mi
     },
   };
 }
+
+/** Signs in through the sign-in page and waits for the home page. */
+export async function signInThroughPage(page: Page, appUrl: string, user: { email: string; password: string }) {
+  await page.goto(`${appUrl}/sign-in`, { waitUntil: 'networkidle' });
+  await page.getByLabel('E-mail').fill(user.email);
+  await page.getByLabel('Password').fill(user.password);
+  await page.getByLabel('Password').press('Enter');
+  await page.waitForURL(/\/home$/);
+}

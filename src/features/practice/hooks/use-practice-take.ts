@@ -1,0 +1,143 @@
+import type { Drill, ScoreOptions, ScoreUpdate } from '@shared/engine';
+import { useCallback, useEffect, useRef, useState } from 'react';
+import { getNoteInput } from '@/hooks/use-note-input';
+import { type ClickMode, startBacking } from '../lib/practice-audio';
+import { type FinishedTake, markClass, TakeSession } from '../lib/take-session';
+
+export type TakePhase = 'idle' | 'count-in' | 'playing' | 'done';
+
+export interface TakeSetup {
+  drill: Drill;
+  options: ScoreOptions;
+  countInMeasures: number;
+  click: ClickMode;
+  pad: boolean;
+  latencyMs: number;
+  volumeDb: number;
+}
+
+/**
+ * Runs one take at a time: count-in, live marks from the scorer as notes arrive, missed notes
+ * as their windows close (a tick every animation frame), and the finished take.
+ */
+export function usePracticeTake(onFinished: (take: FinishedTake, session: TakeSession) => void) {
+  const [phase, setPhase] = useState<TakePhase>('idle');
+  const [marks, setMarks] = useState<Map<number, string>>(new Map());
+  const [current, setCurrent] = useState<number | null>(null);
+  const [origin, setOrigin] = useState<number | null>(null);
+  const [finished, setFinished] = useState<FinishedTake | null>(null);
+  const session = useRef<TakeSession | null>(null);
+  const backing = useRef<{ stop(): void } | null>(null);
+  const raf = useRef<number | null>(null);
+  const onFinishedRef = useRef(onFinished);
+  onFinishedRef.current = onFinished;
+
+  const applyUpdates = useCallback((updates: ScoreUpdate[]) => {
+    if (updates.length === 0) return;
+    setMarks((prev) => {
+      const next = new Map(prev);
+      for (const u of updates) next.set(u.index, markClass({ result: u.result, settled: u.settled }));
+      return next;
+    });
+  }, []);
+
+  const end = useCallback(
+    (stoppedAtMs: number | null) => {
+      const s = session.current;
+      if (!s) return;
+      if (raf.current !== null) cancelAnimationFrame(raf.current);
+      raf.current = null;
+      backing.current?.stop();
+      backing.current = null;
+      const take = s.finish(stoppedAtMs);
+      setMarks(new Map(take.score.results.map((r, i) => [i, markClass({ result: r, settled: true })])));
+      setCurrent(null);
+      setFinished(take);
+      setPhase('done');
+      onFinishedRef.current(take, s);
+    },
+    [],
+  );
+
+  // Notes from every input go to the running take.
+  useEffect(
+    () =>
+      getNoteInput().onNote((e) => {
+        const s = session.current;
+        if (!s || s.snapshot().phase === 'done') return;
+        applyUpdates(s.note(e));
+      }),
+    [applyUpdates],
+  );
+
+  const loop = useCallback(() => {
+    const s = session.current;
+    if (!s) return;
+    const { updates, currentChanged, over } = s.frame();
+    applyUpdates(updates);
+    if (currentChanged) setCurrent(s.snapshot().current);
+    const p = s.snapshot().phase;
+    setPhase((old) => (old === p ? old : p));
+    if (over) {
+      end(null);
+      return;
+    }
+    raf.current = requestAnimationFrame(loop);
+  }, [applyUpdates, end]);
+
+  const start = useCallback(
+    (setup: TakeSetup) => {
+      if (raf.current !== null) cancelAnimationFrame(raf.current);
+      backing.current?.stop();
+      const { drill } = setup;
+      const measureMs = ((drill.spec.meter[0] * 4) / drill.spec.meter[1]) * (60000 / setup.options.tempo);
+      // A short lead before the count-in so its first click is never cut off.
+      const lead = 150;
+      const s = new TakeSession(drill, setup.options, lead + setup.countInMeasures * measureMs, setup.latencyMs);
+      session.current = s;
+      setOrigin(s.origin);
+      setMarks(new Map());
+      setFinished(null);
+      setCurrent(null);
+      setPhase(setup.countInMeasures > 0 ? 'count-in' : 'playing');
+      startBacking(drill, { originPerf: s.origin, countInMeasures: setup.countInMeasures, click: setup.click, pad: setup.pad, volumeDb: setup.volumeDb })
+        .then((b) => {
+          if (session.current === s) backing.current = b;
+          else b.stop();
+        })
+        // No sound device: the take still runs on the screen's count-in.
+        .catch(() => undefined);
+      raf.current = requestAnimationFrame(loop);
+    },
+    [loop],
+  );
+
+  const stop = useCallback(() => {
+    const s = session.current;
+    if (!s || s.snapshot().phase === 'done') return;
+    end(Math.max(0, s.clock()));
+  }, [end]);
+
+  const reset = useCallback(() => {
+    if (raf.current !== null) cancelAnimationFrame(raf.current);
+    raf.current = null;
+    backing.current?.stop();
+    backing.current = null;
+    session.current = null;
+    setPhase('idle');
+    setMarks(new Map());
+    setCurrent(null);
+    setFinished(null);
+    setOrigin(null);
+  }, []);
+
+  useEffect(
+    () => () => {
+      if (raf.current !== null) cancelAnimationFrame(raf.current);
+      backing.current?.stop();
+    },
+    [],
+  );
+
+  return { phase, marks, current, origin, finished, start, stop, reset, session };
+}

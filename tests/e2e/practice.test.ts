@@ -1,0 +1,223 @@
+import { readFileSync } from 'node:fs';
+import { createRequire } from 'node:module';
+import { parseMidi } from 'midi-file';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { type DrillSpec, generateDrill, sliceDrill } from '../../shared/engine';
+import { type BrowserSession, openBrowser, signInThroughPage } from '../helpers/browser';
+import { createUser, type TestUser } from '../helpers/factories';
+import { startTestServer } from '../helpers/test-server';
+
+const require = createRequire(import.meta.url);
+
+// A short drill at 100 bpm: a beat is 600 ms, so the default hit window is 75 ms and triplet
+// notes are 200 ms apart (match window 150 ms). Scripted mistakes sit well inside those.
+const SPEC: DrillSpec = { pair: ['F', 'Eb'], pattern: 'weave', direction: 'up', instrument: 'piano', tempo: 100, range: { low: 60, high: 76 } };
+const msPerBeat = 600;
+
+type ScriptNote = { midi: number; t: number };
+
+declare global {
+  interface Window {
+    __fakeMidi: { noteOn(n: number, v: number, ch?: number, ts?: number): void; noteOff(n: number, v?: number, ch?: number, ts?: number): void };
+  }
+}
+
+/** Plays notes on the fake device at their times on the take's clock, each with its own timestamp. */
+async function play(page: BrowserSession['page'], notes: ScriptNote[]) {
+  const origin = Number(await page.getByTestId('practice').getAttribute('data-origin'));
+  expect(origin).toBeGreaterThan(0);
+  await page.evaluate(
+    ({ origin, notes }) => {
+      for (const n of notes) {
+        const at = origin + n.t;
+        setTimeout(
+          () => {
+            window.__fakeMidi.noteOn(n.midi, 90, 1, at);
+            setTimeout(() => window.__fakeMidi.noteOff(n.midi, 0, 1, at + 120), 120);
+          },
+          Math.max(0, at - performance.now()),
+        );
+      }
+    },
+    { origin, notes },
+  );
+}
+
+async function takeDone(page: BrowserSession['page']) {
+  await page.waitForFunction(() => document.querySelector('[data-testid="practice"]')?.getAttribute('data-phase') === 'done', null, { timeout: 20_000 });
+}
+
+async function startTake(page: BrowserSession['page']) {
+  await page.getByRole('button', { name: /Start (the|another) take/ }).click();
+  await page.waitForFunction(() => document.querySelector('[data-testid="practice"]')?.getAttribute('data-origin'));
+}
+
+describe('practice page in Chromium with the fake MIDI device', () => {
+  let server: Awaited<ReturnType<typeof startTestServer>>;
+  let b: BrowserSession;
+  let player: TestUser;
+
+  beforeAll(async () => {
+    server = await startTestServer();
+    player = await createUser(server.db, { role: 'player', name: 'Theo Park' });
+    b = await openBrowser(server.url, { fakeMidi: true, midiOptions: { inputs: [{ id: 'kb', name: 'Fake Keyboard', manufacturer: 'Test' }], outputs: [] } });
+    await signInThroughPage(b.page, server.url, player);
+  });
+  afterAll(async () => {
+    await b?.close();
+    await server?.stop();
+  });
+
+  async function open(spec: DrillSpec) {
+    const { page } = b;
+    await page.goto(`${server.url}/practice?spec=${encodeURIComponent(JSON.stringify(spec))}&order=chromatic`, { waitUntil: 'networkidle' });
+    await page.getByTestId('drill-staff').waitFor();
+    await page.getByLabel('Count-in').selectOption('0');
+    await page.waitForFunction(() => document.querySelector('[data-testid="input-status"]')?.textContent?.includes('Listening to Fake Keyboard'));
+  }
+
+  it('marks a left-out, a wrong and a late note, stores the take with those verdicts, and exports it', async () => {
+    const { page } = b;
+    await open(SPEC);
+    expect(await page.getByTestId('caution-start').textContent()).toMatch(/medical professional/);
+    const drill = generateDrill(SPEC);
+    const script: ScriptNote[] = [];
+    drill.notes.forEach((n, i) => {
+      const t = n.beat * msPerBeat;
+      if (i === 2) return; // left out
+      if (i === 4) script.push({ midi: n.midi + 1, t }); // wrong
+      else if (i === 6) script.push({ midi: n.midi, t: t + 110 }); // late: past the hit window, inside the match window
+      else script.push({ midi: n.midi, t });
+    });
+    await startTake(page);
+    await play(page, script);
+    // The missed note is marked while the take is still running, as soon as its window closes.
+    await page.waitForSelector('[data-note-index="2"].sf-mark-missed', { state: 'attached', timeout: 10_000 });
+    expect(await page.getByTestId('practice').getAttribute('data-phase')).toBe('playing');
+    await takeDone(page);
+
+    const cls = async (i: number) => (await page.locator(`[data-note-index="${i}"]`).getAttribute('class')) ?? '';
+    expect(await cls(0)).toContain('sf-mark-hit');
+    expect(await cls(2)).toContain('sf-mark-missed');
+    expect(await cls(4)).toContain('sf-mark-wrong');
+    expect(await cls(6)).toContain('sf-mark-late');
+    expect(await page.getByTestId('slipped').locator('li').count()).toBe(2);
+
+    // The take lands in PostgreSQL once, scored by the server with the same verdicts.
+    let rows: Array<{ idx: number; verdict: string }> = [];
+    for (let i = 0; i < 50 && rows.length === 0; i++) {
+      const res = await server.pool.query(
+        `SELECT n.idx, n.verdict FROM take_notes n JOIN takes t ON t.id = n.take_id WHERE t.player_id = $1 ORDER BY n.idx`,
+        [player.id],
+      );
+      rows = res.rows;
+      if (rows.length === 0) await new Promise((r) => setTimeout(r, 200));
+    }
+    expect(rows).toHaveLength(drill.notes.length);
+    expect(rows[2].verdict).toBe('missed');
+    expect(rows[4].verdict).toBe('wrong');
+    expect(rows[6].verdict).toBe('late');
+    expect(rows.filter((r) => r.verdict === 'hit')).toHaveLength(drill.notes.length - 3);
+
+    // The download reads back in an independent parser (midi-file) with both tracks.
+    const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Download MIDI' }).click()]);
+    const midi = parseMidi(readFileSync(await download.path()));
+    const names = midi.tracks.map((t) => t.find((e) => e.type === 'trackName')).map((e) => (e && 'text' in e ? e.text : ''));
+    expect(names).toEqual(expect.arrayContaining(['Drill', 'Take']));
+    const takeOns = midi.tracks[names.indexOf('Take')].filter((e) => e.type === 'noteOn' && 'velocity' in e && e.velocity > 0);
+    expect(takeOns).toHaveLength(script.length);
+    expect(b.errors).toEqual([]);
+  });
+
+  it('suggests 4 bpm more after a clean take', async () => {
+    const { page } = b;
+    await open(SPEC);
+    const drill = generateDrill(SPEC);
+    await startTake(page);
+    await play(
+      page,
+      drill.notes.map((n) => ({ midi: n.midi, t: n.beat * msPerBeat })),
+    );
+    await takeDone(page);
+    expect(await page.getByTestId('accuracy').textContent()).toBe('100%');
+    // Common practice for a tempo climb, as the practice issue sets it: clean -> +4 bpm.
+    await page.waitForSelector('[data-testid="tempo-climb"][data-tempo="104"]', { timeout: 10_000 });
+    await page.getByRole('button', { name: 'Use 104 bpm' }).click();
+    expect(await page.getByLabel('Tempo (bpm)').inputValue()).toBe('104');
+  });
+
+  it('climbs the first three ladder steps, fading the notation, each step saved as a take with its measures', async () => {
+    const { page } = b;
+    const spec: DrillSpec = { ...SPEC, range: { low: 60, high: 84 }, tempo: 160 };
+    await open(spec);
+    await page.getByLabel('Ladder (memorise measure by measure)').check();
+    const full = generateDrill(spec);
+    const ms = 60000 / 160;
+    const expectedSteps: Array<[number, number]> = [
+      [1, 1],
+      [2, 2],
+      [1, 2],
+    ];
+    for (const [s, [from, to]] of expectedSteps.entries()) {
+      const step = page.getByTestId('ladder-step');
+      expect(await step.getAttribute('data-step')).toBe(String(s));
+      expect([await step.getAttribute('data-from'), await step.getAttribute('data-to')]).toEqual([String(from), String(to)]);
+      expect(await step.getAttribute('data-fade')).toBe(String(Math.min(2, s)));
+      const slice = sliceDrill(full, from, to);
+      for (let take = 0; take < 2; take++) {
+        await startTake(page);
+        await play(
+          page,
+          slice.notes.map((n) => ({ midi: n.midi, t: n.beat * ms })),
+        );
+        await takeDone(page);
+      }
+    }
+    expect(await page.getByTestId('ladder-step').getAttribute('data-step')).toBe('3');
+    let measures: Array<{ f: number; t: number }> = [];
+    for (let i = 0; i < 50 && measures.length < 6; i++) {
+      const res = await server.pool.query(
+        'SELECT measure_from AS f, measure_to AS t FROM takes WHERE player_id = $1 AND measure_from IS NOT NULL ORDER BY created_at',
+        [player.id],
+      );
+      measures = res.rows;
+      if (measures.length < 6) await new Promise((r) => setTimeout(r, 200));
+    }
+    expect(measures).toEqual([
+      { f: 1, t: 1 },
+      { f: 1, t: 1 },
+      { f: 2, t: 2 },
+      { f: 2, t: 2 },
+      { f: 1, t: 2 },
+      { f: 1, t: 2 },
+    ]);
+  });
+
+  it('scores an alto player who plays written pitch on a keyboard', async () => {
+    const { page } = b;
+    const spec: DrillSpec = { ...SPEC, instrument: 'alto-sax', range: { low: 60, high: 76 } };
+    await open(spec);
+    await page.getByLabel(/My keyboard plays written pitch/).check();
+    const drill = generateDrill(spec);
+    await startTake(page);
+    // From memory: the alto saxophone in Eb sounds a major sixth below written, so written = concert + 9.
+    await play(
+      page,
+      drill.notes.map((n) => ({ midi: n.midi + 9, t: n.beat * msPerBeat })),
+    );
+    await takeDone(page);
+    expect(await page.getByTestId('accuracy').textContent()).toBe('100%');
+  });
+
+  it('has no serious accessibility violation (axe-core)', async () => {
+    const { page } = b;
+    await open(SPEC);
+    await page.addScriptTag({ content: readFileSync(require.resolve('axe-core/axe.min.js'), 'utf8') });
+    const violations = await page.evaluate(async () => {
+      const axe = (window as unknown as { axe: { run(ctx: Document, o: object): Promise<{ violations: Array<{ id: string; impact: string; nodes: unknown[] }> }> } }).axe;
+      const result = await axe.run(document, { resultTypes: ['violations'] });
+      return result.violations.map((v) => ({ id: v.id, impact: v.impact, nodes: v.nodes.length }));
+    });
+    expect(violations.filter((v) => v.impact === 'serious' || v.impact === 'critical')).toEqual([]);
+  });
+});
