@@ -6,6 +6,8 @@ export {};
 const sections: Array<[string, () => Promise<{ run: () => Promise<void> }>]> = [
   ['engine', () => import('./engine')],
   ['scoring', () => import('./scoring')],
+  ['maps', () => import('./maps')],
+  ['takes-load', () => import('./takes-load')],
 ];
 
 const only = process.argv.slice(2);
