@@ -17,7 +17,9 @@ export const NOTES_PER_TAKE = 500;
 
 /** A 500-note take: scale-steps up and down the piano, stopped after its 500th note. */
 export function longTakeSpecs(): DrillSpec[] {
-  return inAllKeys({ pair: ['D', 'C'], pattern: 'scale-steps', direction: 'up-down', range: { low: 21, high: 108 }, instrument: 'piano', tempo: 160 }, 'fourths');
+  return inAllKeys({ pair: ['D', 'C'], pattern: 'scale-steps', direction: 'up-down', range: { low: 21, high: 108 }, instrument: 'piano', tempo: 160 }, 'fourths').map(
+    (d) => d.spec,
+  );
 }
 
 export function longTake(spec: DrillSpec, rand: () => number) {
@@ -52,7 +54,7 @@ export async function seedLongHistory(db: Db, notes = 1_000_000, log = console.l
     log(`long history: ${have.toLocaleString('en')} note results already there`);
     return playerId;
   }
-  const specs = longTakeSpecs().map((d) => d.spec);
+  const specs = longTakeSpecs();
   const rand = prng(have + 17);
   const total = Math.ceil((notes - have) / NOTES_PER_TAKE);
   const started = performance.now();

@@ -82,9 +82,9 @@ export async function run(): Promise<void> {
       .onConflictDoNothing({ target: users.email });
     const auth = await signIn(base);
     const rand = prng(20);
-    const bodies = longTakeSpecs().map((d) => {
-      const take = longTake(d.spec, rand);
-      return JSON.stringify({ id: '__ID__', spec: d.spec, ...take, startedAt: new Date().toISOString() });
+    const bodies = longTakeSpecs().map((spec) => {
+      const take = longTake(spec, rand);
+      return JSON.stringify({ id: '__ID__', spec, ...take, startedAt: new Date().toISOString() });
     });
     console.log(`takes of 500 expected notes, ${Math.round(bodies[0].length / 1024)} kB each`);
     await phase(base, auth, bodies, 5, 2); // warm-up
