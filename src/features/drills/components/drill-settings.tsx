@@ -13,10 +13,18 @@ const pick = (fields: FieldErrors, ...keys: string[]) => {
   return out.length ? out : undefined;
 };
 
+/** JSON with keys in one order (PostgreSQL's jsonb gives them back in its own). */
+function canonical(value: unknown): string {
+  return JSON.stringify(value, (_k, v: unknown) =>
+    v && typeof v === 'object' && !Array.isArray(v) ? Object.fromEntries(Object.entries(v).sort(([a], [b]) => a.localeCompare(b))) : v,
+  );
+}
+
 /** The pattern choice: a preset, one of the saved patterns, or a custom one built in the form. */
 export function patternValue(draft: Draft, saved: CustomPattern[]): string {
   if (typeof draft.pattern === 'string') return draft.pattern;
-  const match = saved.find((p) => JSON.stringify(p.def) === JSON.stringify(draft.pattern));
+  const def = canonical(draft.pattern);
+  const match = saved.find((p) => canonical(p.def) === def);
   return match ? `saved:${match.id}` : 'custom';
 }
 
