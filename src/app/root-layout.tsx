@@ -13,6 +13,7 @@ const navByRole: Record<Role, NavItem[]> = {
   teacher: [
     { to: '/home', label: 'Home' },
     { to: '/studio', label: 'Studio' },
+    { to: '/drills', label: 'Drills' },
   ],
   admin: [
     { to: '/home', label: 'Home' },
