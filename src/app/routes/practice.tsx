@@ -1,4 +1,4 @@
-import { type DrillSpec, inAllKeys, instruments, type ScoreOptions, sliceDrill } from '@shared/engine';
+import { type DrillSpec, generateDrill, inAllKeys, instruments, type ScoreOptions, sliceDrill } from '@shared/engine';
 import { drillKey } from '@shared/practice/drill-identity';
 import { initialLadder, type LadderState, ladderSteps, nextLadderState } from '@shared/practice/ladder';
 import { useQuery, useQueryClient } from '@tanstack/react-query';
@@ -82,7 +82,13 @@ export function PracticeRoute() {
     try {
       return { drills: inAllKeys(spec, opts.order), error: null };
     } catch (err) {
-      return { drills: [], error: err instanceof Error ? err.message : 'This drill cannot be built' };
+      const why = err instanceof Error ? err.message : 'This drill cannot be built';
+      // Some keys may not fit the range; the drill's own key still can be practised.
+      try {
+        return { drills: [generateDrill(spec)], error: `Not every key of the cycle fits this range (${why}); practising this key only.` };
+      } catch {
+        return { drills: [], error: why };
+      }
     }
   }, [spec, opts]);
 
