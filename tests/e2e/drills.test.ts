@@ -121,7 +121,18 @@ describe('the drills page in Chromium', () => {
     const { page } = browser;
     await page.getByLabel('Click').uncheck();
     await page.getByLabel(/Chord pad/).uncheck();
-    const [wavDl] = await Promise.all([page.waitForEvent('download', { timeout: 60_000 }), page.getByRole('button', { name: 'Audio (WAV)' }).click()]);
+    const failed = page
+      .getByRole('alert')
+      .filter({ hasText: 'audio file could not' })
+      .waitFor({ timeout: 60_000 })
+      .then(async () => {
+        throw new Error(`render failed in the page: ${browser.errors.join(' | ')}`);
+      });
+    const [wavDl] = await Promise.all([
+      Promise.race([page.waitForEvent('download', { timeout: 60_000 }), failed]),
+      page.getByRole('button', { name: 'Audio (WAV)' }).click(),
+    ]);
+    failed.catch(() => {});
     const bytes = readFileSync((await wavDl.path())!);
     const rate = bytes.readUInt32LE(24);
     const pcm = bytes.subarray(44);
@@ -136,7 +147,7 @@ describe('the drills page in Chromium', () => {
     wanted.forEach((t, i) => {
       expect(Math.abs(found[i] - t), `onset ${i} at ${t.toFixed(3)} s, found ${found[i].toFixed(3)} s`).toBeLessThan(0.01);
     });
-  });
+  }, 90_000);
 
   it('saves the drill and lists it', async () => {
     const { page } = browser;

@@ -60,7 +60,8 @@ export function AudioPreview({ drill, onNote }: { drill: Drill; onNote: (index: 
     try {
       const { renderDrillWav } = await player();
       downloadBytes(await renderDrillWav(drill, { click, pad, countInMeasures: 1 }), `${fileBase(drill)}.wav`, 'audio/wav');
-    } catch {
+    } catch (err) {
+      console.error(err);
       setError('The audio file could not be made in this browser.');
     }
     setState('idle');
