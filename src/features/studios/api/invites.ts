@@ -31,14 +31,16 @@ export function useAcceptInvite(token: string) {
   });
 }
 
-/** Sign up through the invite: the session changes, so the CSRF token and every query are reset. */
-export function useInviteSignUp(token: string) {
-  const queryClient = useQueryClient();
+/**
+ * Sign up through the invite. The session is a new one, so the page loads afresh on the studio
+ * (every query and the CSRF token start over with it).
+ */
+export function useInviteSignUp(token: string, studioId: string) {
   return useMutation({
     mutationFn: (input: InviteSignUpInput) => api.post<UserResponse>(`/api/invites/${encodeURIComponent(token)}/sign-up`, input),
-    onSuccess: async () => {
+    onSuccess: () => {
       resetCsrfToken();
-      await queryClient.resetQueries();
+      window.location.assign(`/studio/${encodeURIComponent(studioId)}`);
     },
   });
 }

@@ -1,5 +1,5 @@
 import { type FormEvent, useState } from 'react';
-import { Link, useNavigate } from 'react-router-dom';
+import { Link } from 'react-router-dom';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { FormMessage } from '@/components/ui/form-message';
@@ -14,8 +14,7 @@ import { useAcceptInvite, useInvitePreview, useInviteSignUp } from '../api/invit
 export function InvitePanel({ token, signedInAs }: { token: string; signedInAs: { name: string; role: string } | null }) {
   const preview = useInvitePreview(token);
   const accept = useAcceptInvite(token);
-  const signUp = useInviteSignUp(token);
-  const navigate = useNavigate();
+  const signUp = useInviteSignUp(token, preview.data?.invite.studio.id ?? '');
   const [name, setName] = useState('');
   const [password, setPassword] = useState('');
 
@@ -26,7 +25,7 @@ export function InvitePanel({ token, signedInAs }: { token: string; signedInAs: 
   const joined = accept.data?.studio.studioId;
   const onSignUp = (e: FormEvent) => {
     e.preventDefault();
-    signUp.mutate({ name, password }, { onSuccess: () => navigate(`/studio/${invite.studio.id}`) });
+    signUp.mutate({ name, password });
   };
   const fields = signUp.error instanceof ApiError ? (signUp.error.fields ?? {}) : {};
   const next = encodeURIComponent(`/invite?token=${token}`);
