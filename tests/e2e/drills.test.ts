@@ -160,8 +160,32 @@ describe('the drills page in Chromium', () => {
     expect(body.drills.find((d) => d.name === 'D7 pair for Tuesday')?.spec.pair).toEqual(['C', 'D']);
   });
 
+  it.each([
+    { pair: ['Bbm', 'Ab'], pattern: 'scale-steps', direction: 'up-down', instrument: 'trombone', meter: [3, 4], tempo: 80 },
+    { pair: ['G', 'Db'], pattern: 'weave', direction: 'down', instrument: 'guitar', meter: [7, 8], tempo: 132, chord: 'G7' },
+    { pair: ['A', 'G'], pattern: 'leap-back', direction: 'up', instrument: 'tenor-sax', meter: [6, 8], tempo: 90, chord: 'Em7' },
+    { pair: ['C', 'D'], pattern: 'stack', direction: 'up', instrument: 'trumpet', meter: [5, 4], tempo: 200, chord: 'Cmaj7#11' },
+    {
+      pair: ['D', 'C'],
+      pattern: { name: 'Sixteenth climb', subdivision: 'sixteenth', source: 'scale', degrees: [0, 2, 1, 3], step: 1 },
+      direction: 'up',
+      instrument: 'flute',
+      meter: [4, 4],
+      tempo: 60,
+    },
+  ])('draws $pattern $direction for $instrument in $meter, every note, from the address alone', async (spec) => {
+    const { page } = browser;
+    const expected = generateDrill(spec as Parameters<typeof generateDrill>[0]);
+    await page.goto(`${server.url}/drills?spec=${encodeURIComponent(JSON.stringify(spec))}`, { waitUntil: 'networkidle' });
+    await page.waitForFunction((n) => document.querySelectorAll('[data-testid="drill-staff"] [data-note-index]').length === n, expected.notes.length);
+    const written = await page.locator('[data-testid="drill-staff"] [data-note-index]').evaluateAll((els) => els.map((el) => el.getAttribute('data-written')));
+    expect(written).toEqual(expected.notes.map((n) => n.written));
+    expect(browser.errors).toEqual([]);
+  });
+
   it('prints the key cycle: 12 staves in written pitch, then a PDF', async () => {
     const { page } = browser;
+    await page.goto(`${server.url}/drills?spec=${encodeURIComponent(JSON.stringify(EXPECTED_SPEC))}&order=chromatic`, { waitUntil: 'networkidle' });
     await page.getByRole('link', { name: /Printable key cycle/ }).click();
     await page.waitForURL(/\/drills\/print\?/);
     await page.getByText('All 12 keys are drawn.').waitFor({ timeout: 30_000 });
