@@ -7,11 +7,14 @@ import { AdminUsersRoute } from './routes/admin-users';
 import { DrillsRoute } from './routes/drills';
 import { DrillsPrintRoute } from './routes/drills-print';
 import { ForgotPasswordRoute } from './routes/forgot-password';
+import { HistoryRoute } from './routes/history';
+import { HistoryTakeRoute } from './routes/history-take';
 import { HomeRoute } from './routes/home';
 import { IndexRoute } from './routes/index';
 import { InputCheckRoute } from './routes/input-check';
 import { InviteRoute } from './routes/invite';
 import { PracticeRoute } from './routes/practice';
+import { ProgressRoute } from './routes/progress';
 import { NotFoundRoute } from './routes/not-found';
 import { ResetPasswordRoute } from './routes/reset-password';
 import { SignInRoute } from './routes/sign-in';
@@ -42,6 +45,9 @@ const router = createBrowserRouter([
       { path: '/studio/:id', element: <RequireRole><StudioDetailRoute /></RequireRole> },
       { path: '/studio/:id/players/:playerId', element: <RequireRole roles={['teacher', 'admin']}><StudioPlayerRoute /></RequireRole> },
       { path: '/takes/:id', element: <RequireRole><TakeRoute /></RequireRole> },
+      { path: '/history', element: <RequireRole roles={['player', 'teacher']}><HistoryRoute /></RequireRole> },
+      { path: '/history/:id', element: <RequireRole roles={['player', 'teacher']}><HistoryTakeRoute /></RequireRole> },
+      { path: '/progress', element: <RequireRole roles={['player', 'teacher']}><ProgressRoute /></RequireRole> },
       { path: '/invite', element: <InviteRoute /> },
       { path: '*', element: <NotFoundRoute /> },
     ],

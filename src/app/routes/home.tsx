@@ -4,6 +4,7 @@ import { useMe } from '@/features/auth/api/session';
 import { MyAssignments } from '@/features/studios/components/my-assignments';
 import { NotificationList } from '@/features/studios/components/notification-list';
 import { StudioSummary } from '@/features/studios/components/studio-summary';
+import { WhatNext } from '@/features/maps/components/what-next';
 
 function NextStep({ to, title, text }: { to: string; title: string; text: string }) {
   return (
@@ -21,6 +22,11 @@ function PlayerHome() {
         <NextStep to="/drills" title="Find a pair" text="Type the chord you're soloing over; pick a pair whose six notes fit it and a pattern to drill." />
         <NextStep to="/practice" title="Practise" text="Plug in your keyboard or wind controller, take the count-in, and play the drill through the key cycle." />
       </div>
+      <h2 className="mt-8 text-lead font-bold">What next</h2>
+      <WhatNext />
+      <p className="mt-2 text-caption text-muted">
+        From your <Link to="/progress" className="underline">key, range and beat maps</Link> and your <Link to="/history" className="underline">takes</Link>.
+      </p>
       <h2 className="mt-8 text-lead font-bold">Assignments</h2>
       <MyAssignments />
       <h2 className="mt-8 text-lead font-bold">Your studio</h2>

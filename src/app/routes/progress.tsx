@@ -1,0 +1,48 @@
+import { useSearchParams } from 'react-router-dom';
+import type { MapFilters } from '@/features/maps/api/maps';
+import { BeatMap } from '@/features/maps/components/beat-map';
+import { KeyMap } from '@/features/maps/components/key-map';
+import { PracticeCalendar } from '@/features/maps/components/practice-calendar';
+import { ProgressCharts } from '@/features/maps/components/progress-charts';
+import { RangeMap } from '@/features/maps/components/range-map';
+
+/** The key, range and beat maps and the charts; filters live in the address. */
+export function ProgressRoute() {
+  const [params, setParams] = useSearchParams();
+  const filters: MapFilters = Object.fromEntries(
+    (['instrument', 'pattern', 'pair', 'from', 'to', 'player'] as const).map((k) => [k, params.get(k) ?? undefined]).filter(([, v]) => v),
+  );
+  const set = (k: string, v: string) => {
+    const p = new URLSearchParams(params);
+    if (v) p.set(k, v);
+    else p.delete(k);
+    setParams(p, { replace: true });
+  };
+  return (
+    <section className="grid gap-8">
+      <header>
+        <h1 className="text-display">Progress</h1>
+        <p className="mt-2 text-muted">Darker cells: more notes not hit. Hover or focus a cell for its numbers; each map also reads as a table.</p>
+      </header>
+      <form className="flex flex-wrap gap-3" aria-label="Filter the maps" onSubmit={(e) => e.preventDefault()}>
+        {(['instrument', 'pattern', 'pair'] as const).map((k) => (
+          <label key={k} className="grid gap-1 text-caption font-semibold capitalize">
+            {k}
+            <input defaultValue={params.get(k) ?? ''} onBlur={(e) => set(k, e.target.value.trim())} className="w-32 rounded-lg border border-line bg-raised px-2 py-1" />
+          </label>
+        ))}
+        {(['from', 'to'] as const).map((k) => (
+          <label key={k} className="grid gap-1 text-caption font-semibold capitalize">
+            {k}
+            <input type="date" value={params.get(k) ?? ''} onChange={(e) => set(k, e.target.value)} className="rounded-lg border border-line bg-raised px-2 py-1" />
+          </label>
+        ))}
+      </form>
+      <KeyMap filters={filters} />
+      <RangeMap filters={filters} />
+      <BeatMap filters={filters} />
+      <ProgressCharts filters={filters} />
+      <PracticeCalendar filters={filters} />
+    </section>
+  );
+}

@@ -1,0 +1,115 @@
+import { keepPreviousData, queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { ListTakesQuery, ListTakesResponse } from '@shared/schemas/history';
+import type { CreateTakeInput } from '@shared/schemas/takes';
+import type { DrillSpec, PlayedNote, ScoreOptions, TakeScore } from '@shared/engine';
+import { ApiError, api } from '@/lib/api-client';
+
+export const takesKey = ['takes'] as const;
+
+/** A stored take as GET /api/takes/:id shows it. */
+export interface TakeDetail {
+  id: string;
+  playerId: string;
+  spec: DrillSpec;
+  options: ScoreOptions;
+  measures: [number, number] | null;
+  stoppedAtMs: number | null;
+  played: PlayedNote[];
+  score: TakeScore;
+  key: string;
+  pattern: string;
+  pair: string;
+  instrument: string;
+  tempo: number;
+  accuracy: number;
+  meanOffsetMs: number | null;
+  startedAt: string;
+}
+
+export type TakeListParams = Partial<ListTakesQuery>;
+
+function toSearch(params: Record<string, string | number | undefined>): string {
+  const q = new URLSearchParams();
+  for (const [k, v] of Object.entries(params)) if (v !== undefined && v !== '') q.set(k, String(v));
+  const s = q.toString();
+  return s ? `?${s}` : '';
+}
+
+export function fetchTakes(params: TakeListParams): Promise<ListTakesResponse> {
+  return api.get<ListTakesResponse>(`/api/takes${toSearch(params)}`);
+}
+
+export const takesQueryOptions = (params: TakeListParams) =>
+  queryOptions({ queryKey: [...takesKey, 'list', params], queryFn: () => fetchTakes(params), placeholderData: keepPreviousData });
+
+/** One page of the history, sorted and filtered on the server. */
+export function useTakes(params: TakeListParams) {
+  return useQuery(takesQueryOptions(params));
+}
+
+export const takeQueryOptions = (id: string) =>
+  queryOptions({ queryKey: [...takesKey, 'one', id], queryFn: () => api.get<{ take: TakeDetail }>(`/api/takes/${encodeURIComponent(id)}`) });
+
+export function useTake(id: string) {
+  return useQuery(takeQueryOptions(id));
+}
+
+export function useDeleteTake() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (id: string) => api.delete<void>(`/api/takes/${encodeURIComponent(id)}`),
+    // The maps count every take, so they go stale with it.
+    onSuccess: () => Promise.all([queryClient.invalidateQueries({ queryKey: takesKey }), queryClient.invalidateQueries({ queryKey: ['maps'] })]),
+  });
+}
+
+export const takeMidiUrl = (id: string) => `/api/takes/${encodeURIComponent(id)}/midi`;
+
+export interface ImportInput {
+  file: File;
+  spec: CreateTakeInput['spec'];
+  offsetMs?: number;
+  onProgress?: (fraction: number) => void;
+}
+
+async function csrfToken(): Promise<string> {
+  const res = await fetch('/api/auth/csrf', { credentials: 'same-origin' });
+  return ((await res.json()) as { token: string }).token;
+}
+
+/** Sends a MIDI file with XMLHttpRequest, whose upload events give the progress bar. */
+export async function importTake({ file, spec, offsetMs, onProgress }: ImportInput): Promise<{ take: TakeDetail }> {
+  const form = new FormData();
+  form.set('file', file);
+  form.set('spec', JSON.stringify(spec));
+  if (offsetMs !== undefined) form.set('offsetMs', String(offsetMs));
+  const token = await csrfToken();
+  return new Promise((resolve, reject) => {
+    const xhr = new XMLHttpRequest();
+    xhr.open('POST', '/api/takes/import');
+    xhr.setRequestHeader('X-CSRF-Token', token);
+    xhr.upload.onprogress = (e) => {
+      if (e.lengthComputable) onProgress?.(e.loaded / e.total);
+    };
+    xhr.onerror = () => reject(new ApiError(0, 'offline', 'The server could not be reached; check the connection and try again'));
+    xhr.onload = () => {
+      let body: { take?: TakeDetail; error?: { code?: string; message?: string; fields?: Record<string, string[]> } } = {};
+      try {
+        body = JSON.parse(xhr.responseText);
+      } catch {
+        body = {};
+      }
+      if (xhr.status === 201 && body.take) resolve({ take: body.take });
+      else reject(new ApiError(xhr.status, body.error?.code ?? 'error', body.error?.message ?? 'The file was not imported', body.error?.fields));
+    };
+    xhr.send(form);
+  });
+}
+
+export function useImportTake() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: importTake,
+    onSuccess: () => Promise.all([queryClient.invalidateQueries({ queryKey: takesKey }), queryClient.invalidateQueries({ queryKey: ['maps'] })]),
+  });
+}

@@ -1,0 +1,52 @@
+import { KEYS } from '@shared/schemas/history';
+import { useState } from 'react';
+import { CartesianGrid, Legend, Line, LineChart, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
+import { type MapFilters, useTimeline } from '../api/maps';
+import { MapTable } from './map-table';
+
+/** Accuracy (mean) and tempo (highest) per practice day, for one key at a time. */
+export function ProgressCharts({ filters }: { filters: MapFilters }) {
+  const { data, error } = useTimeline(filters);
+  const points = data?.points ?? [];
+  const keys = KEYS.filter((k) => points.some((p) => p.key === k));
+  const [chosen, setChosen] = useState<string>('');
+  const key: string = chosen && (keys as string[]).includes(chosen) ? chosen : (keys[0] ?? '');
+  const series = points.filter((p) => p.key === key).map((p) => ({ day: p.day, accuracy: Math.round(p.accuracy * 100), tempo: p.tempo }));
+  return (
+    <section className="grid gap-3" aria-label="Accuracy and tempo over time">
+      <div className="flex flex-wrap items-center gap-3">
+        <h2 className="text-lead font-bold">Accuracy and tempo, key of</h2>
+        <select aria-label="Key" value={key} onChange={(e) => setChosen(e.target.value)} className="rounded-lg border border-line bg-raised px-2 py-1">
+          {keys.map((k) => (
+            <option key={k}>{k}</option>
+          ))}
+        </select>
+      </div>
+      {error ? <p role="alert">{error.message}</p> : null}
+      {series.length > 0 ? (
+        <>
+          <div className="h-64 w-full" aria-hidden="true">
+            <ResponsiveContainer width="100%" height="100%">
+              <LineChart data={series} margin={{ top: 8, right: 16, bottom: 8, left: 0 }}>
+                <CartesianGrid strokeDasharray="3 3" opacity={0.4} />
+                <XAxis dataKey="day" tick={{ fontSize: 11 }} />
+                <YAxis yAxisId="acc" domain={[0, 100]} unit="%" tick={{ fontSize: 11 }} />
+                <YAxis yAxisId="tempo" orientation="right" tick={{ fontSize: 11 }} />
+                <Tooltip />
+                <Legend />
+                <Line yAxisId="acc" type="monotone" dataKey="accuracy" name="accuracy (%)" stroke="#00204d" strokeWidth={2} dot={false} />
+                <Line yAxisId="tempo" type="monotone" dataKey="tempo" name="tempo (bpm)" stroke="#c9a227" strokeWidth={2} strokeDasharray="5 3" dot={false} />
+              </LineChart>
+            </ResponsiveContainer>
+          </div>
+          <details>
+            <summary className="cursor-pointer text-caption text-muted">Figures as a table</summary>
+            <MapTable caption={`Accuracy and tempo per day, key of ${key}`} head={['Day', 'Accuracy', 'Tempo']} rows={series.map((s) => [s.day, `${s.accuracy}%`, s.tempo])} />
+          </details>
+        </>
+      ) : (
+        <p className="text-muted">No takes yet.</p>
+      )}
+    </section>
+  );
+}
