@@ -36,6 +36,14 @@ interface Group {
   triplet: boolean;
 }
 
+const LETTERS = 'CDEFGAB';
+/** Diatonic steps from C0 of a spelled note ("Eb5" -> 5 * 7 + 2). */
+function diatonic(written: string): number {
+  const m = NOTE_RE.exec(written);
+  if (!m) return 34;
+  return Number(m[3]) * 7 + LETTERS.indexOf(m[1].toUpperCase());
+}
+
 const measureQuarters = (meter: [number, number]) => (meter[0] * 4) / meter[1];
 
 /** Quarter notes per beam group: a dotted quarter in 6/8, else a quarter. */
@@ -110,8 +118,20 @@ export async function renderStaff(host: HTMLElement, drill: Drill, width: number
     if (total / usable > 0.55 || systems.length === 1) s.widths = s.widths.map((w) => Math.floor(w * Math.min(fill, systems.length === 1 ? 1.6 : fill)));
   }
 
-  const systemHeight = 130;
-  const height = systems.length * systemHeight + 20;
+  // Each system gets the room its highest and lowest notes need (ledger lines, stems, brackets).
+  const [topLine, bottomLine] = clef === 'bass' ? [26, 18] : [38, 30]; // diatonic steps of A3/G2, F5/E4
+  const staveYs: number[] = [];
+  let cursor = 0;
+  for (const system of systems) {
+    const steps = system.measures.flatMap((mi) => byMeasure[mi].map((n) => diatonic(n.written)));
+    const above = Math.max(0, Math.max(...steps, topLine) - topLine) * 5;
+    const below = Math.max(0, bottomLine - Math.min(...steps, bottomLine)) * 5;
+    // VexFlow draws the top line 40px below the stave's y, the bottom line 40px under that.
+    const y = cursor + 10 + above;
+    staveYs.push(y);
+    cursor = y + 80 + 50 + below;
+  }
+  const height = cursor + 10;
   const renderer = new Renderer(host as HTMLDivElement, Renderer.Backends.SVG);
   renderer.resize(width, height);
   const ctx = renderer.getContext();
@@ -133,7 +153,7 @@ export async function renderStaff(host: HTMLElement, drill: Drill, width: number
 
   systems.forEach((system, si) => {
     let x = 6;
-    const y = 20 + si * systemHeight;
+    const y = staveYs[si];
     system.measures.forEach((mi, k) => {
       const w = system.widths[k];
       const stave = new Stave(x, y, w);
