@@ -68,7 +68,7 @@ function samePitch(d: AlignData, e: number, p: number): boolean {
 export function pairCode(d: AlignData, i: number, j: number): number {
   const off = d.playTime[j] - d.expTime[i];
   const abs = Math.abs(off);
-  if (abs > d.win) return -1;
+  if (off > d.win || -off > d.win) return -1;
   if (!samePitch(d, d.expPitch[i], d.playPitch[j])) return WRONG;
   if (d.free || abs <= d.hit) return HIT;
   return off < 0 ? EARLY : LATE;
@@ -93,15 +93,17 @@ export function buildGrid(d: AlignData, a: number, b: number, rowEnd: number, m:
   let pHi = b;
   for (let r = 0; r < rows; r++) {
     const i = a + r;
+    // every window test is written as a difference against W, exactly as pairCode does, so
+    // that rounding can never let the band and the pair test disagree
     if (r > 0) {
-      const edge = T[i - 1] - W;
-      while (pLo < m && S[pLo] < edge) pLo++;
+      const t = T[i - 1];
+      while (pLo < m && t - S[pLo] > W) pLo++;
     }
     let h: number;
     if (i >= n) h = m;
     else {
-      const edge = T[i] + W;
-      while (pHi < m && S[pHi] <= edge) pHi++;
+      const t = T[i];
+      while (pHi < m && S[pHi] - t <= W) pHi++;
       h = pHi;
     }
     const l = r === 0 ? b : pLo;

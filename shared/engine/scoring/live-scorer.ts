@@ -55,7 +55,7 @@ export function createLiveScorer(expected: DrillNote[], options: ScoreOptions): 
   function frontierStart(): number {
     const m = d.playTime.length;
     if (d.free) k0 = Math.min(n, Math.max(0, m - W));
-    else while (k0 < n && d.expTime[k0] + W < clock) k0++;
+    else while (k0 < n && clock - d.expTime[k0] > W) k0++;
     return Math.max(k0, a);
   }
 
@@ -65,7 +65,7 @@ export function createLiveScorer(expected: DrillNote[], options: ScoreOptions): 
     const kk = frontierStart();
     lastKk = kk;
     const last = m > 0 ? d.playTime[m - 1] : Number.NEGATIVE_INFINITY;
-    while (rowsWithPlay < n && d.expTime[rowsWithPlay] - W <= last) rowsWithPlay++;
+    while (rowsWithPlay < n && d.expTime[rowsWithPlay] - last <= W) rowsWithPlay++;
     const rowEnd = Math.min(n, Math.max(rowsWithPlay, kk, a));
     if (!grid || grid.a !== a || grid.b !== b || grid.m !== m || grid.rowEnd !== rowEnd) {
       grid = buildGrid(d, a, b, rowEnd, m);
