@@ -1,7 +1,12 @@
 import { EngineError } from '../errors';
 import type { DrillNote, ScoreOptions } from '../types';
 
-/** Free mode's band, in notes: how far apart two positions may be and still be paired. */
+/**
+ * Free mode's band, in notes: how far apart two positions may be and still be paired.
+ *
+ * @example
+ * FREE_BAND // 64: the 70th note played can stand for expected notes 6 to 134, no further
+ */
 export const FREE_BAND = 64;
 
 /**
