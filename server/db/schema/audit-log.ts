@@ -8,7 +8,7 @@ export const auditLog = pgTable(
     id: bigserial('id', { mode: 'number' }).primaryKey(),
     actorId: uuid('actor_id').references(() => users.id, { onDelete: 'set null' }),
     targetId: uuid('target_id').references(() => users.id, { onDelete: 'set null' }),
-    action: text('action').$type<'role.change' | 'account.disable' | 'account.enable'>().notNull(),
+    action: text('action').$type<'role.change' | 'account.disable' | 'account.enable' | 'purchase.refund'>().notNull(),
     detail: jsonb('detail').$type<Record<string, string | boolean>>().notNull(),
     at: timestamp('at', { withTimezone: true }).notNull().defaultNow(),
   },

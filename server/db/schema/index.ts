@@ -17,3 +17,5 @@ export * from './notifications';
 export * from './audit-log';
 export * from './weekly-summaries';
 export * from './map-summaries';
+export * from './books';
+export * from './purchases';
