@@ -11,8 +11,10 @@ import { requireCsrf } from './middleware/csrf';
 import { errorHandler, notFoundApi } from './middleware/error-handler';
 import { sessionMiddleware } from './middleware/session';
 import { adminRouter } from './routes/admin';
+import { adminPurchasesRouter } from './routes/admin-purchases';
 import { assignmentsRouter } from './routes/assignments';
 import { authRouter } from './routes/auth';
+import { booksRouter } from './routes/books';
 import { devRouter } from './routes/dev';
 import { drillsRouter } from './routes/drills';
 import { healthRouter } from './routes/health';
@@ -20,6 +22,7 @@ import { invitesRouter } from './routes/invites';
 import { notificationsRouter } from './routes/notifications';
 import { mapsRouter } from './routes/maps';
 import { patternsRouter } from './routes/patterns';
+import { paymentsWebhook } from './routes/payments';
 import { remarksRouter } from './routes/remarks';
 import { studiosRouter } from './routes/studios';
 import { practiceRouter } from './routes/practice';
@@ -46,6 +49,8 @@ export function createApp(deps: AppDeps) {
   app.disable('x-powered-by');
   if (env.TRUST_PROXY === '1') app.set('trust proxy', 1);
 
+  // Raw bytes for the signature check, before the JSON parser; no session, no CSRF token.
+  app.post('/api/payments/webhook', express.raw({ type: 'application/json', limit: '1mb' }), paymentsWebhook(ctx));
   app.use('/api', sessionMiddleware(env, pool));
   app.use('/api', express.json({ limit: '2mb' }));
   app.use('/api', requireCsrf);
@@ -53,7 +58,9 @@ export function createApp(deps: AppDeps) {
 
   app.use('/api/health', healthRouter(ctx));
   app.use('/api/auth', authRouter(ctx));
+  app.use('/api/admin/purchases', adminPurchasesRouter(ctx));
   app.use('/api/admin', adminRouter(ctx));
+  app.use('/api/books', booksRouter(ctx));
   app.use('/api/studios', studiosRouter(ctx));
   app.use('/api/invites', invitesRouter(ctx));
   app.use('/api/assignments', assignmentsRouter(ctx));

@@ -22,14 +22,23 @@ const EnvSchema = z
     MAIL_FROM: z.string().min(3).default('Sixfold <desk@sixfold.test>'),
     // Failed sign-ins from one IP within a minute before a 429; tests raise it, since they all come from 127.0.0.1.
     SIGN_IN_IP_LIMIT: z.coerce.number().int().min(1).default(5),
+    // Payments: the hosted checkout's SDK; outside production it talks to the local fake on this host and port.
+    STRIPE_SECRET_KEY: z.string().min(8, 'STRIPE_SECRET_KEY looks too short').optional(),
+    STRIPE_WEBHOOK_SECRET: z.string().min(8, 'STRIPE_WEBHOOK_SECRET looks too short').optional(),
+    PAYMENTS_API_HOST: z.string().min(1).optional(),
+    PAYMENTS_API_PORT: z.coerce.number().int().min(0).max(65535).optional(),
+    PAYMENTS_API_PROTOCOL: z.enum(['http', 'https']).optional(),
   })
   .superRefine((env, ctx) => {
     if (env.NODE_ENV === 'production' && !env.SESSION_SECRET) {
       ctx.addIssue({ code: 'custom', path: ['SESSION_SECRET'], message: 'SESSION_SECRET is required in production' });
     }
+    for (const name of ['STRIPE_SECRET_KEY', 'STRIPE_WEBHOOK_SECRET'] as const) {
+      if (env.NODE_ENV === 'production' && !env[name]) ctx.addIssue({ code: 'custom', path: [name], message: `${name} is required in production` });
+    }
   });
 
-export type Env = z.infer<typeof EnvSchema> & { SESSION_SECRET: string };
+export type Env = z.infer<typeof EnvSchema> & { SESSION_SECRET: string; STRIPE_SECRET_KEY: string; STRIPE_WEBHOOK_SECRET: string };
 
 export class EnvError extends Error {}
 
@@ -39,5 +48,11 @@ export function parseEnv(source: NodeJS.ProcessEnv = process.env): Env {
     const lines = parsed.error.issues.map((i) => `  - ${i.path.join('.') || '(env)'}: ${i.message}`);
     throw new EnvError(`Bad environment variables:\n${lines.join('\n')}`);
   }
-  return { ...parsed.data, SESSION_SECRET: parsed.data.SESSION_SECRET ?? 'sixfold-development-secret-not-for-production' };
+  return {
+    ...parsed.data,
+    SESSION_SECRET: parsed.data.SESSION_SECRET ?? 'sixfold-development-secret-not-for-production',
+    // Development defaults, known to the local checkout fake; production must set both.
+    STRIPE_SECRET_KEY: parsed.data.STRIPE_SECRET_KEY ?? 'sk_test_sixfold_local_fake',
+    STRIPE_WEBHOOK_SECRET: parsed.data.STRIPE_WEBHOOK_SECRET ?? 'whsec_sixfold_local_fake',
+  };
 }

@@ -5,6 +5,8 @@ import { seedDemo } from './db/seed';
 import { type Env, EnvError, parseEnv } from './env';
 import { type FakeSmtp, startFakeSmtp } from './mail/fake-smtp';
 import { mailerFromEnv } from './mail/mailer';
+import { paymentsEndpoint } from './payments/client';
+import { type FakeCheckout, startFakeCheckout } from './payments/fake-checkout';
 import { scheduleWeeklySummaries } from './services/studios/weekly-summary';
 
 /** Outside production the server runs its own fake SMTP server; another instance's is reused. */
@@ -17,6 +19,29 @@ async function startMailFake(env: Env, db: ReturnType<typeof createDb>['db']): P
   } catch (err) {
     if ((err as NodeJS.ErrnoException).code === 'EADDRINUSE') {
       console.log(`Port ${env.SMTP_PORT} is taken (another Sixfold's fake SMTP server?); sending mail there`);
+      return null;
+    }
+    throw err;
+  }
+}
+
+/** Outside production the server runs the local checkout fake too; another instance's is reused. */
+async function startPaymentsFake(env: Env): Promise<FakeCheckout | null> {
+  if (env.NODE_ENV === 'production') return null;
+  const { host, port } = paymentsEndpoint(env);
+  try {
+    const fake = await startFakeCheckout({
+      host,
+      port,
+      secretKey: env.STRIPE_SECRET_KEY,
+      webhookSecret: env.STRIPE_WEBHOOK_SECRET,
+      webhookUrl: `http://${env.HOST}:${env.PORT}/api/payments/webhook`,
+    });
+    console.log(`Checkout goes to a local payment fake at ${fake.url}; no money moves`);
+    return fake;
+  } catch (err) {
+    if ((err as NodeJS.ErrnoException).code === 'EADDRINUSE') {
+      console.log(`Port ${port} is taken (another Sixfold's payment fake?); checkout goes there`);
       return null;
     }
     throw err;
@@ -38,6 +63,7 @@ async function main() {
   await runMigrations(db);
   if (env.SEED_DEMO === '1') await seedDemo(db);
   const fake = await startMailFake(env, db);
+  const paymentsFake = await startPaymentsFake(env);
   if (env.NODE_ENV === 'production' && !env.PUBLIC_URL) {
     console.warn('PUBLIC_URL is not set: password-reset e-mails will not be sent until it is');
   }
@@ -55,7 +81,7 @@ async function main() {
   const shutdown = () => {
     stopSummaries();
     server.close();
-    Promise.allSettled([fake?.close()]).finally(() => pool.end().finally(() => process.exit(0)));
+    Promise.allSettled([fake?.close(), paymentsFake?.close()]).finally(() => pool.end().finally(() => process.exit(0)));
   };
   process.on('SIGINT', shutdown);
   process.on('SIGTERM', shutdown);

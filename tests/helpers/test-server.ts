@@ -4,6 +4,7 @@ import { createDb } from '../../server/db/client';
 import { parseEnv } from '../../server/env';
 import { type FakeSmtp, startFakeSmtp } from '../../server/mail/fake-smtp';
 import { createSmtpMailer } from '../../server/mail/mailer';
+import { startFakeCheckout } from '../../server/payments/fake-checkout';
 
 /**
  * An app on the real test database, as each server test file uses it. Mail goes through
@@ -51,4 +52,13 @@ export async function startTestServer(overrides: Record<string, string> = {}) {
       await ctx.close();
     },
   };
+}
+
+/**
+ * The local checkout fake on a free loopback port, with the keys the test app uses. Pass
+ * `PAYMENTS_API_PORT: String(fake.port)` to the app, then `fake.setWebhookUrl(...)` once it listens.
+ */
+export function startPaymentsFake() {
+  const env = parseEnv({ ...process.env, NODE_ENV: 'test', DATABASE_URL: process.env.TEST_DATABASE_URL ?? 'postgres://unused' });
+  return startFakeCheckout({ port: 0, secretKey: env.STRIPE_SECRET_KEY, webhookSecret: env.STRIPE_WEBHOOK_SECRET });
 }

@@ -4,6 +4,7 @@ import type { Db } from '../client';
 import { studioMembers, studios, users } from '../schema';
 import { seedStudioWeek } from './studio';
 import { seedDemoHistory } from './history';
+import { seedDemoBooks } from './books';
 
 export const DEMO_PASSWORD = 'sixfold-demo';
 export const DEMO_STUDIO = 'Harbour Lane Music Collective';
@@ -53,4 +54,5 @@ export async function seedDemo(db: Db): Promise<void> {
 
   // Last, so the demo takes (seeded above, when there) can carry a remark.
   await seedStudioWeek(db, studio.id);
+  await seedDemoBooks(db);
 }
