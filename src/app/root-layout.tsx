@@ -9,15 +9,18 @@ const navByRole: Record<Role, NavItem[]> = {
     { to: '/home', label: 'Home' },
     { to: '/drills', label: 'Drills' },
     { to: '/practice', label: 'Practice' },
+    { to: '/books', label: 'Books' },
   ],
   teacher: [
     { to: '/home', label: 'Home' },
     { to: '/studio', label: 'Studio' },
     { to: '/drills', label: 'Drills' },
+    { to: '/books', label: 'Books' },
   ],
   admin: [
     { to: '/home', label: 'Home' },
     { to: '/admin/users', label: 'Users' },
+    { to: '/admin/purchases', label: 'Purchases' },
   ],
 };
 

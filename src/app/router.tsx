@@ -3,7 +3,13 @@ import { RequireRole, VisitorsOnly } from './guards';
 import { RootLayout } from './root-layout';
 import { AccountRoute } from './routes/account';
 import { AdminAuditRoute } from './routes/admin-audit';
+import { AdminPurchasesRoute } from './routes/admin-purchases';
 import { AdminUsersRoute } from './routes/admin-users';
+import { BookRoute } from './routes/book';
+import { BookEditRoute } from './routes/book-edit';
+import { BookPrintRoute } from './routes/book-print';
+import { BookSalesRoute } from './routes/book-sales';
+import { BooksRoute } from './routes/books';
 import { DrillsRoute } from './routes/drills';
 import { DrillsPrintRoute } from './routes/drills-print';
 import { ForgotPasswordRoute } from './routes/forgot-password';
@@ -49,6 +55,12 @@ const router = createBrowserRouter([
       { path: '/history/:id', element: <RequireRole roles={['player', 'teacher']}><HistoryTakeRoute /></RequireRole> },
       { path: '/progress', element: <RequireRole roles={['player', 'teacher']}><ProgressRoute /></RequireRole> },
       { path: '/invite', element: <InviteRoute /> },
+      { path: '/books', element: <BooksRoute /> },
+      { path: '/books/sales', element: <RequireRole roles={['teacher']}><BookSalesRoute /></RequireRole> },
+      { path: '/books/:id', element: <BookRoute /> },
+      { path: '/books/:id/edit', element: <RequireRole roles={['teacher']}><BookEditRoute /></RequireRole> },
+      { path: '/books/:id/print', element: <BookPrintRoute /> },
+      { path: '/admin/purchases', element: <RequireRole roles={['admin']}><AdminPurchasesRoute /></RequireRole> },
       { path: '*', element: <NotFoundRoute /> },
     ],
   },

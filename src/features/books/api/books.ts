@@ -1,0 +1,101 @@
+import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type {
+  AddBookDrillInput,
+  BookDrillResponse,
+  BookEditionResponse,
+  BookResponse,
+  BooksResponse,
+  CheckoutResponse,
+  CreateBookInput,
+  ReorderBookInput,
+  SalesResponse,
+  UpdateBookDrillInput,
+  UpdateBookInput,
+} from '@shared/schemas/books';
+import type { SavedDrillsResponse } from '@shared/schemas/drills';
+import { api } from '@/lib/api-client';
+
+export const booksKey = ['books'] as const;
+const enc = encodeURIComponent;
+
+export const catalogueQueryOptions = queryOptions({ queryKey: [...booksKey, 'catalogue'], queryFn: () => api.get<BooksResponse>('/api/books') });
+
+/** Published books, with the viewer's access to each. */
+export function useCatalogue() {
+  return useQuery(catalogueQueryOptions);
+}
+
+/** A teacher's own books, drafts included. */
+export function useMyBooks(enabled = true) {
+  return useQuery({ queryKey: [...booksKey, 'mine'], queryFn: () => api.get<BooksResponse>('/api/books/mine'), enabled });
+}
+
+export const bookQueryOptions = (id: string) => queryOptions({ queryKey: [...booksKey, id], queryFn: () => api.get<BookResponse>(`/api/books/${enc(id)}`) });
+
+/** One book; `pollMs` keeps asking (after checkout, until the payment has come through). */
+export function useBook(id: string, pollMs: number | false = false) {
+  return useQuery({ ...bookQueryOptions(id), refetchInterval: pollMs });
+}
+
+export function fetchBookDrill(bookId: string, drillId: string): Promise<BookDrillResponse> {
+  return api.get<BookDrillResponse>(`/api/books/${enc(bookId)}/drills/${enc(drillId)}`);
+}
+
+export function useBookDrill(bookId: string, drillId: string | null) {
+  return useQuery({ queryKey: [...booksKey, bookId, 'drill', drillId], queryFn: () => fetchBookDrill(bookId, drillId!), enabled: !!drillId, retry: false });
+}
+
+export function useBookEdition(id: string) {
+  return useQuery({ queryKey: [...booksKey, id, 'edition'], queryFn: () => api.get<BookEditionResponse>(`/api/books/${enc(id)}/edition`), retry: false });
+}
+
+export function useSales() {
+  return useQuery({ queryKey: [...booksKey, 'sales'], queryFn: () => api.get<SalesResponse>('/api/books/sales') });
+}
+
+/** The teacher's saved drills, to add to a book. */
+export function useTeacherSavedDrills() {
+  return useQuery({ queryKey: ['drills', 'saved'], queryFn: () => api.get<SavedDrillsResponse>('/api/drills') });
+}
+
+function useBookMutation<I>(fn: (input: I) => Promise<BookResponse>) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: fn,
+    onSuccess: (data) => {
+      queryClient.setQueryData(bookQueryOptions(data.book.id).queryKey, data);
+      return queryClient.invalidateQueries({ queryKey: booksKey });
+    },
+  });
+}
+
+export function useCreateBook() {
+  return useBookMutation((input: CreateBookInput) => api.post<BookResponse>('/api/books', input));
+}
+
+export function useUpdateBook(id: string) {
+  return useBookMutation((input: UpdateBookInput) => api.patch<BookResponse>(`/api/books/${enc(id)}`, input));
+}
+
+export function useAddBookDrill(id: string) {
+  return useBookMutation((input: AddBookDrillInput) => api.post<BookResponse>(`/api/books/${enc(id)}/drills`, input));
+}
+
+export function useUpdateBookDrill(id: string) {
+  return useBookMutation(({ drillId, ...input }: UpdateBookDrillInput & { drillId: string }) =>
+    api.patch<BookResponse>(`/api/books/${enc(id)}/drills/${enc(drillId)}`, input),
+  );
+}
+
+export function useRemoveBookDrill(id: string) {
+  return useBookMutation((drillId: string) => api.delete<BookResponse>(`/api/books/${enc(id)}/drills/${enc(drillId)}`));
+}
+
+export function useReorderBook(id: string) {
+  return useBookMutation((input: ReorderBookInput) => api.put<BookResponse>(`/api/books/${enc(id)}/order`, input));
+}
+
+/** Opens a hosted checkout; the caller sends the browser to its page. */
+export function useCheckout(id: string) {
+  return useMutation({ mutationFn: () => api.post<CheckoutResponse>(`/api/books/${enc(id)}/checkout`) });
+}
