@@ -239,6 +239,10 @@ ${s.customer_email ? `<p class="note">Receipt to ${escapeHtml(s.customer_email)}
     );
   });
 
+  app.get('/favicon.ico', (_req, res) => {
+    res.status(204).end();
+  });
+
   app.post('/pay/:id/complete', async (req, res) => {
     const s = sessions.get(req.params.id);
     if (!s) return res.status(404).type('text').send('No such checkout');

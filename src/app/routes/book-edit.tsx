@@ -25,7 +25,7 @@ export function BookEditRoute() {
           </Link>
         </p>
       </div>
-      <BookDetailsForm key={book.updatedAt} book={book} />
+      <BookDetailsForm key={book.id} book={book} />
       <section className="grid gap-3" aria-labelledby="drills-heading">
         <h2 id="drills-heading" className="text-lead font-bold">
           Drills
