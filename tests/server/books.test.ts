@@ -1,6 +1,11 @@
+import { and, eq } from 'drizzle-orm';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { DrillSpec } from '../../shared/schemas/drills';
+import { bookDrills, books, users } from '../../server/db/schema';
+import { DEMO_BOOK_TITLE, seedDemoBooks } from '../../server/db/seed/books';
+import { DEMO_PASSWORD } from '../../server/db/seed';
+import { hashPassword } from '../../server/services/auth/password-hash';
 import { type Client, createUser, signedIn, type TestUser } from '../helpers/factories';
 import { createTestApp } from '../helpers/test-server';
 
@@ -200,5 +205,30 @@ describe('the catalogue and entitlements', () => {
     const other = await otherTeacher.get('/api/books/sales').expect(200);
     expect(other.body.books.some((b: { id: string }) => b.id === priced.id)).toBe(false);
     expect((await player.get('/api/books/sales')).status).toBe(403);
+  });
+});
+
+describe('the demo seed', () => {
+  it('gives Mara one published, priced book with the SCENARIO drills and the free starter, once', async () => {
+    // The seed's own demo account (made here the way the seed makes it, if no other test has).
+    await ctx.db
+      .insert(users)
+      .values({ email: 'teacher@sixfold.test', name: 'Mara Quill', role: 'teacher', passwordHash: await hashPassword(DEMO_PASSWORD) })
+      .onConflictDoNothing();
+    await seedDemoBooks(ctx.db);
+    await seedDemoBooks(ctx.db);
+    const [demoMara] = await ctx.db.select().from(users).where(eq(users.email, 'teacher@sixfold.test'));
+    const found = await ctx.db.select().from(books).where(and(eq(books.teacherId, demoMara.id), eq(books.title, DEMO_BOOK_TITLE)));
+    expect(found).toHaveLength(1);
+    expect(found[0]).toMatchObject({ published: true, priceMinor: 1200, currency: 'EUR' });
+    const drills = await ctx.db.select().from(bookDrills).where(eq(bookDrills.bookId, found[0].id)).orderBy(bookDrills.position);
+    expect(drills.map((d) => d.spec.pair.join('/'))).toEqual(['C/D', 'D/C', 'Bbm/Ab', 'G/Db', 'A/G']);
+    expect(drills.map((d) => d.spec.chord)).toEqual(['Cmaj7#11', 'D7', 'Bbm7', 'G7', 'Em7']);
+    expect(drills.filter((d) => d.free).map((d) => d.spec.pair.join('/'))).toEqual(['C/D']);
+    expect(drills[1]).toMatchObject({ keyCycle: 'chromatic' });
+    expect(drills[1].spec).toMatchObject({ pattern: 'four-three', tempo: 100 });
+    expect(drills[2]).toMatchObject({ keyCycle: 'fourths' });
+    const res = await request(ctx.app).get('/api/books').expect(200);
+    expect(res.body.books.filter((b: { title: string; teacher: { id: string } }) => b.title === DEMO_BOOK_TITLE && b.teacher.id === demoMara.id)).toHaveLength(1);
   });
 });
