@@ -217,3 +217,12 @@ describe('inAllKeys', () => {
     expect(drills[1].spec.pair).toEqual(['F#m', 'E']);
   });
 });
+
+describe('a preset that comes back to where it began', () => {
+  it('ends after one cycle instead of repeating itself', () => {
+    // weave on Cdim/E: after the first cycle each a cell re-enters on C4 and the b cell falls
+    // back to B3, so the drill would go round in place for ever.
+    const d = generateDrill({ pair: ['Cdim', 'E'], pattern: 'weave', direction: 'up', range: { low: 48, high: 68 } });
+    expect(d.notes.map((n) => n.name)).toEqual(['Eb3', 'Gb3', 'C4', 'E4', 'B3', 'G#3', 'C4', 'Eb4', 'Gb4', 'G#4', 'E4', 'B3']);
+  });
+});

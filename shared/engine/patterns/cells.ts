@@ -28,8 +28,6 @@ export interface Run {
   descending: boolean;
   /** stop after this many cells (used to test a start) */
   maxCells?: number;
-  /** a shipped preset: it always moves, so the repeat check is skipped */
-  trusted?: boolean;
 }
 
 function pushNote(out: RawNote[], lad: Ladder, idx: number, source: RawNote['source'], cell: number): void {
@@ -54,8 +52,9 @@ export function runTriadCells(cells: TriadCellDef[], ladders: Ladders, run: Run)
   for (let k = 0; ; k++) {
     if (run.maxCells !== undefined && k >= run.maxCells) break;
     const ci = k % cells.length;
-    if (ci === 0 && k > 0 && !run.trusted) {
-      // A cycle that repeats notes already played, or a state already met, never moves on.
+    if (ci === 0 && k > 0) {
+      // A cycle that repeats notes already played, or a state already met, never moves on. Presets
+      // are checked too: weave on a pair such as Cdim/E comes back to where it began.
       const cycle = out.slice(cycleStart).map((n) => n.midi).join(',');
       const state = `${last}|${prevEntry.a}|${prevEntry.b}|${lastEntryMidi}|${lastEntryPos}`;
       if (seenCycles.has(cycle)) {

@@ -149,8 +149,7 @@ export function generateDrill(spec: DrillSpec): Drill {
     start = snapStart(spec.start, lad, descending);
   }
   filled.start = start;
-  const trusted = typeof spec.pattern === 'string';
-  const raw = runCells(def, ladders, { start, range: filled.range, descending, trusted });
+  const raw = runCells(def, ladders, { start, range: filled.range, descending });
   if (raw.length === 0) {
     throw new EngineError(
       `The first cell from MIDI note ${start} does not fit in the range ${filled.range.low}-${filled.range.high}.`,
@@ -161,7 +160,7 @@ export function generateDrill(spec: DrillSpec): Drill {
     for (const n of raw) if (n.midi > top) top = n.midi;
     const turn = lad.indexOf[top] >= 0 ? top : lad.midi[lad.below[top]];
     if (turn !== undefined && turn >= filled.range.low) {
-      const down = runCells(def, ladders, { start: turn, range: filled.range, descending: true, trusted });
+      const down = runCells(def, ladders, { start: turn, range: filled.range, descending: true });
       const base = raw[raw.length - 1].cell + 1;
       const lastMidi = raw[raw.length - 1].midi;
       for (let i = 0; i < down.length; i++) {
