@@ -76,8 +76,9 @@ export function DrillStaff({ drill, marks, current, faded, label, width: fixedWi
   }, [drill, width]);
 
   // Marks and the current note: toggle classes on what is already drawn (again after a redraw).
+  // Before paint: a mark from a note just played must be on screen in the very next frame.
   // biome-ignore lint/correctness/useExhaustiveDependencies: version changes when the staff is redrawn
-  useEffect(() => {
+  useLayoutEffect(() => {
     const want = new Map(marks ?? []);
     if (current !== null && current !== undefined) want.set(current, `${want.get(current) ?? ''} sf-current`.trim());
     for (const [i, cls] of applied.current) {

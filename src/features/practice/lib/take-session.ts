@@ -36,6 +36,9 @@ export interface FinishedTake {
   stoppedAtMs: number | null;
 }
 
+/** How late an input event may reach the page after its own timestamp. */
+const DELIVERY_MARGIN_MS = 50;
+
 export class TakeSession {
   readonly origin: number;
   readonly played: PlayedNote[] = [];
@@ -98,7 +101,11 @@ export class TakeSession {
   /** Call every animation frame: settles what time has decided, moves the current note. */
   frame(now = performance.now()): { updates: ScoreUpdate[]; currentChanged: boolean; over: boolean } {
     const t = this.clock(now);
-    const updates = this.finished || t < 0 ? [] : this.apply(this.scorer.tick(t));
+    // tick() promises that no earlier note will follow. A MIDI event reaches the page a little
+    // after its own timestamp, and the device's latency moves it earlier still, so the scorer is
+    // only told about time that no note still in flight can precede.
+    const safe = t - this.latencyMs - DELIVERY_MARGIN_MS;
+    const updates = this.finished || safe < 0 ? [] : this.apply(this.scorer.tick(safe));
     let current: number | null = null;
     if (t >= -this.hitMs) {
       // The first note not yet past its hit window is the one to play now.
