@@ -8,6 +8,7 @@ const sections: Array<[string, () => Promise<{ run: () => Promise<void> }>]> = [
   ['scoring', () => import('./scoring')],
   ['maps', () => import('./maps')],
   ['takes-load', () => import('./takes-load')],
+  ['live-marks', () => import('./live-marks')],
 ];
 
 const only = process.argv.slice(2);
