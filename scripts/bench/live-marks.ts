@@ -16,11 +16,6 @@ import { benchDatabase } from './bench-db';
 const SPEC: DrillSpec = { pair: ['C', 'D'], pattern: 'scale-steps-triplet', direction: 'up-down', instrument: 'piano', tempo: 240, range: { low: 36, high: 96 } };
 const NOTES = 200;
 
-declare global {
-  interface Window {
-    __fakeMidi: { noteOn(n: number, v: number, ch?: number, ts?: number): void; noteOff(n: number, v?: number, ch?: number, ts?: number): void };
-  }
-}
 
 const pct = (xs: number[], p: number) => {
   const s = [...xs].sort((a, b) => a - b);

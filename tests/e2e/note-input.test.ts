@@ -2,14 +2,6 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { type BrowserSession, openBrowser } from '../helpers/browser';
 import { startTestServer } from '../helpers/test-server';
 
-type FakeMidi = {
-  noteOn(n: number, v: number, ch?: number, ts?: number): void;
-  noteOff(n: number, v?: number, ch?: number, ts?: number): void;
-  send(bytes: number[], ts?: number, id?: string): void;
-  addInput(p: { id: string; name: string; manufacturer?: string }): void;
-  removeInput(id: string): void;
-};
-declare const __fakeMidi: FakeMidi;
 
 async function logRows(page: BrowserSession['page']) {
   return page.$$eval('[data-testid="note-log"] tbody tr', (rows) =>

@@ -8,11 +8,6 @@ import { createTestApp } from '../helpers/test-server';
 
 const SPEC: DrillSpec = { pair: ['Bbm', 'Ab'], pattern: 'stack', direction: 'up', instrument: 'piano', tempo: 120, range: { low: 55, high: 79 } };
 
-declare global {
-  interface Window {
-    __fakeMidi: { noteOn(n: number, v: number, ch?: number, ts?: number): void };
-  }
-}
 
 describe('a take finished while the server is down', () => {
   const ctx = createTestApp();

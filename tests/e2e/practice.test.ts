@@ -16,11 +16,6 @@ const msPerBeat = 600;
 
 type ScriptNote = { midi: number; t: number };
 
-declare global {
-  interface Window {
-    __fakeMidi: { noteOn(n: number, v: number, ch?: number, ts?: number): void; noteOff(n: number, v?: number, ch?: number, ts?: number): void };
-  }
-}
 
 /** Plays notes on the fake device at their times on the take's clock, each with its own timestamp. */
 async function play(page: BrowserSession['page'], notes: ScriptNote[]) {
