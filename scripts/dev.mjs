@@ -12,6 +12,8 @@ const children = [
   spawn(process.execPath, ['--import', 'tsx', '--watch', 'server/index.ts'], { cwd: projectDir, stdio: 'inherit', env }),
   spawn(process.execPath, ['node_modules/vite/bin/vite.js'], { cwd: projectDir, stdio: 'inherit', env }),
 ];
-const stopAll = () => children.forEach((c) => c.kill('SIGTERM'));
+const stopAll = () => {
+  for (const c of children) c.kill('SIGTERM');
+};
 for (const sig of ['SIGINT', 'SIGTERM']) process.on(sig, stopAll);
 for (const c of children) c.on('exit', (code) => { stopAll(); process.exit(code ?? 0); });

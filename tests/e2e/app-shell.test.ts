@@ -19,7 +19,7 @@ describe('app shell in Chromium', () => {
     const { page } = browser;
     await page.goto(server.url, { waitUntil: 'networkidle' });
     expect(await page.title()).toBe('Sixfold');
-    expect(await page.locator('h1').innerText()).toMatch(/every key/i);
+    expect(await page.locator('h1').textContent()).toMatch(/every key/i);
     // The shipped Manrope font is the one in use (no font from a CDN).
     const family = await page.evaluate(() => getComputedStyle(document.body).fontFamily);
     expect(family).toMatch(/Manrope/);

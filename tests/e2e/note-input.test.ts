@@ -74,7 +74,7 @@ describe('note input in Chromium with the fake MIDI device', () => {
         await page.goto(`${server.url}/input`, { waitUntil: 'networkidle' });
         const status = page.getByTestId('input-status');
         await page.waitForFunction((s) => document.querySelector('[data-testid="input-status"]')?.getAttribute('data-state') === s, state);
-        expect(await status.innerText()).toMatch(words);
+        expect(await status.textContent()).toMatch(words);
         await page.keyboard.down('a');
         await page.keyboard.up('a');
         await page.waitForFunction(() => document.querySelectorAll('[data-testid="note-log"] tbody tr').length >= 2);
