@@ -2,6 +2,7 @@ import type { Role } from '@shared/schemas/auth';
 import type { ReactNode } from 'react';
 import { Navigate, useLocation } from 'react-router-dom';
 import { useMe } from '@/features/auth/api/session';
+import { safeNext } from '@/features/auth/components/safe-next';
 import { NotForRoleRoute } from './routes/not-for-role';
 
 function Checking() {
@@ -31,7 +32,9 @@ export function RequireRole({ roles, children }: { roles?: Role[]; children: Rea
 /** Pages for visitors only (sign-in, sign-up): a signed-in user goes to their home page. */
 export function VisitorsOnly({ children }: { children: ReactNode }) {
   const { user, isLoading } = useMe();
+  const location = useLocation();
   if (isLoading) return <Checking />;
-  if (user) return <Navigate to="/home" replace />;
+  // Signed in (just now, or already): on to where they were going, else their home page.
+  if (user) return <Navigate to={safeNext(new URLSearchParams(location.search).get('next'))} replace />;
   return <>{children}</>;
 }

@@ -3,12 +3,14 @@ import { AppShell, type NavItem } from '@/components/layout/app-shell';
 import { useMe } from '@/features/auth/api/session';
 import { UserMenu } from '@/features/auth/components/user-menu';
 
-/** Each role's places; pages that are still to come are linked already. */
+/** Each role's places. */
 const navByRole: Record<Role, NavItem[]> = {
   player: [
     { to: '/home', label: 'Home' },
     { to: '/drills', label: 'Drills' },
     { to: '/practice', label: 'Practice' },
+    { to: '/history', label: 'History' },
+    { to: '/progress', label: 'Progress' },
     { to: '/books', label: 'Books' },
   ],
   teacher: [
@@ -21,6 +23,7 @@ const navByRole: Record<Role, NavItem[]> = {
     { to: '/home', label: 'Home' },
     { to: '/admin/users', label: 'Users' },
     { to: '/admin/purchases', label: 'Purchases' },
+    { to: '/admin/audit', label: 'Audit log' },
   ],
 };
 

@@ -50,7 +50,7 @@ describe('signing in through the page in Chromium', () => {
     await page.getByText('Harbour Lane Music Collective').waitFor();
     expect(await page.getByTestId('signed-in-name').textContent()).toBe('Theo Park');
     const nav = page.getByRole('navigation', { name: 'Main' });
-    expect(await nav.getByRole('link').allTextContents()).toEqual(['Home', 'Drills', 'Practice']);
+    expect(await nav.getByRole('link').allTextContents()).toEqual(['Home', 'Drills', 'Practice', 'History', 'Progress', 'Books']);
     // A player's nav has no admin pages; an admin page says it is not for this role.
     await page.goto(`${server.url}/admin/users`, { waitUntil: 'networkidle' });
     expect(await page.getByText('Not for your role').count()).toBe(1);
@@ -65,6 +65,17 @@ describe('signing in through the page in Chromium', () => {
     await page.waitForURL(/\/sign-in/);
     await page.goto(`${server.url}/home`, { waitUntil: 'networkidle' });
     await page.waitForURL(/\/sign-in\?next=/);
+    expect(browser.errors).toEqual([]);
+  });
+
+  it('goes on to the page that asked for the sign-in', async () => {
+    const { page } = browser;
+    await page.goto(`${server.url}/history`, { waitUntil: 'networkidle' });
+    await page.waitForURL(/\/sign-in\?next=%2Fhistory$/);
+    await page.getByLabel('E-mail').fill(player.email);
+    await page.getByLabel('Password').fill(player.password);
+    await page.getByLabel('Password').press('Enter');
+    await page.waitForURL(/\/history$/);
     expect(browser.errors).toEqual([]);
   });
 });

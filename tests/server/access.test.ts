@@ -65,7 +65,12 @@ describe('GET /api/dev/outbox', () => {
   });
 
   it('is absent in production', async () => {
-    const prod = createTestApp({ NODE_ENV: 'production', SESSION_SECRET: 'a-production-secret-for-tests' });
+    const prod = createTestApp({
+      NODE_ENV: 'production',
+      SESSION_SECRET: 'a-production-secret-for-tests',
+      STRIPE_SECRET_KEY: 'sk_test_production_check',
+      STRIPE_WEBHOOK_SECRET: 'whsec_production_check',
+    });
     try {
       const res = await request(prod.app).get('/api/dev/outbox');
       expect(res.status).toBe(404);

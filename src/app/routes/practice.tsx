@@ -36,6 +36,7 @@ export function PracticeRoute() {
   const fromParams = useMemo(() => specFromParams(params), [params]);
   const savedId = params.get('drill');
   const assignmentId = params.get('assignment');
+  const tempoParam = Number(params.get('tempo')) >= 20 && Number(params.get('tempo')) <= 400 ? Number(params.get('tempo')) : null;
   const saved = useQuery({ queryKey: ['drills', 'saved', savedId], queryFn: () => fetchSavedDrill(savedId!), enabled: !!savedId });
   const settings = useSettings();
   const { input, status } = useNoteInput();
@@ -49,7 +50,8 @@ export function PracticeRoute() {
     const s = settings.data.settings;
     setOpts({
       instrument: baseSpec.instrument ?? s.instrument,
-      tempo: baseSpec.tempo ?? s.defaultTempo,
+      // An assignment opens at its target tempo; otherwise the drill's own, then the player's.
+      tempo: tempoParam ?? baseSpec.tempo ?? s.defaultTempo,
       meter: baseSpec.meter ?? [4, 4],
       countIn: 1,
       click: 'every-beat',
@@ -63,7 +65,7 @@ export function PracticeRoute() {
       order: saved.data?.drill.keyOrder ?? fromParams.order,
       ladder: false,
     });
-  }, [opts, baseSpec, settings.data, saved.data, fromParams.order]);
+  }, [opts, baseSpec, settings.data, saved.data, fromParams.order, tempoParam]);
 
   const personalRange = settings.data?.settings.range ?? null;
   const spec: DrillSpec | null = useMemo(() => {
