@@ -1,34 +1,38 @@
-import { createBrowserRouter, RouterProvider } from 'react-router-dom';
+import type { Role } from '@shared/schemas/auth';
+import type { ComponentType } from 'react';
+import { createBrowserRouter, RouterProvider, type RouteObject } from 'react-router-dom';
 import { RequireRole, VisitorsOnly } from './guards';
 import { RootLayout } from './root-layout';
-import { AccountRoute } from './routes/account';
-import { AdminAuditRoute } from './routes/admin-audit';
-import { AdminPurchasesRoute } from './routes/admin-purchases';
-import { AdminUsersRoute } from './routes/admin-users';
-import { BookRoute } from './routes/book';
-import { BookEditRoute } from './routes/book-edit';
-import { BookPrintRoute } from './routes/book-print';
-import { BookSalesRoute } from './routes/book-sales';
-import { BooksRoute } from './routes/books';
-import { DrillsRoute } from './routes/drills';
-import { DrillsPrintRoute } from './routes/drills-print';
 import { ForgotPasswordRoute } from './routes/forgot-password';
-import { HistoryRoute } from './routes/history';
-import { HistoryTakeRoute } from './routes/history-take';
 import { HomeRoute } from './routes/home';
 import { IndexRoute } from './routes/index';
-import { InputCheckRoute } from './routes/input-check';
-import { InviteRoute } from './routes/invite';
-import { PracticeRoute } from './routes/practice';
-import { ProgressRoute } from './routes/progress';
 import { NotFoundRoute } from './routes/not-found';
 import { ResetPasswordRoute } from './routes/reset-password';
 import { SignInRoute } from './routes/sign-in';
 import { SignUpRoute } from './routes/sign-up';
-import { StudioDetailRoute } from './routes/studio-detail';
-import { StudioListRoute } from './routes/studio-list';
-import { StudioPlayerRoute } from './routes/studio-player';
-import { TakeRoute } from './routes/take';
+
+type Guard = 'public' | 'signed-in' | Role[];
+
+/**
+ * A page loaded on first visit (its own chunk), wrapped in the guard that mirrors the server's
+ * rule for it: public, any signed-in user, or only some roles.
+ */
+function page<M extends Record<string, unknown>>(path: string, load: () => Promise<M>, name: keyof M & string, guard: Guard): RouteObject {
+  return {
+    path,
+    lazy: async () => {
+      const Component = (await load())[name] as ComponentType;
+      if (guard === 'public') return { element: <Component /> };
+      return {
+        element: (
+          <RequireRole roles={guard === 'signed-in' ? undefined : guard}>
+            <Component />
+          </RequireRole>
+        ),
+      };
+    },
+  };
+}
 
 const router = createBrowserRouter([
   {
@@ -39,28 +43,28 @@ const router = createBrowserRouter([
       { path: '/sign-up', element: <VisitorsOnly><SignUpRoute /></VisitorsOnly> },
       { path: '/forgot-password', element: <ForgotPasswordRoute /> },
       { path: '/reset-password', element: <ResetPasswordRoute /> },
-      { path: '/input', element: <InputCheckRoute /> },
-      { path: '/practice', element: <RequireRole roles={['player']}><PracticeRoute /></RequireRole> },
       { path: '/home', element: <RequireRole><HomeRoute /></RequireRole> },
-      { path: '/account', element: <RequireRole><AccountRoute /></RequireRole> },
-      { path: '/drills', element: <RequireRole><DrillsRoute /></RequireRole> },
-      { path: '/drills/print', element: <RequireRole><DrillsPrintRoute /></RequireRole> },
-      { path: '/admin/users', element: <RequireRole roles={['admin']}><AdminUsersRoute /></RequireRole> },
-      { path: '/admin/audit', element: <RequireRole roles={['admin']}><AdminAuditRoute /></RequireRole> },
-      { path: '/studio', element: <RequireRole><StudioListRoute /></RequireRole> },
-      { path: '/studio/:id', element: <RequireRole><StudioDetailRoute /></RequireRole> },
-      { path: '/studio/:id/players/:playerId', element: <RequireRole roles={['teacher', 'admin']}><StudioPlayerRoute /></RequireRole> },
-      { path: '/takes/:id', element: <RequireRole><TakeRoute /></RequireRole> },
-      { path: '/history', element: <RequireRole roles={['player', 'teacher']}><HistoryRoute /></RequireRole> },
-      { path: '/history/:id', element: <RequireRole roles={['player', 'teacher']}><HistoryTakeRoute /></RequireRole> },
-      { path: '/progress', element: <RequireRole roles={['player', 'teacher']}><ProgressRoute /></RequireRole> },
-      { path: '/invite', element: <InviteRoute /> },
-      { path: '/books', element: <BooksRoute /> },
-      { path: '/books/sales', element: <RequireRole roles={['teacher']}><BookSalesRoute /></RequireRole> },
-      { path: '/books/:id', element: <BookRoute /> },
-      { path: '/books/:id/edit', element: <RequireRole roles={['teacher']}><BookEditRoute /></RequireRole> },
-      { path: '/books/:id/print', element: <BookPrintRoute /> },
-      { path: '/admin/purchases', element: <RequireRole roles={['admin']}><AdminPurchasesRoute /></RequireRole> },
+      page('/input', () => import('./routes/input-check'), 'InputCheckRoute', 'public'),
+      page('/practice', () => import('./routes/practice'), 'PracticeRoute', ['player']),
+      page('/account', () => import('./routes/account'), 'AccountRoute', 'signed-in'),
+      page('/drills', () => import('./routes/drills'), 'DrillsRoute', 'signed-in'),
+      page('/drills/print', () => import('./routes/drills-print'), 'DrillsPrintRoute', 'signed-in'),
+      page('/admin/users', () => import('./routes/admin-users'), 'AdminUsersRoute', ['admin']),
+      page('/admin/audit', () => import('./routes/admin-audit'), 'AdminAuditRoute', ['admin']),
+      page('/admin/purchases', () => import('./routes/admin-purchases'), 'AdminPurchasesRoute', ['admin']),
+      page('/studio', () => import('./routes/studio-list'), 'StudioListRoute', 'signed-in'),
+      page('/studio/:id', () => import('./routes/studio-detail'), 'StudioDetailRoute', 'signed-in'),
+      page('/studio/:id/players/:playerId', () => import('./routes/studio-player'), 'StudioPlayerRoute', ['teacher', 'admin']),
+      page('/takes/:id', () => import('./routes/take'), 'TakeRoute', 'signed-in'),
+      page('/history', () => import('./routes/history'), 'HistoryRoute', ['player', 'teacher']),
+      page('/history/:id', () => import('./routes/history-take'), 'HistoryTakeRoute', ['player', 'teacher']),
+      page('/progress', () => import('./routes/progress'), 'ProgressRoute', ['player', 'teacher']),
+      page('/invite', () => import('./routes/invite'), 'InviteRoute', 'public'),
+      page('/books', () => import('./routes/books'), 'BooksRoute', 'public'),
+      page('/books/sales', () => import('./routes/book-sales'), 'BookSalesRoute', ['teacher']),
+      page('/books/:id', () => import('./routes/book'), 'BookRoute', 'public'),
+      page('/books/:id/edit', () => import('./routes/book-edit'), 'BookEditRoute', ['teacher']),
+      page('/books/:id/print', () => import('./routes/book-print'), 'BookPrintRoute', 'public'),
       { path: '*', element: <NotFoundRoute /> },
     ],
   },
