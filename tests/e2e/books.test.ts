@@ -17,6 +17,9 @@ const CD: DrillSpec = { pair: ['C', 'D'], pattern: 'stack', direction: 'up-down'
  * through the local checkout fake's page, comes back to the whole book, practises a drill from
  * it, and Mara's sales page shows the sale.
  */
+// Its own title: other test files publish the demo book in the same database.
+const BOOK_TITLE = `Tuesday pairs, e2e ${Date.now().toString(36)}`;
+
 describe('drill books in Chromium: publish, buy, practise, see the sale', () => {
   let fake: Awaited<ReturnType<typeof startPaymentsFake>>;
   let server: Awaited<ReturnType<typeof startTestServer>>;
@@ -50,7 +53,7 @@ describe('drill books in Chromium: publish, buy, practise, see the sale', () => 
     const { page } = teacherBrowser;
     await signInThroughPage(page, server.url, mara);
     await page.goto(`${server.url}/books`, { waitUntil: 'networkidle' });
-    await page.getByLabel('New book title').fill('Pairs for the Tuesday combo');
+    await page.getByLabel('New book title').fill(BOOK_TITLE);
     await page.getByRole('button', { name: 'Start a book' }).click();
     await page.waitForURL(/\/books\/[0-9a-f-]+\/edit$/);
     bookId = page.url().split('/').at(-2)!;
@@ -90,9 +93,9 @@ describe('drill books in Chromium: publish, buy, practise, see the sale', () => 
     const { page } = playerBrowser;
     await signInThroughPage(page, server.url, theo);
     await page.goto(`${server.url}/books`, { waitUntil: 'networkidle' });
-    const card = page.getByTestId('book-card').filter({ hasText: 'Pairs for the Tuesday combo' });
+    const card = page.getByTestId('book-card').filter({ hasText: BOOK_TITLE });
     await card.getByText('12.00 EUR').waitFor();
-    await card.getByRole('link', { name: 'Pairs for the Tuesday combo' }).click();
+    await card.getByRole('link', { name: BOOK_TITLE }).click();
     await page.waitForURL(new RegExp(`/books/${bookId}$`));
     // Before buying: the free drill can be tried, the other is in the full book only.
     await page.getByRole('button', { name: 'Practise Starter on C/D' }).waitFor();
@@ -120,7 +123,7 @@ describe('drill books in Chromium: publish, buy, practise, see the sale', () => 
   it('the teacher sees the sale', async () => {
     const { page } = teacherBrowser;
     await page.goto(`${server.url}/books/sales`, { waitUntil: 'networkidle' });
-    const row = page.getByTestId('sales-table').getByRole('row', { name: /Pairs for the Tuesday combo/ });
+    const row = page.getByTestId('sales-table').getByRole('row', { name: new RegExp(BOOK_TITLE) });
     await row.waitFor();
     const cells = await row.locator('td').allTextContents();
     expect(cells).toEqual(['12.00 EUR', '1', '0', '12.00 EUR']);
