@@ -5,8 +5,6 @@ import { useQuery, useQueryClient } from '@tanstack/react-query';
 import { useEffect, useMemo, useRef, useState } from 'react';
 import { Link, useSearchParams } from 'react-router-dom';
 import { InputPanel } from '@/components/midi/input-panel';
-import { KeyboardDiagram, type KeyMark } from '@/components/midi/keyboard-diagram';
-import { DrillStaff } from '@/components/notation/drill-staff';
 import { Button } from '@/components/ui/button';
 import { specFromParams } from '@/features/drills/hooks/spec-params';
 import { fetchSavedDrill } from '@/features/practice/api/drill-source';
@@ -15,6 +13,8 @@ import { tempoKey, useSuggestedTempo } from '@/features/practice/api/tempo';
 import { CautionBanner } from '@/features/practice/components/caution-banner';
 import { HearYourself, type HearSettings } from '@/features/practice/components/hear-yourself';
 import { LatencyCalibration } from '@/features/practice/components/latency-calibration';
+import { LiveKeyboard } from '@/features/practice/components/live-keyboard';
+import { LiveStaff } from '@/features/practice/components/live-staff';
 import { type PracticeOptions, PracticeControls } from '@/features/practice/components/practice-controls';
 import { TakeResults } from '@/features/practice/components/take-results';
 import { usePracticeTake } from '@/features/practice/hooks/use-practice-take';
@@ -114,7 +114,6 @@ export function PracticeRoute() {
     synth.current.setVolume(hear.volumeDb);
     synth.current.setMuted(hear.muted || hear.outputId !== null);
   }, [hear]);
-  const [held, setHeld] = useState<Set<number>>(new Set());
   useEffect(() => {
     const offNote = getNoteInput().onNote((e) => {
       if (hear.outputId) sendNote(hear.outputId, e.type, e.midi, e.velocity);
@@ -122,12 +121,6 @@ export function PracticeRoute() {
         void synth.current.ensure();
         synth.current.noteOn(e.midi, e.velocity);
       } else synth.current.noteOff(e.midi);
-      setHeld((prev) => {
-        const next = new Set(prev);
-        if (e.type === 'on') next.add(e.midi);
-        else next.delete(e.midi);
-        return next;
-      });
     });
     const offBreath = getNoteInput().onBreath((v) => synth.current.breath(v));
     return () => {
@@ -210,17 +203,6 @@ export function PracticeRoute() {
   const running = take.phase === 'count-in' || take.phase === 'playing';
 
   const inst = opts ? instruments[opts.instrument] : instruments.piano;
-  const keyMarks = useMemo(() => {
-    const m = new Map<number, KeyMark>();
-    if (drill) for (const n of drill.notes) m.set(n.midi, { className: 'fill-dusk-100', label: 'in the drill' });
-    if (drill && take.current !== null) {
-      const n = drill.notes[take.current];
-      if (n) m.set(n.midi, { className: 'fill-brass-300', label: 'play now' });
-    }
-    for (const h of held) m.set(h, { className: 'fill-reed-500', label: 'held' });
-    return m;
-  }, [drill, take.current, held]);
-
   if (savedId && saved.isError) {
     return <p role="alert">That saved drill could not be opened: {(saved.error as Error).message}</p>;
   }
@@ -276,10 +258,12 @@ export function PracticeRoute() {
       ) : null}
 
       <div className={`rounded-card border border-line bg-raised p-4 sf-fade-${fade}`}>
-        {drill ? <DrillStaff drill={drill} marks={take.marks} current={take.current} /> : null}
-        <div className="mt-3">
-          <KeyboardDiagram low={inst.range.low} high={inst.range.high} marks={keyMarks} label={`${inst.label} range with the drill's notes`} height={70} />
-        </div>
+        {drill ? <LiveStaff drill={drill} live={take.live} /> : null}
+        {drill ? (
+          <div className="mt-3">
+            <LiveKeyboard drill={drill} live={take.live} range={inst.range} label={`${inst.label} range with the drill's notes`} />
+          </div>
+        ) : null}
       </div>
 
       <div className="flex flex-wrap items-center gap-3">

@@ -2,6 +2,7 @@ import type { Drill, ScoreOptions, ScoreUpdate } from '@shared/engine';
 import { useCallback, useEffect, useRef, useState } from 'react';
 import { getNoteInput } from '@/hooks/use-note-input';
 import { type ClickMode, startBacking } from '../lib/practice-audio';
+import { LiveMarks } from '../lib/live-marks';
 import { type FinishedTake, markClass, TakeSession } from '../lib/take-session';
 
 export type TakePhase = 'idle' | 'count-in' | 'playing' | 'done';
@@ -18,12 +19,12 @@ export interface TakeSetup {
 
 /**
  * Runs one take at a time: count-in, live marks from the scorer as notes arrive, missed notes
- * as their windows close (a tick every animation frame), and the finished take.
+ * as their windows close (a tick every animation frame), and the finished take. The marks live
+ * in a small store (LiveMarks) that only the staff and keyboard read.
  */
 export function usePracticeTake(onFinished: (take: FinishedTake, session: TakeSession) => void) {
   const [phase, setPhase] = useState<TakePhase>('idle');
-  const [marks, setMarks] = useState<Map<number, string>>(new Map());
-  const [current, setCurrent] = useState<number | null>(null);
+  const [live] = useState(() => new LiveMarks());
   const [origin, setOrigin] = useState<number | null>(null);
   const [finished, setFinished] = useState<FinishedTake | null>(null);
   const session = useRef<TakeSession | null>(null);
@@ -32,14 +33,7 @@ export function usePracticeTake(onFinished: (take: FinishedTake, session: TakeSe
   const onFinishedRef = useRef(onFinished);
   onFinishedRef.current = onFinished;
 
-  const applyUpdates = useCallback((updates: ScoreUpdate[]) => {
-    if (updates.length === 0) return;
-    setMarks((prev) => {
-      const next = new Map(prev);
-      for (const u of updates) next.set(u.index, markClass({ result: u.result, settled: u.settled }));
-      return next;
-    });
-  }, []);
+  const applyUpdates = useCallback((updates: ScoreUpdate[]) => live.apply(updates), [live]);
 
   const end = useCallback(
     (stoppedAtMs: number | null) => {
@@ -50,13 +44,13 @@ export function usePracticeTake(onFinished: (take: FinishedTake, session: TakeSe
       backing.current?.stop();
       backing.current = null;
       const take = s.finish(stoppedAtMs);
-      setMarks(new Map(take.score.results.map((r, i) => [i, markClass({ result: r, settled: true })])));
-      setCurrent(null);
+      live.replace(new Map(take.score.results.map((r, i) => [i, markClass({ result: r, settled: true })])));
+      live.setCurrent(null);
       setFinished(take);
       setPhase('done');
       onFinishedRef.current(take, s);
     },
-    [],
+    [live],
   );
 
   // Notes from every input go to the running take.
@@ -75,7 +69,7 @@ export function usePracticeTake(onFinished: (take: FinishedTake, session: TakeSe
     if (!s) return;
     const { updates, currentChanged, over } = s.frame();
     applyUpdates(updates);
-    if (currentChanged) setCurrent(s.snapshot().current);
+    if (currentChanged) live.setCurrent(s.snapshot().current);
     const p = s.snapshot().phase;
     setPhase((old) => (old === p ? old : p));
     if (over) {
@@ -83,7 +77,7 @@ export function usePracticeTake(onFinished: (take: FinishedTake, session: TakeSe
       return;
     }
     raf.current = requestAnimationFrame(loop);
-  }, [applyUpdates, end]);
+  }, [applyUpdates, end, live]);
 
   const start = useCallback(
     (setup: TakeSetup) => {
@@ -96,9 +90,8 @@ export function usePracticeTake(onFinished: (take: FinishedTake, session: TakeSe
       const s = new TakeSession(drill, setup.options, lead + setup.countInMeasures * measureMs, setup.latencyMs);
       session.current = s;
       setOrigin(s.origin);
-      setMarks(new Map());
+      live.reset();
       setFinished(null);
-      setCurrent(null);
       setPhase(setup.countInMeasures > 0 ? 'count-in' : 'playing');
       startBacking(drill, { originPerf: s.origin, countInMeasures: setup.countInMeasures, click: setup.click, pad: setup.pad, volumeDb: setup.volumeDb })
         .then((b) => {
@@ -109,7 +102,7 @@ export function usePracticeTake(onFinished: (take: FinishedTake, session: TakeSe
         .catch(() => undefined);
       raf.current = requestAnimationFrame(loop);
     },
-    [loop],
+    [loop, live],
   );
 
   const stop = useCallback(() => {
@@ -125,11 +118,10 @@ export function usePracticeTake(onFinished: (take: FinishedTake, session: TakeSe
     backing.current = null;
     session.current = null;
     setPhase('idle');
-    setMarks(new Map());
-    setCurrent(null);
+    live.reset();
     setFinished(null);
     setOrigin(null);
-  }, []);
+  }, [live]);
 
   useEffect(
     () => () => {
@@ -139,5 +131,5 @@ export function usePracticeTake(onFinished: (take: FinishedTake, session: TakeSe
     [],
   );
 
-  return { phase, marks, current, origin, finished, start, stop, reset, session };
+  return { phase, live, origin, finished, start, stop, reset, session };
 }
