@@ -138,7 +138,7 @@ describe('practice page in Chromium with the fake MIDI device', () => {
     // Common practice for a tempo climb, as the practice issue sets it: clean -> +4 bpm.
     await page.waitForSelector('[data-testid="tempo-climb"][data-tempo="104"]', { timeout: 10_000 });
     await page.getByRole('button', { name: 'Use 104 bpm' }).click();
-    expect(await page.getByLabel('Tempo (bpm)').inputValue()).toBe('104');
+    expect(await page.getByLabel('Tempo (bpm)', { exact: true }).inputValue()).toBe('104');
   });
 
   it('climbs the first three ladder steps, fading the notation, each step saved as a take with its measures', async () => {
@@ -192,7 +192,7 @@ describe('practice page in Chromium with the fake MIDI device', () => {
     const { page } = b;
     const spec: DrillSpec = { ...SPEC, instrument: 'alto-sax', range: { low: 60, high: 76 } };
     await open(spec);
-    await page.getByLabel(/My keyboard plays written pitch/).check();
+    await page.getByLabel('My keyboard plays written pitch', { exact: true }).check();
     const drill = generateDrill(spec);
     await startTake(page);
     // From memory: the alto saxophone in Eb sounds a major sixth below written, so written = concert + 9.
@@ -202,6 +202,20 @@ describe('practice page in Chromium with the fake MIDI device', () => {
     );
     await takeDone(page);
     expect(await page.getByTestId('accuracy').textContent()).toBe('100%');
+  });
+
+  it('keeps my practice settings on the server', async () => {
+    const { page } = b;
+    await open(SPEC);
+    await page.getByText('My practice settings').click();
+    const form = page.getByRole('form', { name: 'My practice settings' });
+    await form.getByLabel(/^Instrument/).selectOption('alto-sax');
+    await form.getByLabel('Default tempo (bpm)').fill('88');
+    await form.getByLabel(/written pitch/).check();
+    await form.getByRole('button', { name: 'Save my settings' }).click();
+    await form.getByText('Saved.').waitFor();
+    const res = await server.pool.query('SELECT instrument, default_tempo, written_pitch_input FROM player_settings WHERE user_id = $1', [player.id]);
+    expect(res.rows[0]).toEqual({ instrument: 'alto-sax', default_tempo: 88, written_pitch_input: true });
   });
 
   it('has no serious accessibility violation (axe-core)', async () => {

@@ -1,4 +1,5 @@
 import { instruments } from '@shared/engine';
+import { drillKey } from '@shared/practice/drill-identity';
 import type { PatternDef } from '@shared/schemas/drills';
 import { useEffect, useMemo, useState } from 'react';
 import { Link, useSearchParams } from 'react-router-dom';
@@ -17,6 +18,7 @@ import { SavedDrillsPanel } from '@/features/drills/components/saved-drills-pane
 import { pairTitle } from '@/features/drills/components/written-pair';
 import { specFromParams, specToParams } from '@/features/drills/hooks/spec-params';
 import { DEFAULT_DRAFT, draftFromSpec, useDrillDraft } from '@/features/drills/hooks/use-drill-draft';
+import { useMe } from '@/features/auth/api/session';
 
 /** Build a drill: find a pair for a chord, choose how it moves, see and hear it in all 12 keys. */
 export function DrillsRoute() {
@@ -27,6 +29,8 @@ export function DrillsRoute() {
   });
   const { draft, update, setDraft, spec, fields, cycle, cycleError } = useDrillDraft(initial);
   const [keyIndex, setKeyIndex] = useState(0);
+  const { user } = useMe();
+  const canPractise = user?.role === 'player';
   const [playing, setPlaying] = useState<number | null>(null);
   const patterns = useCustomPatterns();
   const savePattern = useSaveCustomPattern();
@@ -117,9 +121,18 @@ export function DrillsRoute() {
         <div className="grid gap-8 md:grid-cols-2">
           <div className="grid content-start gap-8">
             <AudioPreview drill={drill} onNote={setPlaying} />
+            {canPractise && spec ? (
+              <Link
+                to={`/practice?${new URLSearchParams({ spec: JSON.stringify(spec), order: draft.order, key: drillKey(drill.spec) }).toString()}`}
+                className="inline-flex w-fit items-center rounded-lg bg-ink-800 px-5 py-2.5 font-semibold text-white hover:bg-ink-700 dark:bg-brass-300 dark:text-ink-950"
+              >
+                Practise this drill
+              </Link>
+            ) : null}
             <DrillDownloads drill={drill} printHref={printHref} />
           </div>
           <SavedDrillsPanel
+            canPractise={canPractise}
             spec={spec}
             order={draft.order}
             onOpen={(saved) => {

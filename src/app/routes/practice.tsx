@@ -16,6 +16,7 @@ import { LatencyCalibration } from '@/features/practice/components/latency-calib
 import { LiveKeyboard } from '@/features/practice/components/live-keyboard';
 import { LiveStaff } from '@/features/practice/components/live-staff';
 import { type PracticeOptions, PracticeControls } from '@/features/practice/components/practice-controls';
+import { PracticeDefaults } from '@/features/practice/components/practice-defaults';
 import { TakeResults } from '@/features/practice/components/take-results';
 import { usePracticeTake } from '@/features/practice/hooks/use-practice-take';
 import { PlayedSynth } from '@/features/practice/lib/practice-audio';
@@ -323,6 +324,7 @@ export function PracticeRoute() {
         <InputPanel input={input} status={status} />
         <HearYourself value={hear} onChange={setHear} />
       </div>
+      {settings.data ? <PracticeDefaults settings={settings.data.settings} /> : null}
       <LatencyCalibration
         device={deviceName}
         current={settings.data?.settings.latency[deviceName]}

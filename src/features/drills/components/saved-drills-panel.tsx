@@ -1,5 +1,6 @@
 import { CreateSavedDrillInput, type DrillSpec, type KeyOrder, type SavedDrill } from '@shared/schemas/drills';
 import { type FormEvent, useState } from 'react';
+import { Link } from 'react-router-dom';
 import { Button } from '@/components/ui/button';
 import { FormMessage } from '@/components/ui/form-message';
 import { TextField } from '@/components/ui/text-field';
@@ -8,7 +9,17 @@ import { fieldErrors } from '@/lib/field-errors';
 import { useDeleteSavedDrill, useSaveDrill, useSavedDrills } from '../api/saved-drills';
 
 /** Save the drill under a name; open a saved one (yours, or your teacher's). */
-export function SavedDrillsPanel({ spec, order, onOpen }: { spec: DrillSpec | null; order: KeyOrder; onOpen: (d: SavedDrill) => void }) {
+export function SavedDrillsPanel({
+  spec,
+  order,
+  onOpen,
+  canPractise = false,
+}: {
+  spec: DrillSpec | null;
+  order: KeyOrder;
+  onOpen: (d: SavedDrill) => void;
+  canPractise?: boolean;
+}) {
   const [name, setName] = useState('');
   const [saved, setSaved] = useState<string | null>(null);
   const [fields, setFields] = useState<Record<string, string[]>>({});
@@ -51,6 +62,11 @@ export function SavedDrillsPanel({ spec, order, onOpen }: { spec: DrillSpec | nu
       <Button variant="quiet" onClick={() => onOpen(d)} aria-label={`Open ${d.name}`}>
         Open
       </Button>
+      {canPractise ? (
+        <Link to={`/practice?drill=${encodeURIComponent(d.id)}`} className="rounded-lg border border-line px-3 py-2 font-semibold hover:border-ink-300" aria-label={`Practise ${d.name}`}>
+          Practise
+        </Link>
+      ) : null}
       {d.mine ? (
         <Button variant="quiet" onClick={() => remove.mutate(d.id)} aria-label={`Delete ${d.name}`} disabled={remove.isPending}>
           Delete

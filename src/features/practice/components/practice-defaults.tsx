@@ -1,0 +1,135 @@
+import { type InstrumentId, instruments } from '@shared/engine';
+import type { PlayerSettings } from '@shared/schemas/settings';
+import { type FormEvent, useEffect, useState } from 'react';
+import { keyLabel } from '@/components/midi/keyboard-diagram';
+import { Button } from '@/components/ui/button';
+import { ApiError } from '@/lib/api-client';
+import { useUpdateSettings } from '../api/settings';
+
+const field = 'mt-1 rounded-md border border-line bg-surface px-2 py-1.5 text-body';
+
+/**
+ * The settings every drill starts from, kept on the server: instrument, written-pitch input,
+ * octave shift of the keyboard, personal range and default tempo.
+ */
+export function PracticeDefaults({ settings }: { settings: PlayerSettings }) {
+  const update = useUpdateSettings();
+  const [draft, setDraft] = useState(settings);
+  const [useRange, setUseRange] = useState(settings.range !== null);
+  const [done, setDone] = useState(false);
+  useEffect(() => {
+    setDraft(settings);
+    setUseRange(settings.range !== null);
+  }, [settings]);
+  const inst = instruments[draft.instrument];
+  const range = draft.range ?? inst.range;
+  const errors = update.error instanceof ApiError ? (update.error.fields ?? {}) : {};
+
+  const submit = (e: FormEvent) => {
+    e.preventDefault();
+    setDone(false);
+    update.mutate(
+      {
+        instrument: draft.instrument,
+        writtenPitchInput: draft.writtenPitchInput,
+        octaveShift: draft.octaveShift,
+        defaultTempo: draft.defaultTempo,
+        range: useRange ? range : null,
+      },
+      { onSuccess: () => setDone(true) },
+    );
+  };
+
+  return (
+    <details className="rounded-card border border-line bg-raised p-4">
+      <summary className="cursor-pointer text-lead font-bold">My practice settings</summary>
+      <form onSubmit={submit} className="mt-3 grid gap-4" aria-label="My practice settings">
+        <div className="flex flex-wrap gap-4">
+          <label className="flex flex-col text-caption font-semibold">
+            Instrument
+            <select className={field} value={draft.instrument} onChange={(e) => setDraft({ ...draft, instrument: e.target.value as InstrumentId, range: null })}>
+              {Object.entries(instruments).map(([id, i]) => (
+                <option key={id} value={id}>
+                  {i.label}
+                </option>
+              ))}
+            </select>
+          </label>
+          <label className="flex flex-col text-caption font-semibold">
+            Default tempo (bpm)
+            <input
+              className={`${field} w-24`}
+              type="number"
+              min={20}
+              max={400}
+              value={draft.defaultTempo}
+              onChange={(e) => setDraft({ ...draft, defaultTempo: Number(e.target.value) })}
+              aria-invalid={errors.defaultTempo ? true : undefined}
+            />
+          </label>
+          <label className="flex flex-col text-caption font-semibold">
+            Keyboard octave shift
+            <select className={field} value={draft.octaveShift} onChange={(e) => setDraft({ ...draft, octaveShift: Number(e.target.value) })}>
+              {[-2, -1, 0, 1, 2].map((o) => (
+                <option key={o} value={o}>
+                  {o === 0 ? 'None' : `${o > 0 ? '+' : ''}${o} octave${Math.abs(o) > 1 ? 's' : ''}`}
+                </option>
+              ))}
+            </select>
+          </label>
+        </div>
+        <label className="flex items-center gap-2 text-body">
+          <input
+            type="checkbox"
+            className="h-4 w-4 accent-brass-600"
+            checked={draft.writtenPitchInput}
+            onChange={(e) => setDraft({ ...draft, writtenPitchInput: e.target.checked })}
+          />
+          My keyboard plays written pitch for {inst.label}
+        </label>
+        <fieldset className="flex flex-wrap items-end gap-4">
+          <legend className="text-caption font-semibold">My range (drills stay inside it)</legend>
+          <label className="flex items-center gap-2 text-body">
+            <input type="checkbox" className="h-4 w-4 accent-brass-600" checked={useRange} onChange={(e) => setUseRange(e.target.checked)} />
+            Narrower than the instrument's {keyLabel(inst.range.low)}–{keyLabel(inst.range.high)}
+          </label>
+          {useRange ? (
+            <>
+              <label className="flex flex-col text-caption font-semibold">
+                Lowest ({keyLabel(range.low)})
+                <input
+                  className={`${field} w-24`}
+                  type="number"
+                  min={inst.range.low}
+                  max={inst.range.high}
+                  value={range.low}
+                  onChange={(e) => setDraft({ ...draft, range: { ...range, low: Number(e.target.value) } })}
+                />
+              </label>
+              <label className="flex flex-col text-caption font-semibold">
+                Highest ({keyLabel(range.high)})
+                <input
+                  className={`${field} w-24`}
+                  type="number"
+                  min={inst.range.low}
+                  max={inst.range.high}
+                  value={range.high}
+                  onChange={(e) => setDraft({ ...draft, range: { ...range, high: Number(e.target.value) } })}
+                />
+              </label>
+            </>
+          ) : null}
+        </fieldset>
+        <div className="flex flex-wrap items-center gap-3">
+          <Button type="submit" disabled={update.isPending}>
+            {update.isPending ? 'Saving…' : 'Save my settings'}
+          </Button>
+          <p role="status" className="text-body">
+            {done ? 'Saved. New drills start from these.' : ''}
+            {update.error ? `Not saved: ${update.error.message} ${Object.values(errors).flat().join(' ')}` : ''}
+          </p>
+        </div>
+      </form>
+    </details>
+  );
+}
