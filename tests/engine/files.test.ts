@@ -51,6 +51,13 @@ describe('drillToMidi, read back by midi-file', () => {
     expect(ons.map((n) => n.tick / ppq)).toEqual(drill.notes.map((n) => Math.round(n.beat * ppq) / ppq));
   });
 
+  it("writes the instrument's General MIDI program on the Drill track", () => {
+    const drill = generateDrill({ pair: ['F', 'Eb'], pattern: 'weave', direction: 'up', instrument: 'flute' });
+    const events = parseMidi(drillToMidi(drill)).tracks.flat();
+    const program = events.find((e) => e.type === 'programChange');
+    expect(program && 'programNumber' in program ? program.programNumber : null).toBe(instruments.flute.program);
+  });
+
   it('reads its own files back through midiToPlayed', () => {
     const drill = weave();
     const played = midiToPlayed(drillToMidi(drill));
@@ -96,6 +103,25 @@ describe('midiToPlayed on files written by midi-file', () => {
       [{ deltaTime: 0, meta: true, type: 'trackName', text: 'Take' }, on(10, 61), off(90, 61), end],
     ]);
     expect(midiToPlayed(bytes).map((p) => p.midi)).toEqual([61]);
+  });
+
+  it('reads every channel of the "Take" track, and 120 bpm until the first set tempo', () => {
+    const bytes = file([
+      [{ deltaTime: 96, meta: true, type: 'setTempo', microsecondsPerBeat: 1_000_000 }, end],
+      [{ deltaTime: 0, meta: true, type: 'trackName', text: 'Take' }, on(0, 60), { ...on(0, 67), channel: 3 }, off(96, 60), { ...off(0, 67), channel: 3 }, on(0, 64), off(96, 64), end],
+    ]);
+    // a quarter at 120 bpm (500 ms), then 60 bpm
+    expect(midiToPlayed(bytes).map((p) => [p.midi, p.timeMs])).toEqual([
+      [60, 0],
+      [67, 0],
+      [64, 500],
+    ]);
+  });
+
+  it('skips a chunk of another type (Standard MIDI Files 1.0)', () => {
+    const whole = drillToMidi(weave());
+    const alien = Uint8Array.from([...whole.subarray(0, 14), 0x4d, 0x54, 0x78, 0x78, 0, 0, 0, 2, 1, 2, ...whole.subarray(14)]);
+    expect(midiToPlayed(alien)).toEqual(midiToPlayed(whole));
   });
 
   it('merges every track in time order when there is no Take track', () => {

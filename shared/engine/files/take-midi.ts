@@ -1,11 +1,9 @@
 import type { Drill, PlayedNote } from '../types';
-import { PPQ, setTempo, smfBytes, type TrackEvent, timeSignature, trackChunk, trackName } from './smf';
+import { type MidiFile, smfWith, toUnit } from './smf';
 
 /** Velocity of the drill's notes, and of played notes that came without one (MIDI 0-127). */
 const DRILL_VELOCITY = 96;
 const DEFAULT_VELOCITY = 80;
-/** A played note with no recorded length sounds for a sixteenth. */
-const DEFAULT_TICKS = PPQ / 4;
 
 interface Span {
   midi: number;
@@ -39,14 +37,14 @@ function untangle(spans: Span[]): Span[] {
   return spans;
 }
 
-function noteEvents(spans: Span[], channel: number): TrackEvent[] {
-  const events: TrackEvent[] = [];
+/** A named track on `channel` with the spans as notes (program 0, the General MIDI default). */
+function addTrack(file: MidiFile, name: string, channel: number, spans: Span[]): void {
+  const track = file.addTrack();
+  track.name = name;
+  track.channel = channel;
   for (const s of untangle(spans)) {
-    // at one tick, note-offs go before note-ons so a repeated pitch is not cut short
-    events.push({ tick: s.on, order: 3, data: [0x90 | channel, s.midi, s.velocity] });
-    events.push({ tick: s.off, order: 2, data: [0x80 | channel, s.midi, 0] });
+    track.addNote({ midi: s.midi, ticks: s.on, durationTicks: s.off - s.on, velocity: toUnit(s.velocity) });
   }
-  return events;
 }
 
 /**
@@ -62,17 +60,16 @@ function noteEvents(spans: Span[], channel: number): TrackEvent[] {
 export function takeToMidi(take: { drill: Drill; played: PlayedNote[] }): Uint8Array {
   const { drill, played } = take;
   const { tempo, meter } = drill.spec;
-  const ticksPerMs = (tempo / 60000) * PPQ;
-  const conductor = trackChunk([
-    { tick: 0, order: 0, data: trackName('Sixfold take') },
-    { tick: 0, order: 1, data: timeSignature(meter[0], meter[1]) },
-    { tick: 0, order: 2, data: setTempo(tempo) },
-  ]);
+  const file = smfWith('Sixfold take', tempo, meter);
+  const ppq = file.header.ppq;
+  const ticksPerMs = (tempo / 60000) * ppq;
+  // a played note with no recorded length sounds for a sixteenth
+  const defaultTicks = ppq / 4;
   const drillSpans: Span[] = drill.notes
     .filter((n) => n.midi >= 0 && n.midi <= 127)
     .map((n) => {
-      const on = Math.max(0, Math.round(n.beat * PPQ));
-      return { midi: n.midi, on, off: Math.max(on + 1, Math.round((n.beat + n.duration) * PPQ)), velocity: DRILL_VELOCITY };
+      const on = Math.max(0, Math.round(n.beat * ppq));
+      return { midi: n.midi, on, off: Math.max(on + 1, Math.round((n.beat + n.duration) * ppq)), velocity: DRILL_VELOCITY };
     });
   const takeSpans: Span[] = [];
   for (const p of played) {
@@ -80,12 +77,14 @@ export function takeToMidi(take: { drill: Drill; played: PlayedNote[] }): Uint8A
     if (!Number.isFinite(p.timeMs) || !(midi >= 0 && midi <= 127)) continue;
     const on = Math.max(0, Math.round(p.timeMs * ticksPerMs));
     const length =
-      p.durationMs !== undefined && Number.isFinite(p.durationMs) ? Math.round(p.durationMs * ticksPerMs) : DEFAULT_TICKS;
+      p.durationMs !== undefined && Number.isFinite(p.durationMs) ? Math.round(p.durationMs * ticksPerMs) : defaultTicks;
     // a note-on with velocity 0 would be read as a note-off (MIDI 1.0), so 1 is the floor
     const velocity = Math.min(127, Math.max(1, Math.round(p.velocity ?? DEFAULT_VELOCITY)));
     takeSpans.push({ midi, on, off: on + Math.max(1, length), velocity });
   }
-  const drillTrack = trackChunk([{ tick: 0, order: 0, data: trackName('Drill') }, ...noteEvents(drillSpans, 0)]);
-  const takeTrack = trackChunk([{ tick: 0, order: 0, data: trackName('Take') }, ...noteEvents(takeSpans, 1)]);
-  return smfBytes([conductor, drillTrack, takeTrack]);
+  // at one tick the package writes a note's note-off before a later note's note-on, so a
+  // repeated pitch is not cut short
+  addTrack(file, 'Drill', 0, drillSpans);
+  addTrack(file, 'Take', 1, takeSpans);
+  return file.toArray();
 }
