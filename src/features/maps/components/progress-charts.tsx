@@ -25,16 +25,17 @@ export function ProgressCharts({ filters }: { filters: MapFilters }) {
       {error ? <p role="alert">{error.message}</p> : null}
       {series.length > 0 ? (
         <>
-          <div className="h-64 w-full" aria-hidden="true">
+          {/* The accuracy line and the axis figures take the wrapper's colour, so they read on both themes. */}
+          <div className="h-64 w-full text-ink-700 dark:text-ink-100" aria-hidden="true">
             <ResponsiveContainer width="100%" height="100%">
               <LineChart data={series} margin={{ top: 8, right: 16, bottom: 8, left: 0 }}>
                 <CartesianGrid strokeDasharray="3 3" opacity={0.4} />
-                <XAxis dataKey="day" tick={{ fontSize: 11 }} />
-                <YAxis yAxisId="acc" domain={[0, 100]} unit="%" tick={{ fontSize: 11 }} />
-                <YAxis yAxisId="tempo" orientation="right" tick={{ fontSize: 11 }} />
-                <Tooltip />
+                <XAxis dataKey="day" tick={{ fontSize: 11, fill: 'currentColor' }} />
+                <YAxis yAxisId="acc" domain={[0, 100]} unit="%" tick={{ fontSize: 11, fill: 'currentColor' }} />
+                <YAxis yAxisId="tempo" orientation="right" tick={{ fontSize: 11, fill: 'currentColor' }} />
+                <Tooltip contentStyle={{ background: 'rgb(var(--sf-raised))', borderColor: 'rgb(var(--sf-line))', color: 'rgb(var(--sf-text))' }} />
                 <Legend />
-                <Line yAxisId="acc" type="monotone" dataKey="accuracy" name="accuracy (%)" stroke="#00204d" strokeWidth={2} dot={false} />
+                <Line yAxisId="acc" type="monotone" dataKey="accuracy" name="accuracy (%)" stroke="currentColor" strokeWidth={2} dot={false} />
                 <Line yAxisId="tempo" type="monotone" dataKey="tempo" name="tempo (bpm)" stroke="#c9a227" strokeWidth={2} strokeDasharray="5 3" dot={false} />
               </LineChart>
             </ResponsiveContainer>
