@@ -20,7 +20,7 @@ export function UsersTable() {
           {update.error.message}
         </p>
       ) : null}
-    <div className="overflow-x-auto rounded-card border border-line bg-raised">
+    <div className="relative overflow-x-auto rounded-card border border-line bg-raised">
       <table className="w-full text-left text-body">
         <caption className="sr-only">Accounts</caption>
         <thead className="border-b border-line text-caption uppercase tracking-wider text-muted">
