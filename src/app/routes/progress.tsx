@@ -6,6 +6,9 @@ import { PracticeCalendar } from '@/features/maps/components/practice-calendar';
 import { ProgressCharts } from '@/features/maps/components/progress-charts';
 import { RangeMap } from '@/features/maps/components/range-map';
 
+/** The text filters match exactly, so each shows an example of what it takes. */
+const FILTER_EXAMPLES = { instrument: 'piano', pattern: 'four-three', pair: 'D/C' } as const;
+
 /** The key, range and beat maps and the charts; filters live in the address. */
 export function ProgressRoute() {
   const [params, setParams] = useSearchParams();
@@ -28,7 +31,11 @@ export function ProgressRoute() {
         {(['instrument', 'pattern', 'pair'] as const).map((k) => (
           <label key={k} className="grid gap-1 text-caption font-semibold capitalize">
             {k}
-            <input defaultValue={params.get(k) ?? ''} onBlur={(e) => set(k, e.target.value.trim())} className="w-32 rounded-lg border border-line bg-raised px-2 py-1" />
+            <input
+              defaultValue={params.get(k) ?? ''}
+              placeholder={FILTER_EXAMPLES[k]}
+              onBlur={(e) => set(k, e.target.value.trim())}
+              className="w-32 rounded-lg border border-line bg-raised px-2 py-1" />
           </label>
         ))}
         {(['from', 'to'] as const).map((k) => (

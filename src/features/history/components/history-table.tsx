@@ -18,6 +18,8 @@ const columns: ColumnDef<TakeSummary>[] = [
 ];
 
 const FILTERS = ['key', 'pattern', 'pair', 'instrument', 'from', 'to'] as const;
+/** The text filters match exactly, so each shows an example of what it takes. */
+const FILTER_EXAMPLES = { pattern: 'four-three', pair: 'D/C', instrument: 'piano' } as const;
 
 /** The player's takes, sorted, filtered and paged by the server; the address holds the state. */
 export function HistoryTable() {
@@ -68,7 +70,11 @@ export function HistoryTable() {
         {(['pattern', 'pair', 'instrument'] as const).map((f) => (
           <label key={f} className="grid gap-1 text-caption font-semibold capitalize">
             {f}
-            <input defaultValue={read(f) ?? ''} onBlur={(e) => set({ [f]: e.target.value.trim(), page: undefined })} className="w-32 rounded-lg border border-line bg-raised px-2 py-1" />
+            <input
+              defaultValue={read(f) ?? ''}
+              placeholder={FILTER_EXAMPLES[f]}
+              onBlur={(e) => set({ [f]: e.target.value.trim(), page: undefined })}
+              className="w-32 rounded-lg border border-line bg-raised px-2 py-1" />
           </label>
         ))}
         {(['from', 'to'] as const).map((f) => (
@@ -88,7 +94,7 @@ export function HistoryTable() {
                 {hg.headers.map((h) => {
                   const sorted = h.column.getIsSorted();
                   return (
-                    <th key={h.id} scope="col" className="px-3 py-2" aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}>
+                    <th key={h.id} scope="col" className="whitespace-nowrap px-3 py-2" aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}>
                       {h.column.getCanSort() ? (
                         <button type="button" onClick={h.column.getToggleSortingHandler()} className="uppercase tracking-wider hover:text-text">
                           {flexRender(h.column.columnDef.header, h.getContext())} {sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : ''}
@@ -106,7 +112,7 @@ export function HistoryTable() {
             {table.getRowModel().rows.map((r) => (
               <tr key={r.id} className="border-b border-line last:border-0">
                 {r.getVisibleCells().map((c) => (
-                  <td key={c.id} className="px-3 py-2 tabular-nums">
+                  <td key={c.id} className="whitespace-nowrap px-3 py-2 tabular-nums">
                     {flexRender(c.column.columnDef.cell, c.getContext())}
                   </td>
                 ))}
