@@ -57,9 +57,12 @@ export function StudioBoard({ studioId }: { studioId: string }) {
                   {r.statuses[a.id] ? <StatusBadge status={r.statuses[a.id]} /> : '—'}
                 </td>
               ))}
-              <td className="px-3 py-2 text-muted">{r.lastPracticeAt ? dayFormat.format(new Date(r.lastPracticeAt)) : 'Not yet'}</td>
-              <td className="px-3 py-2">
-                <Trend weeks={r.trend} /> <span className="ml-2 text-caption text-muted">{r.takesThisWeek} this week</span>
+              <td className="whitespace-nowrap px-3 py-2 text-muted">{r.lastPracticeAt ? dayFormat.format(new Date(r.lastPracticeAt)) : 'Not yet'}</td>
+              <td className="whitespace-nowrap px-3 py-2">
+                <Trend weeks={r.trend} />{' '}
+                <span className="ml-2 text-caption text-muted">
+                  {r.takesThisWeek} {r.takesThisWeek === 1 ? 'take' : 'takes'} this week
+                </span>
               </td>
             </tr>
           ))}
