@@ -12,6 +12,8 @@ import { noteLabel, RemarkThread } from './remark-thread';
 import { pct } from './status-badge';
 import './take-review.css';
 
+const when = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+
 function drillOf(take: ReviewTake): Drill | null {
   try {
     const full = generateDrill(take.spec);
@@ -82,7 +84,7 @@ export function TakeReview({ takeId, viewerId }: { takeId: string; viewerId: str
           {take.pair} · {take.pattern} · {take.key}
         </h1>
         <p className="text-muted">
-          {new Date(take.startedAt).toLocaleString()} · {take.tempo} bpm · accuracy {pct(take.accuracy)} ·{' '}
+          {when.format(new Date(take.startedAt))} · {take.tempo} bpm · accuracy {pct(take.accuracy)} ·{' '}
           {Object.entries(counts)
             .map(([v, n]) => `${n} ${v}`)
             .join(', ')}
