@@ -1,13 +1,16 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { inAllKeys } from '../../shared/engine';
+import { drillKey } from '../../shared/practice/drill-identity';
 import { type BrowserSession, openBrowser } from '../helpers/browser';
 import { type Client, createStudio, createUser, signedIn, type TestUser, uniqueEmail, waitForMail } from '../helpers/factories';
-import { createSavedDrill, STUDIO_SPEC, takeBody } from '../helpers/studio-fixtures';
+import { createSavedDrill, STUDIO_SPEC } from '../helpers/studio-fixtures';
 import { startTestServer } from '../helpers/test-server';
 
 /**
  * The studio loop in Chromium: a teacher invites an address, the link from the fake's outbox
- * signs a new player up, the teacher sets a drill, the player makes a take from it, and the
+ * signs a new player up, the teacher sets a drill, the player plays it on the fake MIDI device
+ * from the practice page, and the
  * teacher pins a remark to a missed note that the player then reads.
  */
 describe('a studio in Chromium: invite, assign, take, remark', () => {
@@ -91,19 +94,36 @@ describe('a studio in Chromium: invite, assign, take, remark', () => {
     expect(href).toMatch(/^\/practice\?drill=[\w-]+&assignment=[\w-]+&tempo=100&key=D$/);
   });
 
-  it('the player makes a take from the assignment (sent from the page with its CSRF token), with two notes missed', async () => {
+  it('the player starts the assignment in one click and plays it on the fake MIDI device, leaving out two notes', async () => {
     const p = playerBrowser.page;
-    const assignments = await p.evaluate(async () => (await fetch('/api/assignments')).json());
-    const assignmentId = assignments.assignments[0].id as string;
-    const body = takeBody({ ...STUDIO_SPEC, tempo: 100 }, { assignmentId, miss: 2 });
-    const res = await p.evaluate(async (b) => {
-      const { token } = await (await fetch('/api/auth/csrf')).json();
-      const r = await fetch('/api/takes', { method: 'POST', headers: { 'Content-Type': 'application/json', 'X-CSRF-Token': token }, body: JSON.stringify(b) });
-      return { status: r.status, body: await r.json() };
-    }, body);
-    expect(res.status).toBe(201);
-    expect(res.body.take.assignmentId).toBe(assignmentId);
-    takeId = res.body.take.id;
+    await p.goto(`${server.url}/home`, { waitUntil: 'networkidle' });
+    await p.getByTestId('my-assignments').getByRole('link', { name: 'Start D' }).first().click();
+    await p.waitForURL(/\/practice\?drill=/);
+    await p.getByTestId('drill-staff').waitFor();
+    expect(await p.getByLabel('Tempo (bpm)', { exact: true }).inputValue()).toBe('100');
+    await p.getByLabel('Count-in').selectOption('0');
+    await p.waitForFunction(() => document.querySelector('[data-testid="input-status"]')?.textContent?.includes('Listening'));
+    const drill = inAllKeys({ ...STUDIO_SPEC, tempo: 100 }, 'chromatic').find((d) => drillKey(d.spec) === 'D')!;
+    // The first two notes are left out; every other note is played on time.
+    const notes = drill.notes.slice(2).map((n) => ({ midi: n.midi, t: (n.beat * 60000) / 100 }));
+    await p.getByRole('button', { name: 'Start the take' }).click();
+    await p.waitForFunction(() => document.querySelector('[data-testid="practice"]')?.getAttribute('data-origin'));
+    const origin = Number(await p.getByTestId('practice').getAttribute('data-origin'));
+    await p.evaluate(
+      ({ origin, notes }) => {
+        for (const n of notes) setTimeout(() => window.__fakeMidi.noteOn(n.midi, 90, 1, origin + n.t), Math.max(0, origin + n.t - performance.now()));
+      },
+      { origin, notes },
+    );
+    await p.waitForFunction(() => document.querySelector('[data-testid="practice"]')?.getAttribute('data-phase') === 'done', null, { timeout: 20_000 });
+    let rows: Array<{ id: string; assignment_id: string }> = [];
+    for (let i = 0; i < 50 && rows.length === 0; i++) {
+      rows = (await server.pool.query('SELECT id, assignment_id FROM takes WHERE assignment_id IS NOT NULL')).rows;
+      if (rows.length === 0) await new Promise((r) => setTimeout(r, 200));
+    }
+    expect(rows).toHaveLength(1);
+    takeId = rows[0].id;
+    expect(playerBrowser.errors).toEqual([]);
   });
 
   it('the teacher finds the take from the studio table and pins a remark to a missed note', async () => {
