@@ -11,11 +11,12 @@ let player: TestUser;
 let t: Client;
 let p: Client;
 let takeId: string;
+let studioId: string;
 
 beforeAll(async () => {
   const teacher = await createUser(ctx.db, { role: 'teacher', name: 'Mara Quill' });
   player = await createUser(ctx.db, { role: 'player', name: 'Theo Park' });
-  await createStudio(ctx.db, teacher.id, [player.id], 'Remarks studio');
+  studioId = (await createStudio(ctx.db, teacher.id, [player.id], 'Remarks studio')).id;
   [admin, t, p] = await Promise.all([signedIn(ctx.app, await createUser(ctx.db, { role: 'admin' })), signedIn(ctx.app, teacher), signedIn(ctx.app, player)]);
   takeId = (await postTake(p, STUDIO_SPEC, { miss: 2 })).id;
 });
@@ -54,6 +55,10 @@ describe('remarks on a take', () => {
     expect(seen.body.remarks.map((r: { body: string }) => r.body)).toEqual(['You skipped the entry note; land on it.', 'Got it, I will try again at 90.']);
     const n = await t.get('/api/notifications').expect(200);
     expect(n.body.notifications[0]).toMatchObject({ kind: 'reply', link: `/takes/${takeId}` });
+    // The teacher's page of this player counts the take's remarks (the pinned one and the answer).
+    const detail = await t.get(`/api/studios/${studioId}/players/${player.id}`).expect(200);
+    const row = JSON.stringify(detail.body).match(new RegExp(`"id":"${takeId}"[^}]*"remarkCount":(\\d+)`));
+    expect(row?.[1]).toBe('2');
   });
 
   it('refuses a note the take does not have, an empty remark, and another player', async () => {

@@ -21,7 +21,7 @@ export async function getStudioPlayer(db: Db, teacher: User, studioId: string, p
       tempo: takes.tempo,
       accuracy: takes.accuracy,
       startedAt: takes.startedAt,
-      remarkCount: sql<number>`(SELECT count(*)::int FROM remarks r WHERE r.take_id = ${takes.id} AND r.studio_id = ${studioId}::uuid)`,
+      remarkCount: sql<number>`(SELECT count(*)::int FROM remarks r WHERE r.take_id = "takes"."id" AND r.studio_id = ${studioId}::uuid)`,
     })
     .from(takes)
     .where(and(eq(takes.playerId, playerId)))
