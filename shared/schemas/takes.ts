@@ -1,8 +1,12 @@
 import { z } from 'zod';
+import { MAX_FILE_NOTES } from '../engine';
 import { DrillSpecInput } from './drills';
 
-/** The most notes one take may hold: far beyond any drill, small enough to score at once. */
-export const MAX_PLAYED_NOTES = 20_000;
+/**
+ * The most notes one take may hold: far beyond any drill, small enough to score at once. The
+ * engine's own limit for a MIDI file, which it counts before reading one, so the two agree.
+ */
+export const MAX_PLAYED_NOTES = MAX_FILE_NOTES;
 
 export const PlayedNoteInput = z.object({
   midi: z.number({ error: 'midi must be a note number' }).int().min(0).max(127),

@@ -1,5 +1,6 @@
 import { XMLParser } from 'fast-xml-parser';
 import { type MidiData, parseMidi, writeMidi } from 'midi-file';
+import MidiWriter from 'midi-writer-js';
 import { Note } from 'tonal';
 import { describe, expect, it } from 'vitest';
 import {
@@ -9,9 +10,12 @@ import {
   drillToMusicXml,
   generateDrill,
   instruments,
+  MAX_FILE_NOTES,
   midiToPlayed,
   sliceDrill,
 } from '../../shared/engine';
+import { countNoteOns } from '../../shared/engine/files/note-ons';
+import { MAX_PLAYED_NOTES } from '../../shared/schemas/takes';
 
 /** Notes of a parsed file, as [absolute tick, key, velocity] of note-ons with velocity > 0. */
 function noteOns(track: MidiData['tracks'][number]): { tick: number; key: number }[] {
@@ -158,6 +162,119 @@ describe('midiToPlayed on files written by midi-file', () => {
     for (let i = 30; i < garbled.length; i += 5) garbled[i] = 0xf5;
     expect(() => midiToPlayed(garbled)).toThrow(EngineError);
     expect(() => midiToPlayed(null as unknown as Uint8Array)).toThrow(EngineError);
+  });
+});
+
+describe('midiToPlayed counts the notes before reading a file', () => {
+  /** A format 1 file, 96 ticks a quarter, of these track chunks (each the events after the chunk's length). */
+  const smf = (...chunks: Uint8Array[]): Uint8Array => {
+    const out = new Uint8Array(14 + chunks.reduce((n, c) => n + 8 + c.length, 0));
+    out.set([0x4d, 0x54, 0x68, 0x64, 0, 0, 0, 6, 0, 1, 0, chunks.length, 0, 96]);
+    let at = 14;
+    for (const c of chunks) {
+      out.set([0x4d, 0x54, 0x72, 0x6b, c.length >>> 24, (c.length >> 16) & 255, (c.length >> 8) & 255, c.length & 255], at);
+      out.set(c, at + 8);
+      at += 8 + c.length;
+    }
+    return out;
+  };
+  /** `n` eighth notes one after another, written by midi-writer-js (4,000 a track: its writer overflows the stack on one long track). */
+  const writtenElsewhere = (n: number): Uint8Array => {
+    const tracks = [];
+    for (let first = 0; first < n; first += 4000) {
+      const track = new MidiWriter.Track();
+      for (let i = first; i < Math.min(n, first + 4000); i++) {
+        track.addEvent(new MidiWriter.NoteEvent({ pitch: [60 + (i % 12)], duration: 'T8', velocity: 80 }));
+      }
+      tracks.push(track);
+    }
+    return new MidiWriter.Writer(tracks).buildFile();
+  };
+  /** `n` notes in running status: one 90 status byte, then (delta, key, velocity) for each on and off (velocity 0). */
+  const running = (n: number): Uint8Array => {
+    const events = new Uint8Array(1 + n * 6 + 4);
+    events.set([0, 0x90, 60, 100]);
+    for (let i = 0; i < n; i++) events.set(i === 0 ? [24, 60, 0] : [0, 60, 100, 24, 60, 0], i === 0 ? 4 : 1 + i * 6);
+    events.set([0, 0xff, 0x2f, 0], events.length - 4);
+    return events;
+  };
+  const tooMany = /more than 20,000 notes; a take holds at most 20,000/;
+
+  it('holds the same limit as a take', () => {
+    expect(MAX_FILE_NOTES).toBe(20_000);
+    expect(MAX_PLAYED_NOTES).toBe(MAX_FILE_NOTES);
+  });
+
+  it('refuses 20,001 notes written by midi-writer-js with an EngineError naming the limit, quickly', () => {
+    const bytes = writtenElsewhere(20_001);
+    expect(parseMidi(bytes).tracks.flatMap(noteOns)).toHaveLength(20_001);
+    const started = performance.now();
+    expect(() => midiToPlayed(bytes)).toThrow(EngineError);
+    expect(() => midiToPlayed(bytes)).toThrow(tooMany);
+    expect(performance.now() - started).toBeLessThan(500);
+  });
+
+  it('still reads a file of exactly 20,000 notes', () => {
+    const played = midiToPlayed(writtenElsewhere(20_000));
+    expect(played).toHaveLength(20_000);
+    expect(played[19_999].midi).toBe(60 + (19_999 % 12));
+  });
+
+  it('counts note-ons in running status, and not those of velocity 0', () => {
+    expect(parseMidi(smf(running(20_000))).tracks.flatMap(noteOns)).toHaveLength(20_000);
+    expect(midiToPlayed(smf(running(20_000)))).toHaveLength(20_000);
+    expect(() => midiToPlayed(smf(running(20_001)))).toThrow(tooMany);
+    expect(() => midiToPlayed(smf(running(10_000), running(10_001)))).toThrow(tooMany);
+  });
+
+  it('steps over every kind of event by its own length', () => {
+    const events = Uint8Array.from([
+      0x00, 0x90, 60, 100, // note-on
+      0x10, 62, 100, // running status: note-on
+      0x10, 60, 0, // running status, velocity 0: a note-off
+      0x00, 0xc2, 5, 0x00, 7, // program change and a running one, channel 3: one data byte each
+      0x00, 0xd2, 0x40, // channel pressure: one data byte
+      0x00, 0xb0, 7, 100, 0x00, 0xe0, 0, 0x40, 0x00, 0xa0, 62, 32, // control change, pitch bend, key pressure: two
+      0x00, 0xf0, 3, 0x7e, 0x7f, 0xf7, // sysex
+      0x00, 0xff, 0x01, 3, 0x90, 64, 100, // a text event whose text looks like a note-on
+      0x00, 0xf7, 2, 0x91, 0x40, // an escape
+      0x00, 0x91, 64, 90, // note-on, channel 2
+      0x81, 0x00, 67, 90, // running status after a two-byte delta time: note-on
+      0x10, 0x80, 62, 0, 0x00, 0x81, 64, 0, 0x00, 67, 0, // note-offs, the last in running status
+      0x00, 0xff, 0x2f, 0x00,
+    ]);
+    expect(countNoteOns(events)).toEqual({ noteOns: 4, overlong: false });
+    expect(parseMidi(smf(events)).tracks.flatMap(noteOns)).toHaveLength(4); // midi-file agrees
+    expect(midiToPlayed(smf(events)).map((n) => n.midi)).toEqual([60, 62, 64, 67]);
+    // cut anywhere, or garbled, the count stops where the events stop making sense, and never throws
+    for (let cut = 0; cut <= events.length; cut++) expect(countNoteOns(events.subarray(0, cut)).noteOns).toBeLessThanOrEqual(4);
+    let seed = 7;
+    for (let round = 0; round < 200; round++) {
+      const noise = events.map((b) => {
+        seed = (seed * 1_103_515_245 + 12_345) % 2 ** 31;
+        return seed % 5 === 0 ? seed % 256 : b;
+      });
+      expect(() => countNoteOns(noise)).not.toThrow();
+      expect(() => midiToPlayed(smf(noise))).not.toThrow(TypeError);
+    }
+  });
+
+  it('refuses a dense 1 MB file (120,000 notes) in milliseconds', () => {
+    const events = new Uint8Array(120_000 * 8 + 4);
+    for (let i = 0; i < 120_000; i++) events.set([0, 0x90, 60 + (i % 24), 100, 1, 0x80, 60 + (i % 24), 0], i * 8);
+    events.set([0, 0xff, 0x2f, 0], events.length - 4);
+    const bytes = smf(events);
+    expect(bytes.length).toBeLessThanOrEqual(1024 * 1024);
+    const started = performance.now();
+    expect(() => midiToPlayed(bytes)).toThrow(tooMany);
+    expect(performance.now() - started).toBeLessThan(500);
+  });
+
+  it('refuses a length longer than four bytes, which sends the package back over the same bytes for ever', () => {
+    // 8F FF FF FF 78 adds up to -8 in the package's 32 bits: the text event would be read again and again
+    const events = Uint8Array.from([0x00, 0xff, 0x01, 0x8f, 0xff, 0xff, 0xff, 0x78, 0x00, 0x90, 60, 100, 0x60, 60, 0, 0x00, 0xff, 0x2f, 0x00]);
+    expect(countNoteOns(events).overlong).toBe(true);
+    expect(() => midiToPlayed(smf(events))).toThrow(/could not be read/);
   });
 });
 

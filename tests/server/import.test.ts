@@ -90,6 +90,26 @@ describe('POST /api/takes/import', () => {
     expect(await stored()).toBe(before);
   });
 
+  it('refuses a file of more than 20,000 notes before reading it, storing nothing', async () => {
+    const before = await stored();
+    // 20,001 eighth notes, 4,000 a track (midi-writer-js overflows the stack writing one long track)
+    const tracks = [];
+    for (let first = 0; first < 20_001; first += 4000) {
+      const track = new MidiWriter.Track();
+      for (let i = first; i < Math.min(20_001, first + 4000); i++) {
+        track.addEvent(new MidiWriter.NoteEvent({ pitch: [PITCHES[i % PITCHES.length]], duration: '8', velocity: 80 }));
+      }
+      tracks.push(track);
+    }
+    const crowded = Buffer.from(new MidiWriter.Writer(tracks).buildFile());
+    const started = performance.now();
+    const res = await upload(crowded, 'crowded.mid').expect(400);
+    expect(performance.now() - started).toBeLessThan(2000);
+    expect(res.body.error.message).toBe('The file holds more than 20,000 notes; a take holds at most 20,000.');
+    expect(res.body.error.fields.file).toEqual([res.body.error.message]);
+    expect(await stored()).toBe(before);
+  });
+
   it('asks for the file and a valid spec', async () => {
     const noFile = await p.agent.post('/api/takes/import').set('X-CSRF-Token', p.csrf).field('spec', JSON.stringify(SPEC)).expect(400);
     expect(noFile.body.error.fields).toHaveProperty('file');

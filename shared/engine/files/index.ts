@@ -1,3 +1,3 @@
 export { drillToMidi } from './drill-midi';
-export { midiToPlayed } from './midi-to-played';
+export { MAX_FILE_NOTES, midiToPlayed } from './midi-to-played';
 export { drillToMusicXml } from './musicxml';

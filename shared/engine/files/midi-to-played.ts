@@ -1,11 +1,19 @@
 import { EngineError } from '../errors';
 import type { PlayedNote } from '../types';
+import { countNoteOns } from './note-ons';
 import { Midi, type MidiFile } from './smf';
+
+/**
+ * The most notes a file may hold; a take holds no more (shared/schemas/takes.ts uses this as its
+ * MAX_PLAYED_NOTES). Counted before the file is read, as reading one far larger takes seconds.
+ */
+export const MAX_FILE_NOTES = 20_000;
 
 const NOT_SMF = 'This is not a Standard MIDI File: it should start with "MThd".';
 const CUT_SHORT = 'This MIDI file is cut short: part of it is missing.';
 const DAMAGED = 'This MIDI file could not be read: it is not a Standard MIDI File or it is damaged.';
 const NO_NOTES = 'The MIDI file holds no notes.';
+const TOO_MANY = `The file holds more than ${MAX_FILE_NOTES.toLocaleString('en')} notes; a take holds at most ${MAX_FILE_NOTES.toLocaleString('en')}.`;
 
 /**
  * What @tonejs/midi does not check (it throws a TypeError on a broken header and reads a file cut
@@ -13,6 +21,8 @@ const NO_NOTES = 'The MIDI file holds no notes.';
  * is there in full. Returns each track chunk as a file of its own (format 0, one track), so the
  * package, which splits a track by channel and keeps its name on the first part only, keeps what
  * came from one track together; a chunk of another type is skipped (Standard MIDI Files 1.0).
+ * Counts the note-ons of those chunks on the way and refuses more than MAX_FILE_NOTES, and a
+ * length the package would misread (see countNoteOns), before the package sees any of it.
  */
 function framed(bytes: Uint8Array): { files: Uint8Array[]; division: number } {
   const id = (at: number) => String.fromCharCode(bytes[at], bytes[at + 1], bytes[at + 2], bytes[at + 3]);
@@ -27,6 +37,7 @@ function framed(bytes: Uint8Array): { files: Uint8Array[]; division: number } {
   const header = [0x4d, 0x54, 0x68, 0x64, 0, 0, 0, 6, 0, 0, 0, 1, bytes[12], bytes[13]];
   const files: Uint8Array[] = [];
   let found = 0;
+  let noteOns = 0;
   let p = headerEnd;
   while (p < bytes.length && found < declared) {
     if (p + 8 > bytes.length) throw new EngineError(CUT_SHORT);
@@ -36,6 +47,9 @@ function framed(bytes: Uint8Array): { files: Uint8Array[]; division: number } {
       found++;
       // an empty chunk holds nothing to read (and the package cannot read a file of no events)
       if (end > p + 8) {
+        const count = countNoteOns(bytes.subarray(p + 8, end));
+        if (count.overlong) throw new EngineError(DAMAGED);
+        noteOns += count.noteOns;
         const file = new Uint8Array(header.length + end - p);
         file.set(header);
         file.set(bytes.subarray(p, end), header.length);
@@ -45,6 +59,7 @@ function framed(bytes: Uint8Array): { files: Uint8Array[]; division: number } {
     p = end;
   }
   if (found < declared || headerEnd > bytes.length) throw new EngineError(CUT_SHORT);
+  if (noteOns > MAX_FILE_NOTES) throw new EngineError(TOO_MANY);
   return { files, division };
 }
 
