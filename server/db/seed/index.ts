@@ -1,3 +1,4 @@
+import { seedDemoSettings } from './settings';
 import { and, eq } from 'drizzle-orm';
 import { hashPassword } from '../../services/auth/password-hash';
 import type { Db } from '../client';
@@ -50,6 +51,7 @@ export async function seedDemo(db: Db): Promise<void> {
       .onConflictDoNothing();
   }
 
+  await seedDemoSettings(db, ids);
   await seedDemoHistory(db);
 
   // Last, so the demo takes (seeded above, when there) can carry a remark.

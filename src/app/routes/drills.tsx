@@ -19,6 +19,7 @@ import { pairTitle } from '@/features/drills/components/written-pair';
 import { specFromParams, specToParams } from '@/features/drills/hooks/spec-params';
 import { DEFAULT_DRAFT, draftFromSpec, useDrillDraft } from '@/features/drills/hooks/use-drill-draft';
 import { useMe } from '@/features/auth/api/session';
+import { useSettings } from '@/features/practice/api/settings';
 
 /** Build a drill: find a pair for a chord, choose how it moves, see and hear it in all 12 keys. */
 export function DrillsRoute() {
@@ -29,6 +30,14 @@ export function DrillsRoute() {
   });
   const { draft, update, setDraft, spec, fields, cycle, cycleError } = useDrillDraft(initial);
   const [keyIndex, setKeyIndex] = useState(0);
+  // A fresh page starts on the player's own instrument; a drill in the address keeps its own.
+  const settings = useSettings();
+  const [startedFromSettings, setStartedFromSettings] = useState(() => specFromParams(params).spec !== null);
+  useEffect(() => {
+    if (startedFromSettings || !settings.data) return;
+    setStartedFromSettings(true);
+    update({ instrument: settings.data.settings.instrument });
+  }, [startedFromSettings, settings.data, update]);
   const { user } = useMe();
   const canPractise = user?.role === 'player';
   const [playing, setPlaying] = useState<number | null>(null);
