@@ -42,7 +42,7 @@ export function DrillSettings({
 }) {
   const range = draft.range ?? instruments[draft.instrument].range;
   const patternOptions = [
-    ...PRESET_IDS.map((id) => ({ value: id, label: `${presets[id].name} (${id})` })),
+    ...PRESET_IDS.map((id) => ({ value: id, label: presets[id].name })),
     ...savedPatterns.map((p) => ({ value: `saved:${p.id}`, label: `${p.name}${p.mine ? '' : ` — ${p.owner.name}`}` })),
     { value: 'custom', label: 'Custom: build one…' },
   ];
@@ -119,7 +119,7 @@ export function DrillSettings({
           label="Key cycle order"
           value={draft.order}
           options={[
-            { value: 'chromatic', label: 'Chromatic (up a half step)' },
+            { value: 'chromatic', label: 'Chromatic' },
             { value: 'fourths', label: 'Fourths' },
             { value: 'fifths', label: 'Fifths' },
           ]}
