@@ -5,16 +5,19 @@ import { dueFormat, pct, StatusBadge } from './status-badge';
 const dayFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium' });
 
 /** Six weeks of mean accuracy as small bars, oldest first; an empty week is a dot. */
+/** Bars start at 50% accuracy: a working studio lives between 80% and 100%, where the change is. */
+const TREND_FLOOR = 0.5;
+
 function Trend({ weeks }: { weeks: (number | null)[] }) {
   const known = weeks.filter((w): w is number => w !== null);
-  const label = known.length ? `Accuracy by week, oldest first: ${weeks.map((w) => pct(w)).join(', ')}` : 'No takes in six weeks';
+  const label = known.length ? `Accuracy by week, oldest first (bars from 50% to 100%): ${weeks.map((w) => pct(w)).join(', ')}` : 'No takes in six weeks';
   return (
     <span className="inline-flex h-6 items-end gap-0.5" role="img" aria-label={label} title={label}>
       {weeks.map((w, i) => (
         <span
           key={i}
           className={w === null ? 'h-1 w-2 rounded-sm bg-line' : 'w-2 rounded-sm bg-brass-500'}
-          style={w === null ? undefined : { height: `${Math.max(8, w * 100)}%` }}
+          style={w === null ? undefined : { height: `${Math.max(8, ((Math.max(TREND_FLOOR, w) - TREND_FLOOR) / (1 - TREND_FLOOR)) * 100)}%` }}
         />
       ))}
     </span>
