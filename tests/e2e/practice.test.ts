@@ -73,9 +73,11 @@ describe('practice page in Chromium with the fake MIDI device', () => {
 
   it('marks a left-out, a wrong and a late note, stores the take with those verdicts, and exports it', async () => {
     const { page } = b;
-    await open(SPEC);
+    // Long enough (30 notes, about 6 s) that the take is still running when the miss is marked.
+    const spec: DrillSpec = { ...SPEC, range: { low: 60, high: 88 } };
+    await open(spec);
     expect(await page.getByTestId('caution-start').textContent()).toMatch(/medical professional/);
-    const drill = generateDrill(SPEC);
+    const drill = generateDrill(spec);
     const script: ScriptNote[] = [];
     drill.notes.forEach((n, i) => {
       const t = n.beat * msPerBeat;
