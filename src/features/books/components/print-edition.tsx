@@ -3,7 +3,7 @@ import type { Book } from '@shared/schemas/books';
 import { useState } from 'react';
 import { DrillStaff } from '@/components/notation/drill-staff';
 import { Button } from '@/components/ui/button';
-import './print-edition.css';
+import '@/components/print/print-pages.css';
 
 const PAGE_WIDTH = 700;
 
@@ -27,7 +27,7 @@ export function PrintEdition({ book, drills, titleOf }: { book: Book; drills: Ed
   const instrument = drills[0]?.cycle[0]?.spec.instrument;
   let index = -1;
   return (
-    <article className="sf-edition grid gap-6" aria-label="Printable edition">
+    <article className="sf-print grid gap-6" aria-label="Printable edition">
       <div className="no-print flex flex-wrap items-center gap-3 rounded-card border border-line bg-raised p-4">
         <div className="grid flex-1 gap-1">
           <label htmlFor="edition-progress" className="text-body font-semibold">
@@ -47,7 +47,7 @@ export function PrintEdition({ book, drills, titleOf }: { book: Book; drills: Ed
         {instrument ? <p className="mt-2 text-caption">Written pitch for {instruments[instrument].label}; every drill in all 12 keys.</p> : null}
       </header>
       {drills.map((d, n) => (
-        <section key={d.id} className="sf-edition-drill grid gap-4" aria-label={d.title}>
+        <section key={d.id} className="sf-print-drill grid gap-4" aria-label={d.title}>
           <div>
             <h2 className="text-title">
               {n + 1}. {d.title}
@@ -58,7 +58,7 @@ export function PrintEdition({ book, drills, titleOf }: { book: Book; drills: Ed
             index += 1;
             const i = index;
             return i <= done ? (
-              <div key={`${d.id}-${k}`} className="sf-edition-key" data-testid="edition-key">
+              <div key={`${d.id}-${k}`} className="sf-print-key" data-testid="edition-key">
                 <h3 className="font-bold">
                   {titleOf(drill)}
                   {drill.spec.chord ? <span className="font-normal text-muted"> over {drill.spec.chord}</span> : null}

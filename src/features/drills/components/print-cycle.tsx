@@ -4,7 +4,7 @@ import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { DrillStaff } from '@/components/notation/drill-staff';
 import { pairTitle } from './written-pair';
-import './print-cycle.css';
+import '@/components/print/print-pages.css';
 
 const ORDER_LABEL: Record<KeyOrder, string> = { chromatic: 'chromatic, up a half step', fourths: 'in fourths', fifths: 'in fifths' };
 const PAGE_WIDTH = 700;
