@@ -12,6 +12,7 @@ export default defineConfig({
     include: ['tests/**/*.test.ts', 'tests/**/*.test.tsx'],
     environment: 'node',
     globalSetup: ['tests/helpers/global-setup.ts'],
+    setupFiles: ['tests/helpers/fast-check-seed.ts'],
     testTimeout: 30_000,
     hookTimeout: 120_000,
     reporters: ['default', './tests/helpers/count-reporter.ts'],
