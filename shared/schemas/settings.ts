@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { DrillSpec, InstrumentIdSchema } from './drills';
+import { InstrumentIdSchema } from './drills';
 
 const Midi = z.number().int().min(0).max(127);
 
@@ -31,7 +31,6 @@ export const SettingsResponse = z.object({ settings: PlayerSettings });
 export type SettingsResponse = z.infer<typeof SettingsResponse>;
 
 export const SuggestTempoQuery = z.object({ spec: z.string().min(2).max(8000) });
-export const SuggestTempoSpec = DrillSpec;
 export const SuggestTempoResponse = z.object({
   climb: z.object({ tempo: z.number(), lastTempo: z.number(), lastVerdict: z.enum(['up', 'down', 'hold']), updatedAt: z.string() }).nullable(),
 });

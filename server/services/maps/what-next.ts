@@ -3,7 +3,7 @@ import { type DrillSpec, inAllKeys } from '../../../shared/engine';
 import { KEYS } from '../../../shared/schemas/history';
 import type { NextItem } from '../../../shared/schemas/maps';
 import type { Db } from '../../db/client';
-import { drillKey } from '../takes/score-take';
+import { drillKey } from '../../../shared/practice/drill-identity';
 
 /** Look-back for the weak cells, and the least notes a cell needs to count. */
 export const NEXT_WINDOW_DAYS = 30;

@@ -6,13 +6,13 @@ import { presentSettings } from './get';
 
 /** Stores one input device's measured latency, keeping the other devices'. */
 export async function setLatency(db: Db, userId: string, device: string, offsetMs: number): Promise<PlayerSettings> {
-  const entry = JSON.stringify({ [device]: Math.round(offsetMs * 10) / 10 });
+  const entry = { [device]: Math.round(offsetMs * 10) / 10 };
   const [row] = await db
     .insert(playerSettings)
-    .values({ userId, latency: JSON.parse(entry) })
+    .values({ userId, latency: entry })
     .onConflictDoUpdate({
       target: playerSettings.userId,
-      set: { latency: sql`${playerSettings.latency} || ${entry}::jsonb`, updatedAt: sql`now()` },
+      set: { latency: sql`${playerSettings.latency} || ${JSON.stringify(entry)}::jsonb`, updatedAt: sql`now()` },
     })
     .returning();
   return presentSettings(row);

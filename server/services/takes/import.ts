@@ -1,7 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import { EngineError, midiToPlayed, type PlayedNote } from '../../../shared/engine';
 import type { DrillSpec } from '../../../shared/schemas/drills';
-import { MAX_PLAYED_NOTES } from '../../../shared/schemas/takes';
 import type { Db } from '../../db/client';
 import { AppError } from '../../errors';
 import { createTake } from './create';
@@ -29,10 +28,6 @@ export async function importTake(db: Db, args: ImportTakeArgs) {
   } catch (err) {
     if (err instanceof EngineError) throw new AppError('bad_request', err.message, { file: [err.message] });
     throw err;
-  }
-  if (played.length > MAX_PLAYED_NOTES) {
-    const message = `This MIDI file holds ${played.length} notes; a take holds at most ${MAX_PLAYED_NOTES.toLocaleString('en')}.`;
-    throw new AppError('bad_request', message, { file: [message] });
   }
   const downbeat = args.offsetMs ?? Math.min(...played.map((n) => n.timeMs));
   const shifted = played.map((n) => ({ ...n, timeMs: n.timeMs - downbeat }));

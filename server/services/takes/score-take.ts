@@ -12,8 +12,6 @@ import {
   type TakeScore,
 } from '../../../shared/engine';
 
-export { drillKey, patternName };
-
 /** The windows a client may ask for; anything wider would let sloppy playing count as clean. */
 export const WINDOW_BOUNDS = { hitMin: 20, hitMax: 150, matchMax: 400 } as const;
 
