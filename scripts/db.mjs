@@ -162,7 +162,18 @@ export function ensure() {
     const sock = socketDir(dataDir);
     const opts = `-p ${dbPort()} -k ${sock} -c listen_addresses=127.0.0.1`;
     log(`starting PostgreSQL on 127.0.0.1:${dbPort()}`);
-    const started = runPg(join(bin, 'pg_ctl'), ['-D', dataDir, '-o', opts, '-l', join(dataDir, 'server.log'), '-w', '-t', '60', 'start']);
+    const started = runPg(join(bin, 'pg_ctl'), [
+      '-D',
+      dataDir,
+      '-o',
+      opts,
+      '-l',
+      join(dataDir, 'server.log'),
+      '-w',
+      '-t',
+      '60',
+      'start',
+    ]);
     if (!started.ok && !isRunning(bin, dataDir)) {
       let tail = '';
       try {

@@ -9,11 +9,19 @@ const projectDir = resolve(dirname(fileURLToPath(import.meta.url)), '..');
 const urls = ensure();
 const env = { NODE_ENV: 'development', SEED_DEMO: '1', ...process.env, DATABASE_URL: urls.app };
 const children = [
-  spawn(process.execPath, ['--import', 'tsx', '--watch', 'server/index.ts'], { cwd: projectDir, stdio: 'inherit', env }),
+  spawn(process.execPath, ['--import', 'tsx', '--watch', 'server/index.ts'], {
+    cwd: projectDir,
+    stdio: 'inherit',
+    env,
+  }),
   spawn(process.execPath, ['node_modules/vite/bin/vite.js'], { cwd: projectDir, stdio: 'inherit', env }),
 ];
 const stopAll = () => {
   for (const c of children) c.kill('SIGTERM');
 };
 for (const sig of ['SIGINT', 'SIGTERM']) process.on(sig, stopAll);
-for (const c of children) c.on('exit', (code) => { stopAll(); process.exit(code ?? 0); });
+for (const c of children)
+  c.on('exit', (code) => {
+    stopAll();
+    process.exit(code ?? 0);
+  });

@@ -17,9 +17,17 @@ export const NOTES_PER_TAKE = 500;
 
 /** A 500-note take: scale-steps up and down the piano, stopped after its 500th note. */
 export function longTakeSpecs(): DrillSpec[] {
-  return inAllKeys({ pair: ['D', 'C'], pattern: 'scale-steps', direction: 'up-down', range: { low: 21, high: 108 }, instrument: 'piano', tempo: 160 }, 'fourths').map(
-    (d) => d.spec,
-  );
+  return inAllKeys(
+    {
+      pair: ['D', 'C'],
+      pattern: 'scale-steps',
+      direction: 'up-down',
+      range: { low: 21, high: 108 },
+      instrument: 'piano',
+      tempo: 160,
+    },
+    'fourths',
+  ).map((d) => d.spec);
 }
 
 export function longTake(spec: DrillSpec, rand: () => number) {
@@ -40,7 +48,12 @@ export function longTake(spec: DrillSpec, rand: () => number) {
 export async function ensureLongHistoryPlayer(db: Db): Promise<string> {
   await db
     .insert(users)
-    .values({ email: LONG_HISTORY_EMAIL, name: 'Bench Player', role: 'player', passwordHash: await hashPassword('bench-long-history') })
+    .values({
+      email: LONG_HISTORY_EMAIL,
+      name: 'Bench Player',
+      role: 'player',
+      passwordHash: await hashPassword('bench-long-history'),
+    })
     .onConflictDoNothing({ target: users.email });
   const { rows } = await db.execute<{ id: string }>(sql`SELECT id FROM users WHERE email = ${LONG_HISTORY_EMAIL}`);
   return rows[0].id;
@@ -48,7 +61,9 @@ export async function ensureLongHistoryPlayer(db: Db): Promise<string> {
 
 export async function seedLongHistory(db: Db, notes = 1_000_000, log = console.log): Promise<string> {
   const playerId = await ensureLongHistoryPlayer(db);
-  const { rows } = await db.execute<{ n: number }>(sql`SELECT count(*)::int AS n FROM take_notes WHERE player_id = ${playerId}`);
+  const { rows } = await db.execute<{ n: number }>(
+    sql`SELECT count(*)::int AS n FROM take_notes WHERE player_id = ${playerId}`,
+  );
   let have = rows[0].n;
   if (have >= notes) {
     log(`long history: ${have.toLocaleString('en')} note results already there`);
@@ -67,13 +82,21 @@ export async function seedLongHistory(db: Db, notes = 1_000_000, log = console.l
       const k = i++;
       const spec = specs[k % specs.length];
       const take = longTake(spec, rand);
-      const { take: row } = await createTake(db, { playerId, id: prngUuid(rand), spec, ...take, startedAt: new Date(now - yearMs + Math.floor((k / total) * yearMs)) });
+      const { take: row } = await createTake(db, {
+        playerId,
+        id: prngUuid(rand),
+        spec,
+        ...take,
+        startedAt: new Date(now - yearMs + Math.floor((k / total) * yearMs)),
+      });
       have += row.noteCount;
       if (k % 200 === 199) log(`  ${(k + 1).toLocaleString('en')} / ${total.toLocaleString('en')} takes`);
     }
   };
   await Promise.all([worker(), worker(), worker()]);
-  log(`long history: ${have.toLocaleString('en')} note results in ${((performance.now() - started) / 1000).toFixed(1)} s`);
+  log(
+    `long history: ${have.toLocaleString('en')} note results in ${((performance.now() - started) / 1000).toFixed(1)} s`,
+  );
   return playerId;
 }
 

@@ -21,7 +21,7 @@ function step(name, args) {
 }
 
 step('type check', ['node_modules/typescript/bin/tsc', '--noEmit', '-p', 'tsconfig.json']);
-step('lint', ['node_modules/@biomejs/biome/bin/biome', 'lint', '.']);
+step('lint and format', ['node_modules/@biomejs/biome/bin/biome', 'check', '.']);
 step('client build', ['node_modules/vite/bin/vite.js', 'build', '--logLevel', 'warn']);
 const extra = process.argv.slice(2);
 const res = spawnSync(process.execPath, ['node_modules/vitest/vitest.mjs', 'run', ...extra], {

@@ -20,7 +20,11 @@ if (env.NODE_ENV !== 'production') {
 }
 try {
   const run = await sendWeeklySummaries(db, mailerFromEnv(env), { origin, force: true });
-  console.log(run.locked ? 'another instance is sending the summaries right now; nothing sent' : `sent ${run.sent} weekly summaries (week of ${run.week})`);
+  console.log(
+    run.locked
+      ? 'another instance is sending the summaries right now; nothing sent'
+      : `sent ${run.sent} weekly summaries (week of ${run.week})`,
+  );
 } finally {
   await fake?.close();
   await pool.end();

@@ -34,11 +34,16 @@ const EnvSchema = z
       ctx.addIssue({ code: 'custom', path: ['SESSION_SECRET'], message: 'SESSION_SECRET is required in production' });
     }
     for (const name of ['STRIPE_SECRET_KEY', 'STRIPE_WEBHOOK_SECRET'] as const) {
-      if (env.NODE_ENV === 'production' && !env[name]) ctx.addIssue({ code: 'custom', path: [name], message: `${name} is required in production` });
+      if (env.NODE_ENV === 'production' && !env[name])
+        ctx.addIssue({ code: 'custom', path: [name], message: `${name} is required in production` });
     }
   });
 
-export type Env = z.infer<typeof EnvSchema> & { SESSION_SECRET: string; STRIPE_SECRET_KEY: string; STRIPE_WEBHOOK_SECRET: string };
+export type Env = z.infer<typeof EnvSchema> & {
+  SESSION_SECRET: string;
+  STRIPE_SECRET_KEY: string;
+  STRIPE_WEBHOOK_SECRET: string;
+};
 
 export class EnvError extends Error {}
 

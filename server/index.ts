@@ -14,7 +14,9 @@ async function startMailFake(env: Env, db: ReturnType<typeof createDb>['db']): P
   if (env.NODE_ENV === 'production') return null;
   try {
     const fake = await startFakeSmtp({ db, port: env.SMTP_PORT, host: env.SMTP_HOST });
-    console.log(`Mail goes to a local fake SMTP server on ${env.SMTP_HOST}:${fake.port}; admins read it at /api/dev/outbox`);
+    console.log(
+      `Mail goes to a local fake SMTP server on ${env.SMTP_HOST}:${fake.port}; admins read it at /api/dev/outbox`,
+    );
     return fake;
   } catch (err) {
     if ((err as NodeJS.ErrnoException).code === 'EADDRINUSE') {
@@ -70,7 +72,11 @@ async function main() {
 
   const app = createApp({ db, pool, env });
   // Hourly, every instance tries; an advisory lock and a row per studio and week make it once.
-  const stopSummaries = scheduleWeeklySummaries(db, mailerFromEnv(env), env.PUBLIC_URL ?? `http://${env.HOST}:${env.PORT}`);
+  const stopSummaries = scheduleWeeklySummaries(
+    db,
+    mailerFromEnv(env),
+    env.PUBLIC_URL ?? `http://${env.HOST}:${env.PORT}`,
+  );
   const server = app.listen(env.PORT, env.HOST, () => {
     const url = `http://${env.HOST}:${env.PORT}`;
     console.log(`\nSixfold is running at ${url}\n`);

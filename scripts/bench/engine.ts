@@ -76,13 +76,17 @@ export async function run(): Promise<void> {
     `generateDrill: ${PRESETS.length} presets x 12 keys x ${DIRECTIONS.length} directions x ${INSTRUMENTS.length} instruments = ${last.drills} drills, ${last.notes} notes`,
   );
   console.log(`  first run (cold caches): ${cold.toFixed(1)} ms`);
-  console.log(`  median of 5 warm runs:   ${median.toFixed(1)} ms total, ${((median * 1000) / last.drills).toFixed(1)} us per drill (goal: under 50 ms total)`);
+  console.log(
+    `  median of 5 warm runs:   ${median.toFixed(1)} ms total, ${((median * 1000) / last.drills).toFixed(1)} us per drill (goal: under 50 ms total)`,
+  );
   const cpu: number[] = [];
   for (let i = 0; i < 5; i++) cpu.push(cpuMs(everyDrill));
   cpu.sort((x, y) => x - y);
   console.log(`  median CPU time of 5 runs: ${cpu[2].toFixed(1)} ms (includes garbage collection on other threads)`);
   const [cycles, cycleMs] = time(everyKeyCycle);
-  console.log(`inAllKeys (fourths) for every preset, direction and instrument: ${cycles} drills in ${cycleMs.toFixed(1)} ms`);
+  console.log(
+    `inAllKeys (fourths) for every preset, direction and instrument: ${cycles} drills in ${cycleMs.toFixed(1)} ms`,
+  );
 }
 
 const invokedDirectly = typeof process !== 'undefined' && process.argv[1]?.endsWith('engine.ts');

@@ -13,9 +13,15 @@ import { createUser } from '../../tests/helpers/factories';
 import { benchDatabase } from './bench-db';
 
 // 'scale-steps-triplet' plays triplet eighths: at 240 bpm that is 12 notes a second.
-const SPEC: DrillSpec = { pair: ['C', 'D'], pattern: 'scale-steps-triplet', direction: 'up-down', instrument: 'piano', tempo: 240, range: { low: 36, high: 96 } };
+const SPEC: DrillSpec = {
+  pair: ['C', 'D'],
+  pattern: 'scale-steps-triplet',
+  direction: 'up-down',
+  instrument: 'piano',
+  tempo: 240,
+  range: { low: 36, high: 96 },
+};
 const NOTES = 200;
-
 
 const pct = (xs: number[], p: number) => {
   const s = [...xs].sort((a, b) => a - b);
@@ -32,14 +38,19 @@ export async function run(): Promise<void> {
   const address = server.address();
   const base = `http://127.0.0.1:${typeof address === 'object' && address ? address.port : 0}`;
   const user = await createUser(db, { role: 'player' });
-  const b = await openBrowser(base, { fakeMidi: true, midiOptions: { inputs: [{ id: 'kb', name: 'Bench Keyboard' }], outputs: [] } });
+  const b = await openBrowser(base, {
+    fakeMidi: true,
+    midiOptions: { inputs: [{ id: 'kb', name: 'Bench Keyboard' }], outputs: [] },
+  });
   try {
     const { page } = b;
     await signInThroughPage(page, base, user);
     await page.goto(`${base}/practice?spec=${encodeURIComponent(JSON.stringify(SPEC))}`, { waitUntil: 'networkidle' });
     await page.getByTestId('drill-staff').waitFor();
     await page.getByLabel('Count-in').selectOption('0');
-    await page.waitForFunction(() => document.querySelector('[data-testid="input-status"]')?.textContent?.includes('Listening'));
+    await page.waitForFunction(() =>
+      document.querySelector('[data-testid="input-status"]')?.textContent?.includes('Listening'),
+    );
     const isolated = await page.evaluate(() => self.crossOriginIsolated);
     const drill = generateDrill(SPEC);
     const notes = drill.notes.slice(0, NOTES).map((n, i) => ({ i, midi: n.midi, t: (n.beat * 60000) / SPEC.tempo! }));
@@ -54,7 +65,8 @@ export async function run(): Promise<void> {
           const out: number[] = [];
           const pending = new Map<number, number>();
           const root = document.querySelector('[data-testid="drill-staff"]') ?? document.body;
-          const marked = (i: number) => /sf-mark-/.test(document.querySelector(`[data-note-index="${i}"]`)?.getAttribute('class') ?? '');
+          const marked = (i: number) =>
+            /sf-mark-/.test(document.querySelector(`[data-note-index="${i}"]`)?.getAttribute('class') ?? '');
           const settle = (i: number) => {
             const t0 = pending.get(i);
             if (t0 === undefined) return;
@@ -79,15 +91,22 @@ export async function run(): Promise<void> {
             );
           }
           const last = origin + notes[notes.length - 1].t;
-          setTimeout(() => {
-            obs.disconnect();
-            resolve(out);
-          }, last - performance.now() + 2000);
+          setTimeout(
+            () => {
+              obs.disconnect();
+              resolve(out);
+            },
+            last - performance.now() + 2000,
+          );
         }),
       { origin, notes },
     );
-    console.log(`notes marked: ${samples.length} of ${notes.length} at 12/s with ±15 ms jitter; cross-origin isolated: ${isolated}`);
-    console.log(`dispatch -> next frame after the mark is in the DOM: p50 ${pct(samples, 50).toFixed(2)} ms, p95 ${pct(samples, 95).toFixed(2)} ms, max ${Math.max(...samples).toFixed(2)} ms (goal p95 < 16.7 ms)`);
+    console.log(
+      `notes marked: ${samples.length} of ${notes.length} at 12/s with ±15 ms jitter; cross-origin isolated: ${isolated}`,
+    );
+    console.log(
+      `dispatch -> next frame after the mark is in the DOM: p50 ${pct(samples, 50).toFixed(2)} ms, p95 ${pct(samples, 95).toFixed(2)} ms, max ${Math.max(...samples).toFixed(2)} ms (goal p95 < 16.7 ms)`,
+    );
   } finally {
     await b.close();
     await new Promise<void>((r) => server.close(() => r()));

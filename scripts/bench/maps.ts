@@ -36,7 +36,9 @@ export async function run(): Promise<void> {
         await call();
         times.push(performance.now() - t);
       }
-      console.log(`${name.padEnd(34)} p50 ${pct(times, 50).toFixed(1)} ms  p95 ${pct(times, 95).toFixed(1)} ms  (goal p95 < 100 ms)`);
+      console.log(
+        `${name.padEnd(34)} p50 ${pct(times, 50).toFixed(1)} ms  p95 ${pct(times, 95).toFixed(1)} ms  (goal p95 < 100 ms)`,
+      );
     }
   } finally {
     await pool.end();

@@ -27,14 +27,23 @@ function take(size: number): { expected: DrillNote[]; played: PlayedNote[] } {
     const beat = k / 2;
     const midi = PITCHES[(k * 5) % PITCHES.length];
     expected.push({
-      midi, name: '', written: '', beat, duration: 0.5,
-      measure: Math.floor(beat / 4) + 1, beatInMeasure: (beat % 4) + 1, source: 'scale', cell: Math.floor(k / 8),
+      midi,
+      name: '',
+      written: '',
+      beat,
+      duration: 0.5,
+      measure: Math.floor(beat / 4) + 1,
+      beatInMeasure: (beat % 4) + 1,
+      source: 'scale',
+      cell: Math.floor(k / 8),
     });
     const t = (beat * 60000) / TEMPO + (r() - 0.5) * 60;
     const roll = r();
     if (roll < 0.0125) continue; // left out
-    if (roll < 0.025) played.push({ midi: midi + 1, timeMs: t }); // wrong
-    else if (roll < 0.0375) played.push({ midi, timeMs: t + 200 }); // far off
+    if (roll < 0.025)
+      played.push({ midi: midi + 1, timeMs: t }); // wrong
+    else if (roll < 0.0375)
+      played.push({ midi, timeMs: t + 200 }); // far off
     else played.push({ midi, timeMs: t });
     if (roll > 0.9875) played.push({ midi: midi + 2, timeMs: t + 90 }); // extra
   }

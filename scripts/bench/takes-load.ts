@@ -40,7 +40,13 @@ async function signIn(base: string): Promise<{ cookie: string; csrf: string }> {
 }
 
 /** Sends `rate` takes a second for `seconds`, open-loop; latencies from each planned send time. */
-async function phase(base: string, auth: { cookie: string; csrf: string }, bodies: string[], rate: number, seconds: number) {
+async function phase(
+  base: string,
+  auth: { cookie: string; csrf: string },
+  bodies: string[],
+  rate: number,
+  seconds: number,
+) {
   const total = rate * seconds;
   const latencies: number[] = [];
   let errors = 0;
@@ -52,7 +58,11 @@ async function phase(base: string, auth: { cookie: string; csrf: string }, bodie
     if (wait > 0) await new Promise((r) => setTimeout(r, wait));
     const body = bodies[i % bodies.length].replace('__ID__', randomUUID());
     sends.push(
-      fetch(`${base}/api/takes`, { method: 'POST', headers: { 'content-type': 'application/json', 'x-csrf-token': auth.csrf, cookie: auth.cookie }, body })
+      fetch(`${base}/api/takes`, {
+        method: 'POST',
+        headers: { 'content-type': 'application/json', 'x-csrf-token': auth.csrf, cookie: auth.cookie },
+        body,
+      })
         .then(async (res) => {
           await res.arrayBuffer();
           if (res.status !== 201) errors++;
@@ -89,7 +99,9 @@ export async function run(): Promise<void> {
     console.log(`takes of 500 expected notes, ${Math.round(bodies[0].length / 1024)} kB each`);
     await phase(base, auth, bodies, 5, 2); // warm-up
     const main = await phase(base, auth, bodies, 20, 30);
-    console.log(`20/s for 30 s: ${main.sent} sent, ${main.errors} errors, p50 ${main.p50.toFixed(1)} ms, p95 ${main.p95.toFixed(1)} ms, max ${main.max.toFixed(0)} ms (goal p95 < 100 ms, no errors)`);
+    console.log(
+      `20/s for 30 s: ${main.sent} sent, ${main.errors} errors, p50 ${main.p50.toFixed(1)} ms, p95 ${main.p95.toFixed(1)} ms, max ${main.max.toFixed(0)} ms (goal p95 < 100 ms, no errors)`,
+    );
     let best = main.p95 < 100 && main.errors === 0 ? 20 : 0;
     for (const rate of [30, 40, 50, 60, 80, 100, 130, 160, 200]) {
       const r = await phase(base, auth, bodies, rate, 10);

@@ -38,7 +38,8 @@ export const requireUser: RequestHandler = (req, _res, next) => {
 export function requireRole(...roles: Role[]): RequestHandler {
   return (req, _res, next) => {
     if (!req.user) return next(unauthenticated());
-    if (!roles.includes(req.user.role)) return next(forbidden(`This is for ${roles.map((r) => `${r}s`).join(' and ')} only`));
+    if (!roles.includes(req.user.role))
+      return next(forbidden(`This is for ${roles.map((r) => `${r}s`).join(' and ')} only`));
     next();
   };
 }

@@ -25,14 +25,17 @@ export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
     return;
   }
   if (err instanceof AppError) {
-    res.status(err.status).json({ error: { code: err.code, message: err.message, ...(err.fields ? { fields: err.fields } : {}) } });
+    res
+      .status(err.status)
+      .json({ error: { code: err.code, message: err.message, ...(err.fields ? { fields: err.fields } : {}) } });
     return;
   }
   if (err instanceof EngineError) {
     res.status(400).json({ error: { code: 'bad_request', message: err.message } });
     return;
   }
-  const status = typeof err?.status === 'number' ? err.status : typeof err?.statusCode === 'number' ? err.statusCode : 500;
+  const status =
+    typeof err?.status === 'number' ? err.status : typeof err?.statusCode === 'number' ? err.statusCode : 500;
   if (status === 400 && err?.type === 'entity.parse.failed') {
     res.status(400).json({ error: { code: 'bad_request', message: 'The request body is not valid JSON' } });
     return;
@@ -46,6 +49,7 @@ export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
     return;
   }
   console.error(err);
-  res.status(500).json({ error: { code: 'internal', message: 'Something went wrong on our side; nothing you sent was lost' } });
+  res
+    .status(500)
+    .json({ error: { code: 'internal', message: 'Something went wrong on our side; nothing you sent was lost' } });
 };
-

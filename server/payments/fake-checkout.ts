@@ -151,14 +151,16 @@ export async function startFakeCheckout(opts: {
     if (!requireKey(req, res)) return;
     const body = req.body as Record<string, unknown>;
     const items = (Array.isArray(body.line_items) ? body.line_items : []) as LineItem[];
-    if (!body.success_url || !body.cancel_url) return apiError(res, 400, 'success_url and cancel_url are required', 'parameter_missing');
+    if (!body.success_url || !body.cancel_url)
+      return apiError(res, 400, 'success_url and cancel_url are required', 'parameter_missing');
     if (items.length === 0) return apiError(res, 400, 'line_items is required', 'parameter_missing');
     let total = 0;
     let currency = '';
     for (const item of items) {
       const amount = Number(item.price_data?.unit_amount);
       const quantity = Number(item.quantity ?? 1);
-      if (!Number.isInteger(amount) || amount < 0 || !Number.isInteger(quantity)) return apiError(res, 400, 'Invalid unit_amount or quantity', 'parameter_invalid_integer');
+      if (!Number.isInteger(amount) || amount < 0 || !Number.isInteger(quantity))
+        return apiError(res, 400, 'Invalid unit_amount or quantity', 'parameter_invalid_integer');
       total += amount * quantity;
       currency = String(item.price_data?.currency ?? '').toLowerCase();
     }
@@ -204,7 +206,8 @@ export async function startFakeCheckout(opts: {
     const intent = String((req.body as Record<string, unknown>).payment_intent ?? '');
     const session = [...sessions.values()].find((s) => s.payment_intent && s.payment_intent === intent);
     if (!session) return apiError(res, 404, `No such payment_intent: '${intent}'`, 'resource_missing');
-    if (refunded.has(intent)) return apiError(res, 400, `Charge for ${intent} has already been refunded.`, 'charge_already_refunded');
+    if (refunded.has(intent))
+      return apiError(res, 400, `Charge for ${intent} has already been refunded.`, 'charge_already_refunded');
     refunded.add(intent);
     res.json({
       id: id('re'),
@@ -219,10 +222,21 @@ export async function startFakeCheckout(opts: {
 
   app.get('/pay/:id', (req, res) => {
     const s = sessions.get(req.params.id);
-    if (!s) return res.status(404).type('html').send(page('Checkout not found', '<h1>This checkout has expired or never existed.</h1>'));
+    if (!s)
+      return res
+        .status(404)
+        .type('html')
+        .send(page('Checkout not found', '<h1>This checkout has expired or never existed.</h1>'));
     const amount = `${(s.amount_total / 100).toFixed(2)} ${s.currency.toUpperCase()}`;
     if (s.status !== 'open') {
-      return res.type('html').send(page('Checkout', `<h1>This checkout is already ${s.status === 'complete' ? 'paid' : 'closed'}.</h1><p><a href="${escapeHtml(s.success_url)}">Return to the shop</a></p>`));
+      return res
+        .type('html')
+        .send(
+          page(
+            'Checkout',
+            `<h1>This checkout is already ${s.status === 'complete' ? 'paid' : 'closed'}.</h1><p><a href="${escapeHtml(s.success_url)}">Return to the shop</a></p>`,
+          ),
+        );
     }
     res.type('html').send(
       page(

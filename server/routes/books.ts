@@ -1,5 +1,13 @@
 import { Router } from 'express';
-import { AddBookDrillInput, BookDrillParams, BookParams, CreateBookInput, ReorderBookInput, UpdateBookDrillInput, UpdateBookInput } from '../../shared/schemas/books';
+import {
+  AddBookDrillInput,
+  BookDrillParams,
+  BookParams,
+  CreateBookInput,
+  ReorderBookInput,
+  UpdateBookDrillInput,
+  UpdateBookInput,
+} from '../../shared/schemas/books';
 import type { AppContext } from '../app';
 import { AppError } from '../errors';
 import { linkOrigin } from '../mail/link-origin';

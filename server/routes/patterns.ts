@@ -17,7 +17,9 @@ export function patternsRouter({ db }: AppDeps) {
     res.json({ patterns: await listCustomPatterns(db, req.user!) });
   });
   router.post('/', async (req, res) => {
-    res.status(201).json({ pattern: await createCustomPattern(db, req.user!, parseBody(CreateCustomPatternInput, req)) });
+    res
+      .status(201)
+      .json({ pattern: await createCustomPattern(db, req.user!, parseBody(CreateCustomPatternInput, req)) });
   });
   router.get('/:id', async (req, res) => {
     res.json({ pattern: await getCustomPattern(db, req.user!, parseParams(IdParams, req).id) });

@@ -36,9 +36,14 @@ export function takesRouter({ db }: AppContext) {
   });
 
   router.post('/import', requireRole('player'), midiUpload, async (req, res) => {
-    if (!req.file) throw new AppError('bad_request', 'Attach the MIDI file as "file"', { file: ['Attach a MIDI file'] });
+    if (!req.file)
+      throw new AppError('bad_request', 'Attach the MIDI file as "file"', { file: ['Attach a MIDI file'] });
     const fields = parseBody(ImportTakeFields, req);
-    const { take } = await importTake(db, { playerId: req.user!.id, bytes: new Uint8Array(req.file.buffer), ...fields });
+    const { take } = await importTake(db, {
+      playerId: req.user!.id,
+      bytes: new Uint8Array(req.file.buffer),
+      ...fields,
+    });
     res.status(201).json({ take: presentTake(take) });
   });
 
@@ -65,16 +70,24 @@ export function takesRouter({ db }: AppContext) {
   return router;
 }
 
-const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: MAX_IMPORT_BYTES, files: 1, fields: 8 } }).single('file');
+const upload = multer({
+  storage: multer.memoryStorage(),
+  limits: { fileSize: MAX_IMPORT_BYTES, files: 1, fields: 8 },
+}).single('file');
 
 /** One MIDI file in memory, at most 1 MB; its type is judged later by its content, not its name. */
 const midiUpload: RequestHandler = (req, res, next) => {
   upload(req, res, (err: unknown) => {
     if (!err) return next();
     if (err instanceof multer.MulterError && err.code === 'LIMIT_FILE_SIZE') {
-      return next(new AppError('payload_too_large', 'The file is larger than 1 MB; a MIDI take is far smaller', { file: ['At most 1 MB'] }));
+      return next(
+        new AppError('payload_too_large', 'The file is larger than 1 MB; a MIDI take is far smaller', {
+          file: ['At most 1 MB'],
+        }),
+      );
     }
-    if (err instanceof multer.MulterError) return next(new AppError('bad_request', `The upload was refused: ${err.message}`));
+    if (err instanceof multer.MulterError)
+      return next(new AppError('bad_request', `The upload was refused: ${err.message}`));
     next(err);
   });
 };

@@ -17,7 +17,14 @@ export interface InstrumentEntry extends Instrument {
  * instruments['alto-sax'].transposition // -9: written C sounds Eb a major sixth lower
  */
 export const instruments: Record<InstrumentId, InstrumentEntry> = {
-  piano: { label: 'Piano', transposition: 0, range: { low: 21, high: 108 }, monophonic: false, program: 0, clef: 'treble' },
+  piano: {
+    label: 'Piano',
+    transposition: 0,
+    range: { low: 21, high: 108 },
+    monophonic: false,
+    program: 0,
+    clef: 'treble',
+  },
   'wind-controller': {
     label: 'Wind controller',
     transposition: 0,
@@ -26,7 +33,14 @@ export const instruments: Record<InstrumentId, InstrumentEntry> = {
     program: 65,
     clef: 'treble',
   },
-  flute: { label: 'Flute', transposition: 0, range: { low: 60, high: 96 }, monophonic: true, program: 73, clef: 'treble' },
+  flute: {
+    label: 'Flute',
+    transposition: 0,
+    range: { low: 60, high: 96 },
+    monophonic: true,
+    program: 73,
+    clef: 'treble',
+  },
   clarinet: {
     label: 'Clarinet in Bb',
     transposition: -2,
@@ -75,8 +89,22 @@ export const instruments: Record<InstrumentId, InstrumentEntry> = {
     program: 56,
     clef: 'treble',
   },
-  trombone: { label: 'Trombone', transposition: 0, range: { low: 40, high: 72 }, monophonic: true, program: 57, clef: 'bass' },
-  guitar: { label: 'Guitar', transposition: -12, range: { low: 40, high: 86 }, monophonic: false, program: 26, clef: 'treble' },
+  trombone: {
+    label: 'Trombone',
+    transposition: 0,
+    range: { low: 40, high: 72 },
+    monophonic: true,
+    program: 57,
+    clef: 'bass',
+  },
+  guitar: {
+    label: 'Guitar',
+    transposition: -12,
+    range: { low: 40, high: 86 },
+    monophonic: false,
+    program: 26,
+    clef: 'treble',
+  },
 };
 
 /**

@@ -34,7 +34,11 @@ export const initialLadder: LadderState = { step: 0, streak: 0, fade: 0 };
  * @example
  * nextLadderState({ step: 0, streak: 1, fade: 0 }, { accuracy: 1, missed: 0 }, 5) // { step: 1, streak: 0, fade: 1 }
  */
-export function nextLadderState(state: LadderState, take: { accuracy: number; missed: number }, totalSteps: number): LadderState {
+export function nextLadderState(
+  state: LadderState,
+  take: { accuracy: number; missed: number },
+  totalSteps: number,
+): LadderState {
   const clean = take.accuracy >= LADDER_PASS_ACCURACY && take.missed === 0;
   if (!clean) return { step: state.step, streak: 0, fade: 0 };
   const streak = state.streak + 1;

@@ -9,13 +9,21 @@ export const CLIMB = { cleanAccuracy: 0.95, messyAccuracy: 0.8, up: 4, down: 8, 
 
 export type ClimbVerdict = 'up' | 'down' | 'hold';
 
-export function climbVerdict(take: { accuracy: number; meanOffsetMs: number | null }, hitWindowMs: number): ClimbVerdict {
-  if (take.accuracy >= CLIMB.cleanAccuracy && take.meanOffsetMs !== null && Math.abs(take.meanOffsetMs) <= hitWindowMs) return 'up';
+export function climbVerdict(
+  take: { accuracy: number; meanOffsetMs: number | null },
+  hitWindowMs: number,
+): ClimbVerdict {
+  if (take.accuracy >= CLIMB.cleanAccuracy && take.meanOffsetMs !== null && Math.abs(take.meanOffsetMs) <= hitWindowMs)
+    return 'up';
   if (take.accuracy < CLIMB.messyAccuracy) return 'down';
   return 'hold';
 }
 
-export function nextTempo(tempo: number, take: { accuracy: number; meanOffsetMs: number | null }, hitWindowMs: number): number {
+export function nextTempo(
+  tempo: number,
+  take: { accuracy: number; meanOffsetMs: number | null },
+  hitWindowMs: number,
+): number {
   const verdict = climbVerdict(take, hitWindowMs);
   const next = verdict === 'up' ? tempo + CLIMB.up : verdict === 'down' ? tempo - CLIMB.down : tempo;
   return Math.min(CLIMB.max, Math.max(CLIMB.min, next));

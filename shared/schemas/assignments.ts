@@ -8,9 +8,16 @@ export const CreateAssignmentInput = z.object({
   savedDrillId: z.uuid({ error: 'Pick one of your saved drills' }),
   /** null or absent: the drill's own key only; an order: the key cycle through all 12 keys */
   keyOrder: KeyOrder.nullable().optional(),
-  targetTempo: z.number({ error: 'Set a target tempo' }).int({ error: 'Use a whole number of bpm' }).min(20, { error: 'At least 20 bpm' }).max(400, { error: 'At most 400 bpm' }),
+  targetTempo: z
+    .number({ error: 'Set a target tempo' })
+    .int({ error: 'Use a whole number of bpm' })
+    .min(20, { error: 'At least 20 bpm' })
+    .max(400, { error: 'At most 400 bpm' }),
   /** 0..1 */
-  targetAccuracy: z.number({ error: 'Set a target accuracy' }).min(0.05, { error: 'At least 5%' }).max(1, { error: 'At most 100%' }),
+  targetAccuracy: z
+    .number({ error: 'Set a target accuracy' })
+    .min(0.05, { error: 'At least 5%' })
+    .max(1, { error: 'At most 100%' }),
   dueAt: z.iso.datetime({ offset: true, error: 'Pick a due date' }),
   note: z.string().trim().max(1000, { error: 'Keep the note under 1000 characters' }).optional().default(''),
   title: z.string().trim().min(1).max(120, { error: 'Keep the title under 120 characters' }).optional(),

@@ -8,7 +8,11 @@ export const Email = z
   .string({ error: 'Enter your e-mail address' })
   .trim()
   .toLowerCase()
-  .pipe(z.email({ error: 'Enter an e-mail address such as you@example.com' }).max(254, { error: 'That address is too long' }));
+  .pipe(
+    z
+      .email({ error: 'Enter an e-mail address such as you@example.com' })
+      .max(254, { error: 'That address is too long' }),
+  );
 
 /** A new password: long enough to resist guessing, short enough to hash quickly. */
 export const NewPassword = z
@@ -32,7 +36,10 @@ export type SignUpInput = z.infer<typeof SignUpInput>;
 
 export const SignInInput = z.object({
   email: Email,
-  password: z.string({ error: 'Enter your password' }).min(1, { error: 'Enter your password' }).max(200, { error: 'That password is too long' }),
+  password: z
+    .string({ error: 'Enter your password' })
+    .min(1, { error: 'Enter your password' })
+    .max(200, { error: 'That password is too long' }),
 });
 export type SignInInput = z.infer<typeof SignInInput>;
 
@@ -40,13 +47,19 @@ export const PasswordResetInput = z.object({ email: Email });
 export type PasswordResetInput = z.infer<typeof PasswordResetInput>;
 
 export const PasswordResetConfirmInput = z.object({
-  token: z.string({ error: 'The link is missing its token' }).min(20, { error: 'The link is incomplete; open it from the e-mail again' }).max(200, { error: 'The link is not valid' }),
+  token: z
+    .string({ error: 'The link is missing its token' })
+    .min(20, { error: 'The link is incomplete; open it from the e-mail again' })
+    .max(200, { error: 'The link is not valid' }),
   password: NewPassword,
 });
 export type PasswordResetConfirmInput = z.infer<typeof PasswordResetConfirmInput>;
 
 export const ChangePasswordInput = z.object({
-  currentPassword: z.string({ error: 'Enter your current password' }).min(1, { error: 'Enter your current password' }).max(200),
+  currentPassword: z
+    .string({ error: 'Enter your current password' })
+    .min(1, { error: 'Enter your current password' })
+    .max(200),
   newPassword: NewPassword,
 });
 export type ChangePasswordInput = z.infer<typeof ChangePasswordInput>;

@@ -16,7 +16,11 @@ export const CURRENCIES = ['EUR', 'USD', 'GBP', 'CAD', 'AUD', 'CHF'] as const;
 export const Currency = z.enum(CURRENCIES, { error: 'Price books in EUR, USD, GBP, CAD, AUD or CHF' });
 export type Currency = z.infer<typeof Currency>;
 
-const Title = z.string({ error: 'Give the book a title' }).trim().min(1, { error: 'Give the book a title' }).max(120, { error: 'Keep the title under 120 characters' });
+const Title = z
+  .string({ error: 'Give the book a title' })
+  .trim()
+  .min(1, { error: 'Give the book a title' })
+  .max(120, { error: 'Keep the title under 120 characters' });
 const Description = z.string().trim().max(2000, { error: 'Keep the description under 2000 characters' });
 /** Minor units (cents); 0 is a free book. The upper bound keeps a typo from pricing a book at a fortune. */
 const PriceMinor = z
@@ -24,7 +28,11 @@ const PriceMinor = z
   .int({ error: 'The price is a whole number of cents' })
   .min(0, { error: 'The price cannot be negative' })
   .max(100_000, { error: 'The price is at most 1000.00' });
-const DrillTitle = z.string({ error: 'Give the drill a title' }).trim().min(1, { error: 'Give the drill a title' }).max(120, { error: 'Keep the title under 120 characters' });
+const DrillTitle = z
+  .string({ error: 'Give the drill a title' })
+  .trim()
+  .min(1, { error: 'Give the drill a title' })
+  .max(120, { error: 'Keep the title under 120 characters' });
 const Note = z.string().trim().max(600, { error: 'Keep the note under 600 characters' });
 
 export const CreateBookInput = z.object({
@@ -59,7 +67,12 @@ export const AddBookDrillInput = z.object({
 export type AddBookDrillInput = z.infer<typeof AddBookDrillInput>;
 
 export const UpdateBookDrillInput = z
-  .object({ title: DrillTitle, note: Note, keyCycle: KeyOrder.nullable(), free: z.literal(true, { error: 'Mark a drill free with free: true' }) })
+  .object({
+    title: DrillTitle,
+    note: Note,
+    keyCycle: KeyOrder.nullable(),
+    free: z.literal(true, { error: 'Mark a drill free with free: true' }),
+  })
   .partial()
   .refine((v) => Object.keys(v).length > 0, { error: 'Send at least one field to change' });
 export type UpdateBookDrillInput = z.infer<typeof UpdateBookDrillInput>;
@@ -140,7 +153,12 @@ export const BookSales = z.object({
 });
 export type BookSales = z.infer<typeof BookSales>;
 
-export const SalesDay = z.object({ day: z.string(), bookId: z.string(), sales: z.number().int(), revenueMinor: z.number().int() });
+export const SalesDay = z.object({
+  day: z.string(),
+  bookId: z.string(),
+  sales: z.number().int(),
+  revenueMinor: z.number().int(),
+});
 export type SalesDay = z.infer<typeof SalesDay>;
 
 export const SalesResponse = z.object({ books: z.array(BookSales), days: z.array(SalesDay) });

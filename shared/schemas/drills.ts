@@ -31,7 +31,10 @@ export const TriadPatternDef = z.object({
   name: PatternName,
   subdivision: SUBDIVISION,
   source: z.literal('triads'),
-  cells: z.array(TriadCell).min(1, { error: 'A pattern needs at least one cell' }).max(32, { error: 'A pattern holds at most 32 cells' }),
+  cells: z
+    .array(TriadCell)
+    .min(1, { error: 'A pattern needs at least one cell' })
+    .max(32, { error: 'A pattern holds at most 32 cells' }),
 });
 
 export const ScalePatternDef = z.object({
@@ -39,7 +42,9 @@ export const ScalePatternDef = z.object({
   subdivision: SUBDIVISION,
   source: z.literal('scale'),
   degrees: z
-    .array(z.number().int({ error: 'Degrees are whole numbers' }).min(-48).max(48), { error: 'List the degrees as numbers' })
+    .array(z.number().int({ error: 'Degrees are whole numbers' }).min(-48).max(48), {
+      error: 'List the degrees as numbers',
+    })
     .min(1, { error: 'A scale pattern needs at least one degree' })
     .max(64, { error: 'A scale pattern holds at most 64 notes per cell' }),
   step: z.number({ error: 'The step is a whole number' }).int({ error: 'The step is a whole number' }).min(-24).max(24),
@@ -50,7 +55,9 @@ export const PatternDef = z.discriminatedUnion('source', [TriadPatternDef, Scale
 });
 export type PatternDef = z.infer<typeof PatternDef>;
 
-export const PatternId = z.enum(PRESET_IDS as [EnginePatternId, ...EnginePatternId[]], { error: 'There is no preset pattern by that name' });
+export const PatternId = z.enum(PRESET_IDS as [EnginePatternId, ...EnginePatternId[]], {
+  error: 'There is no preset pattern by that name',
+});
 
 const INSTRUMENT_IDS = Object.keys(instruments) as [InstrumentId, ...InstrumentId[]];
 export const InstrumentIdSchema = z.enum(INSTRUMENT_IDS, { error: 'Sixfold has no such instrument' });
@@ -64,11 +71,18 @@ export const METERS = [
   [7, 8],
 ] as const satisfies ReadonlyArray<readonly [number, number]>;
 
-const Midi = z.number({ error: 'A MIDI note number' }).int({ error: 'A whole MIDI note number' }).min(0, { error: 'At least 0' }).max(127, { error: 'At most 127' });
+const Midi = z
+  .number({ error: 'A MIDI note number' })
+  .int({ error: 'A whole MIDI note number' })
+  .min(0, { error: 'At least 0' })
+  .max(127, { error: 'At most 127' });
 
 /** Spells a chord symbol the way tonal reads it ("Cm(maj7)" -> "CmMaj7", "C7(b9)" -> "C7b9"). */
 function tonalChordSymbol(symbol: string): string {
-  return symbol.trim().replace(/m\(maj7\)|m\(M7\)|-\(maj7\)/, 'mMaj7').replace(/\(([^)]*)\)/g, '$1');
+  return symbol
+    .trim()
+    .replace(/m\(maj7\)|m\(M7\)|-\(maj7\)/, 'mMaj7')
+    .replace(/\(([^)]*)\)/g, '$1');
 }
 
 /**
@@ -110,7 +124,9 @@ export const DrillSpec = z.object({
     .string()
     .trim()
     .max(24, { error: 'That chord symbol is too long' })
-    .refine((c) => chordTones(c).length > 0, { error: 'That is not a chord symbol Sixfold can read (try D7, Bbm7, Cmaj7#11)' })
+    .refine((c) => chordTones(c).length > 0, {
+      error: 'That is not a chord symbol Sixfold can read (try D7, Bbm7, Cmaj7#11)',
+    })
     .optional(),
 });
 export type DrillSpec = z.infer<typeof DrillSpec>;
@@ -118,7 +134,9 @@ export type DrillSpec = z.infer<typeof DrillSpec>;
 export const DrillSpecInput = DrillSpec;
 export type DrillSpecInput = DrillSpec;
 
-export const KeyOrder = z.enum(['chromatic', 'fourths', 'fifths'], { error: 'A key cycle goes chromatic, in fourths or in fifths' });
+export const KeyOrder = z.enum(['chromatic', 'fourths', 'fifths'], {
+  error: 'A key cycle goes chromatic, in fourths or in fifths',
+});
 export type KeyOrder = z.infer<typeof KeyOrder>;
 
 /** Field name -> messages, as the API's 400 answers carry them. */
@@ -136,7 +154,11 @@ export type DrillResult = { ok: true; drill: Drill } | { ok: false; fields: Fiel
  * // { ok: false, fields: { pair: ['D and Dm share ...'] }, ... }
  */
 export function generateChecked(spec: DrillSpec): DrillResult {
-  const fail = (field: string, err: EngineError): DrillResult => ({ ok: false, fields: { [field]: [err.message] }, message: err.message });
+  const fail = (field: string, err: EngineError): DrillResult => ({
+    ok: false,
+    fields: { [field]: [err.message] },
+    message: err.message,
+  });
   try {
     triadPair(spec.pair[0], spec.pair[1]);
   } catch (err) {
@@ -162,7 +184,10 @@ export function generateChecked(spec: DrillSpec): DrillResult {
 
 /** `GET /api/drills/preview?spec=<URL-encoded DrillSpec JSON>` */
 export const PreviewQuery = z.object({
-  spec: z.string({ error: 'Send the drill spec as JSON in ?spec=' }).min(2, { error: 'Send the drill spec as JSON in ?spec=' }).max(8000, { error: 'The spec is too long' }),
+  spec: z
+    .string({ error: 'Send the drill spec as JSON in ?spec=' })
+    .min(2, { error: 'Send the drill spec as JSON in ?spec=' })
+    .max(8000, { error: 'The spec is too long' }),
 });
 export type PreviewQuery = z.infer<typeof PreviewQuery>;
 export const PreviewResponse = z.object({ drill: z.custom<Drill>() });
@@ -188,10 +213,16 @@ export const SavedDrill = z.object({
 });
 export type SavedDrill = z.infer<typeof SavedDrill>;
 
-export const CreateSavedDrillInput = z.object({ name: SavedName, spec: DrillSpec, keyOrder: KeyOrder.nullable().optional() });
+export const CreateSavedDrillInput = z.object({
+  name: SavedName,
+  spec: DrillSpec,
+  keyOrder: KeyOrder.nullable().optional(),
+});
 export type CreateSavedDrillInput = z.infer<typeof CreateSavedDrillInput>;
 
-export const UpdateSavedDrillInput = CreateSavedDrillInput.partial().refine((v) => Object.keys(v).length > 0, { error: 'Send at least one of name, spec, keyOrder' });
+export const UpdateSavedDrillInput = CreateSavedDrillInput.partial().refine((v) => Object.keys(v).length > 0, {
+  error: 'Send at least one of name, spec, keyOrder',
+});
 export type UpdateSavedDrillInput = z.infer<typeof UpdateSavedDrillInput>;
 
 export const SavedDrillResponse = z.object({ drill: SavedDrill });
@@ -212,7 +243,9 @@ export type CustomPattern = z.infer<typeof CustomPattern>;
 
 export const CreateCustomPatternInput = z.object({ name: SavedName, def: PatternDef });
 export type CreateCustomPatternInput = z.infer<typeof CreateCustomPatternInput>;
-export const UpdateCustomPatternInput = CreateCustomPatternInput.partial().refine((v) => Object.keys(v).length > 0, { error: 'Send a name or a def' });
+export const UpdateCustomPatternInput = CreateCustomPatternInput.partial().refine((v) => Object.keys(v).length > 0, {
+  error: 'Send a name or a def',
+});
 export type UpdateCustomPatternInput = z.infer<typeof UpdateCustomPatternInput>;
 
 export const CustomPatternResponse = z.object({ pattern: CustomPattern });

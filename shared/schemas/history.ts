@@ -4,7 +4,9 @@ import { DrillSpec } from './drills';
 
 /** The 12 keys in the order every table and map shows them. */
 export const KEYS = ROOT_SPELLINGS;
-export const KeyName = z.enum(KEYS as unknown as [string, ...string[]], { error: 'A key is one of C Db D Eb E F F# G Ab A Bb B' });
+export const KeyName = z.enum(KEYS as unknown as [string, ...string[]], {
+  error: 'A key is one of C Db D Eb E F F# G Ab A Bb B',
+});
 
 const Day = z.iso.date({ error: 'Dates are written YYYY-MM-DD' });
 const Text = z.string().trim().min(1).max(80);
@@ -75,7 +77,12 @@ export const ImportTakeFields = z.object({
       }
     })
     .pipe(DrillSpec),
-  offsetMs: z.coerce.number({ error: 'offsetMs is a number of milliseconds' }).finite().min(-600_000).max(600_000).optional(),
+  offsetMs: z.coerce
+    .number({ error: 'offsetMs is a number of milliseconds' })
+    .finite()
+    .min(-600_000)
+    .max(600_000)
+    .optional(),
   mode: z.enum(['timed', 'free']).optional(),
 });
 export type ImportTakeFields = z.infer<typeof ImportTakeFields>;

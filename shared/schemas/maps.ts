@@ -41,7 +41,13 @@ const TimeZone = z
 export const ChartQuery = TakeFilters.extend({ tz: TimeZone.default('UTC') });
 export type ChartQuery = z.infer<typeof ChartQuery>;
 
-export const TimelinePoint = z.object({ day: z.string(), key: z.string(), takes: z.number(), accuracy: z.number(), tempo: z.number() });
+export const TimelinePoint = z.object({
+  day: z.string(),
+  key: z.string(),
+  takes: z.number(),
+  accuracy: z.number(),
+  tempo: z.number(),
+});
 export type TimelinePoint = z.infer<typeof TimelinePoint>;
 export const TimelineResponse = z.object({ points: z.array(TimelinePoint) });
 export type TimelineResponse = z.infer<typeof TimelineResponse>;

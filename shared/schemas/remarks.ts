@@ -1,7 +1,11 @@
 import { z } from 'zod';
 
 export const CreateRemarkInput = z.object({
-  body: z.string({ error: 'Write the remark' }).trim().min(1, { error: 'Write the remark' }).max(2000, { error: 'Keep it under 2000 characters' }),
+  body: z
+    .string({ error: 'Write the remark' })
+    .trim()
+    .min(1, { error: 'Write the remark' })
+    .max(2000, { error: 'Keep it under 2000 characters' }),
   /** pin it to one expected note of the take (0-based, as in the score's results) */
   noteIndex: z.number().int().min(0).nullable().optional(),
   /** answer this remark (a player answers their teacher's) */

@@ -57,7 +57,13 @@ export const INVITE_DAYS = 7;
 export const CreateInviteInput = z.object({ email: Email });
 export type CreateInviteInput = z.infer<typeof CreateInviteInput>;
 
-export const Invite = z.object({ id: z.string(), email: z.string(), expiresAt: z.string(), usedAt: z.string().nullable(), createdAt: z.string() });
+export const Invite = z.object({
+  id: z.string(),
+  email: z.string(),
+  expiresAt: z.string(),
+  usedAt: z.string().nullable(),
+  createdAt: z.string(),
+});
 export type Invite = z.infer<typeof Invite>;
 
 export const InviteResponse = z.object({ invite: Invite });

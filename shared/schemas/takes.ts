@@ -21,7 +21,11 @@ export const ScoreOptionsInput = z.object({
   octaveTolerant: z.boolean().optional(),
   hitWindowMs: z.number().finite().positive().optional(),
   matchWindowMs: z.number().finite().positive().optional(),
-  swing: z.number().min(0.5, { error: 'swing runs from 0.5 (straight) to 0.75' }).max(0.75, { error: 'swing runs from 0.5 (straight) to 0.75' }).optional(),
+  swing: z
+    .number()
+    .min(0.5, { error: 'swing runs from 0.5 (straight) to 0.75' })
+    .max(0.75, { error: 'swing runs from 0.5 (straight) to 0.75' })
+    .optional(),
   inputTransposition: z.number().int().min(-48).max(48).optional(),
 });
 

@@ -17,7 +17,12 @@ type Guard = 'public' | 'signed-in' | Role[];
  * A page loaded on first visit (its own chunk), wrapped in the guard that mirrors the server's
  * rule for it: public, any signed-in user, or only some roles.
  */
-function page<M extends Record<string, unknown>>(path: string, load: () => Promise<M>, name: keyof M & string, guard: Guard): RouteObject {
+function page<M extends Record<string, unknown>>(
+  path: string,
+  load: () => Promise<M>,
+  name: keyof M & string,
+  guard: Guard,
+): RouteObject {
   return {
     path,
     lazy: async () => {
@@ -39,11 +44,32 @@ const router = createBrowserRouter([
     element: <RootLayout />,
     children: [
       { path: '/', element: <IndexRoute /> },
-      { path: '/sign-in', element: <VisitorsOnly><SignInRoute /></VisitorsOnly> },
-      { path: '/sign-up', element: <VisitorsOnly><SignUpRoute /></VisitorsOnly> },
+      {
+        path: '/sign-in',
+        element: (
+          <VisitorsOnly>
+            <SignInRoute />
+          </VisitorsOnly>
+        ),
+      },
+      {
+        path: '/sign-up',
+        element: (
+          <VisitorsOnly>
+            <SignUpRoute />
+          </VisitorsOnly>
+        ),
+      },
       { path: '/forgot-password', element: <ForgotPasswordRoute /> },
       { path: '/reset-password', element: <ResetPasswordRoute /> },
-      { path: '/home', element: <RequireRole><HomeRoute /></RequireRole> },
+      {
+        path: '/home',
+        element: (
+          <RequireRole>
+            <HomeRoute />
+          </RequireRole>
+        ),
+      },
       page('/input', () => import('./routes/input-check'), 'InputCheckRoute', 'public'),
       page('/practice', () => import('./routes/practice'), 'PracticeRoute', ['player']),
       page('/account', () => import('./routes/account'), 'AccountRoute', 'signed-in'),
@@ -54,7 +80,10 @@ const router = createBrowserRouter([
       page('/admin/purchases', () => import('./routes/admin-purchases'), 'AdminPurchasesRoute', ['admin']),
       page('/studio', () => import('./routes/studio-list'), 'StudioListRoute', 'signed-in'),
       page('/studio/:id', () => import('./routes/studio-detail'), 'StudioDetailRoute', 'signed-in'),
-      page('/studio/:id/players/:playerId', () => import('./routes/studio-player'), 'StudioPlayerRoute', ['teacher', 'admin']),
+      page('/studio/:id/players/:playerId', () => import('./routes/studio-player'), 'StudioPlayerRoute', [
+        'teacher',
+        'admin',
+      ]),
       page('/takes/:id', () => import('./routes/take'), 'TakeRoute', 'signed-in'),
       page('/history', () => import('./routes/history'), 'HistoryRoute', ['player', 'teacher']),
       page('/history/:id', () => import('./routes/history-take'), 'HistoryTakeRoute', ['player', 'teacher']),

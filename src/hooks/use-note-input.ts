@@ -24,7 +24,8 @@ export function useNoteInput() {
   useEffect(() => {
     const handler = (e: KeyboardEvent) => {
       const t = e.target as HTMLElement | null;
-      if (t && (t.tagName === 'INPUT' || t.tagName === 'TEXTAREA' || t.tagName === 'SELECT' || t.isContentEditable)) return;
+      if (t && (t.tagName === 'INPUT' || t.tagName === 'TEXTAREA' || t.tagName === 'SELECT' || t.isContentEditable))
+        return;
       if (e.metaKey || e.ctrlKey || e.altKey) return;
       if (input.computerKey(e)) e.preventDefault();
     };

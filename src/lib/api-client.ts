@@ -30,7 +30,9 @@ type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
 
 async function toError(res: Response): Promise<ApiError> {
   try {
-    const body = (await res.json()) as { error?: { code?: string; message?: string; fields?: Record<string, string[]> } };
+    const body = (await res.json()) as {
+      error?: { code?: string; message?: string; fields?: Record<string, string[]> };
+    };
     const e = body.error ?? {};
     return new ApiError(res.status, e.code ?? 'error', e.message ?? res.statusText, e.fields);
   } catch {

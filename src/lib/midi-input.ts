@@ -49,7 +49,10 @@ function loadRemembered(): Remembered {
 
 /** Turns a refusal of Web MIDI into words a player can act on. */
 export function describeMidiFailure(err: unknown): InputStatus {
-  const name = err instanceof Error || (typeof err === 'object' && err && 'name' in err) ? String((err as { name: unknown }).name) : '';
+  const name =
+    err instanceof Error || (typeof err === 'object' && err && 'name' in err)
+      ? String((err as { name: unknown }).name)
+      : '';
   if (name === 'NotAllowedError' || name === 'SecurityError') {
     return {
       state: 'denied',
@@ -83,7 +86,8 @@ export class NoteInput {
   private remembered = loadRemembered();
   private keyOctave = 4;
   private heldKeys = new Map<string, number>();
-  private onMidiMessage = (e: { message: { data: Uint8Array }; timestamp: number; target: Input }) => this.handleMessage(e);
+  private onMidiMessage = (e: { message: { data: Uint8Array }; timestamp: number; target: Input }) =>
+    this.handleMessage(e);
 
   getStatus(): InputStatus {
     return this.status;
@@ -157,7 +161,8 @@ export class NoteInput {
   /** The computer keyboard's way in: call from keydown / keyup. Returns true when it was a note key. */
   computerKey(e: Pick<KeyboardEvent, 'code' | 'type' | 'repeat' | 'timeStamp'>): boolean {
     if (e.code === octaveDownKey || e.code === octaveUpKey) {
-      if (e.type === 'keydown' && !e.repeat) this.keyOctave = Math.max(1, Math.min(7, this.keyOctave + (e.code === octaveUpKey ? 1 : -1)));
+      if (e.type === 'keydown' && !e.repeat)
+        this.keyOctave = Math.max(1, Math.min(7, this.keyOctave + (e.code === octaveUpKey ? 1 : -1)));
       return true;
     }
     const offset = computerKeyMap[e.code];
@@ -170,7 +175,8 @@ export class NoteInput {
     } else {
       const midi = this.heldKeys.get(e.code);
       this.heldKeys.delete(e.code);
-      if (midi !== undefined) this.emit({ type: 'off', midi, velocity: 0, timeStamp: e.timeStamp, source: 'keys', deviceId: null });
+      if (midi !== undefined)
+        this.emit({ type: 'off', midi, velocity: 0, timeStamp: e.timeStamp, source: 'keys', deviceId: null });
     }
     return true;
   }
@@ -230,7 +236,9 @@ export class NoteInput {
     }
     // After a disconnection, wait for that device rather than switch silently to another one.
     if (autoSelect && !lost && !this.selected && devices.length > 0) {
-      const wanted = devices.find((d) => d.name === this.remembered.deviceName) ?? (this.remembered.deviceName ? undefined : devices[0]);
+      const wanted =
+        devices.find((d) => d.name === this.remembered.deviceName) ??
+        (this.remembered.deviceName ? undefined : devices[0]);
       if (wanted) {
         const input = WebMidi.getInputById(wanted.id);
         if (input) {

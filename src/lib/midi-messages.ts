@@ -16,7 +16,9 @@ export function parseMidiMessage(data: ArrayLike<number>): MidiEvent {
   const type = status & 0xf0;
   const channel = (status & 0x0f) + 1;
   if (type === 0x90 && data.length >= 3) {
-    return data[2] === 0 ? { kind: 'note-off', midi: data[1], channel } : { kind: 'note-on', midi: data[1], velocity: data[2], channel };
+    return data[2] === 0
+      ? { kind: 'note-off', midi: data[1], channel }
+      : { kind: 'note-on', midi: data[1], velocity: data[2], channel };
   }
   if (type === 0x80 && data.length >= 2) return { kind: 'note-off', midi: data[1], channel };
   if (type === 0xb0 && data.length >= 3) {

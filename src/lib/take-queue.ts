@@ -73,11 +73,14 @@ async function doFlush() {
       await api.post('/api/takes', p.take);
       await del(id, store);
     } catch (err) {
-      const permanent = err instanceof ApiError && err.status >= 400 && err.status < 500 && ![401, 403, 408, 429].includes(err.status);
+      const permanent =
+        err instanceof ApiError && err.status >= 400 && err.status < 500 && ![401, 403, 408, 429].includes(err.status);
       const attempts = p.attempts + 1;
       await set(
         id,
-        permanent ? { ...p, attempts, refused: err.message } : { ...p, attempts, nextAt: Date.now() + backoffMs(attempts) },
+        permanent
+          ? { ...p, attempts, refused: err.message }
+          : { ...p, attempts, nextAt: Date.now() + backoffMs(attempts) },
         store,
       );
     }

@@ -6,7 +6,14 @@ import { encodeWav } from '../../src/lib/audio/wav';
 const close = (a: number, b: number) => Math.abs(a - b) < 1e-9;
 
 describe('scheduleDrill', () => {
-  const drill = generateDrill({ pair: ['D', 'C'], pattern: 'weave', direction: 'up', instrument: 'alto-sax', tempo: 90, chord: 'D7' });
+  const drill = generateDrill({
+    pair: ['D', 'C'],
+    pattern: 'weave',
+    direction: 'up',
+    instrument: 'alto-sax',
+    tempo: 90,
+    chord: 'D7',
+  });
 
   it('puts an onset at beat x 60 / tempo after the count-in for every note', () => {
     const { events, downbeat } = scheduleDrill(drill, { countInMeasures: 1 });
@@ -40,7 +47,13 @@ describe('scheduleDrill', () => {
   });
 
   it('counts the meter in its own beat: eighths in 7/8', () => {
-    const seven = generateDrill({ pair: ['D', 'C'], pattern: 'four-three', direction: 'up', tempo: 120, meter: [7, 8] });
+    const seven = generateDrill({
+      pair: ['D', 'C'],
+      pattern: 'four-three',
+      direction: 'up',
+      tempo: 120,
+      meter: [7, 8],
+    });
     const { events, downbeat } = scheduleDrill(seven);
     const clicks = events.filter((e) => e.kind === 'click');
     expect(clicks.slice(0, 8).map((c) => c.time)).toEqual([0, 0.25, 0.5, 0.75, 1, 1.25, 1.5, 1.75]);

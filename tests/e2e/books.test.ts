@@ -71,16 +71,29 @@ describe('drill books in Chromium: publish, buy, practise, see the sale', () => 
       await page.getByLabel('Saved drill').selectOption({ label: name });
       await page.getByRole('textbox', { name: 'Teaching note' }).last().fill(note);
       await page.getByRole('button', { name: 'Add to the book' }).click();
-      await page.waitForFunction((n) => document.querySelectorAll('[data-testid="edit-drill"]').length === n, name === 'Starter on C/D' ? 1 : 2);
+      await page.waitForFunction(
+        (n) => document.querySelectorAll('[data-testid="edit-drill"]').length === n,
+        name === 'Starter on C/D' ? 1 : 2,
+      );
     }
     // Reorder with the keyboard-reachable buttons: the four-three first, then back.
     await page.getByRole('button', { name: 'Move Four-three on D/C up' }).click();
-    await page.waitForFunction(() => (document.querySelector('[data-testid="edit-drill"] input') as HTMLInputElement | null)?.value === 'Four-three on D/C');
+    await page.waitForFunction(
+      () =>
+        (document.querySelector('[data-testid="edit-drill"] input') as HTMLInputElement | null)?.value ===
+        'Four-three on D/C',
+    );
     const down = page.getByRole('button', { name: 'Move Four-three on D/C down' });
-    await page.waitForFunction(() => !(document.querySelector('[aria-label="Move Four-three on D/C down"]') as HTMLButtonElement).disabled);
+    await page.waitForFunction(
+      () => !(document.querySelector('[aria-label="Move Four-three on D/C down"]') as HTMLButtonElement).disabled,
+    );
     await down.focus();
     await page.keyboard.press('Enter');
-    await page.waitForFunction(() => (document.querySelector('[data-testid="edit-drill"] input') as HTMLInputElement | null)?.value === 'Starter on C/D');
+    await page.waitForFunction(
+      () =>
+        (document.querySelector('[data-testid="edit-drill"] input') as HTMLInputElement | null)?.value ===
+        'Starter on C/D',
+    );
 
     await page.getByRole('button', { name: 'Publish' }).click();
     await page.getByText('Published: players see it in the catalogue.').waitFor();
@@ -116,7 +129,11 @@ describe('drill books in Chromium: publish, buy, practise, see the sale', () => 
     expect(JSON.parse(url.searchParams.get('spec')!)).toEqual(DC);
     expect(url.searchParams.get('order')).toBe('chromatic');
     await page.getByTestId('practice').waitFor();
-    await page.waitForFunction(() => document.querySelectorAll('[data-testid="drill-staff"] [data-note-index]').length > 0, undefined, { timeout: 20_000 });
+    await page.waitForFunction(
+      () => document.querySelectorAll('[data-testid="drill-staff"] [data-note-index]').length > 0,
+      undefined,
+      { timeout: 20_000 },
+    );
     expect(playerBrowser.errors.filter((e) => !/MIDI/i.test(e))).toEqual([]);
   }, 90_000);
 

@@ -13,7 +13,15 @@ import { startTestServer } from '../helpers/test-server';
 const artifacts = fileURLToPath(new URL('../.artifacts/', import.meta.url));
 
 /** The drill the page should show after picking D/C from the fit finder for D7 (alto sax, defaults). */
-const EXPECTED_SPEC = { pair: ['C', 'D'] as [string, string], pattern: 'four-three' as const, direction: 'up' as const, instrument: 'alto-sax' as const, tempo: 100, meter: [4, 4] as [number, number], chord: 'D7' };
+const EXPECTED_SPEC = {
+  pair: ['C', 'D'] as [string, string],
+  pattern: 'four-three' as const,
+  direction: 'up' as const,
+  instrument: 'alto-sax' as const,
+  tempo: 100,
+  meter: [4, 4] as [number, number],
+  chord: 'D7',
+};
 
 describe('the drills page in Chromium', () => {
   let server: Awaited<ReturnType<typeof startTestServer>>;
@@ -53,11 +61,16 @@ describe('the drills page in Chromium', () => {
 
     const expected = generateDrill(EXPECTED_SPEC);
     const staff = page.getByTestId('drill-staff');
-    await page.waitForFunction((n) => document.querySelectorAll('[data-testid="drill-staff"] [data-note-index]').length === n, expected.notes.length);
+    await page.waitForFunction(
+      (n) => document.querySelectorAll('[data-testid="drill-staff"] [data-note-index]').length === n,
+      expected.notes.length,
+    );
     expect(await staff.locator('[data-note-index]').count()).toBe(expected.notes.length);
     expect(await page.getByTestId('drill-title').textContent()).toMatch(/C \/ D \(written A \/ B\)/);
     // Written pitch: alto sax reads a major sixth above concert, and each drawn note is the written one.
-    const written = await staff.locator('[data-note-index]').evaluateAll((els) => els.map((el) => el.getAttribute('data-written')));
+    const written = await staff
+      .locator('[data-note-index]')
+      .evaluateAll((els) => els.map((el) => el.getAttribute('data-written')));
     expect(written).toEqual(expected.notes.map((n) => n.written));
     expect(expected.notes.every((n) => Note.midi(n.written) === n.midi + 9)).toBe(true);
     // The clef is drawn, and the staff's measures are numbered.
@@ -67,7 +80,9 @@ describe('the drills page in Chromium', () => {
     expect(await staff.locator('.sf-triad-b').count()).toBeGreaterThan(0);
     // Measure numbers, and a range diagram marking the drill's notes.
     expect(await staff.locator('svg').count()).toBe(1);
-    const marked = await page.locator('svg[aria-label^="Range"] rect.fill-dusk-500, svg[aria-label^="Range"] rect.fill-brass-500').count();
+    const marked = await page
+      .locator('svg[aria-label^="Range"] rect.fill-dusk-500, svg[aria-label^="Range"] rect.fill-brass-500')
+      .count();
     expect(marked).toBe(new Set(expected.notes.map((n) => n.midi)).size);
     await page.screenshot({ path: join(artifacts, 'drills-page.png'), fullPage: true });
     expect(browser.errors).toEqual([]);
@@ -79,7 +94,10 @@ describe('the drills page in Chromium', () => {
     const keys = page.getByRole('navigation', { name: 'Key cycle' }).getByRole('listitem');
     expect(await keys.count()).toBe(12);
     await page.getByRole('button', { name: 'Next key' }).click();
-    await page.waitForFunction((n) => document.querySelectorAll('[data-testid="drill-staff"] [data-note-index]').length === n, cycle[1].notes.length);
+    await page.waitForFunction(
+      (n) => document.querySelectorAll('[data-testid="drill-staff"] [data-note-index]').length === n,
+      cycle[1].notes.length,
+    );
     expect(await page.getByTestId('drill-title').textContent()).toMatch(/^Key 2 of 12: Db \/ Eb/);
     await page.getByRole('button', { name: 'Previous key' }).click();
     expect(await page.getByTestId('drill-title').textContent()).toMatch(/^Key 1 of 12/);
@@ -101,13 +119,21 @@ describe('the drills page in Chromium', () => {
   it('downloads the drill as MIDI and MusicXML that read back', async () => {
     const { page } = browser;
     const expected = generateDrill(EXPECTED_SPEC);
-    const [midiDl] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'MIDI file' }).click()]);
+    const [midiDl] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('button', { name: 'MIDI file' }).click(),
+    ]);
     expect(midiDl.suggestedFilename()).toBe('sixfold-c-d-four-three-c.mid');
     const midi = parseMidi(readFileSync((await midiDl.path())!));
-    const onsets = midi.tracks.flatMap((t) => t.filter((e) => e.type === 'noteOn' && e.velocity > 0).map((e) => (e.type === 'noteOn' ? e.noteNumber : -1)));
+    const onsets = midi.tracks.flatMap((t) =>
+      t.filter((e) => e.type === 'noteOn' && e.velocity > 0).map((e) => (e.type === 'noteOn' ? e.noteNumber : -1)),
+    );
     expect(onsets).toEqual(expected.notes.map((n) => n.midi));
 
-    const [xmlDl] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'MusicXML file' }).click()]);
+    const [xmlDl] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('button', { name: 'MusicXML file' }).click(),
+    ]);
     expect(xmlDl.suggestedFilename()).toBe('sixfold-c-d-four-three-c.musicxml');
     const xml = new XMLParser({ ignoreAttributes: false }).parse(readFileSync((await xmlDl.path())!, 'utf8'));
     type XmlNote = { pitch?: { step: string } };
@@ -145,7 +171,9 @@ describe('the drills page in Chromium', () => {
     const found = onsets(samples, rate);
     expect(found.length).toBe(wanted.length);
     wanted.forEach((t, i) => {
-      expect(Math.abs(found[i] - t), `onset ${i} at ${t.toFixed(3)} s, found ${found[i].toFixed(3)} s`).toBeLessThan(0.01);
+      expect(Math.abs(found[i] - t), `onset ${i} at ${t.toFixed(3)} s, found ${found[i].toFixed(3)} s`).toBeLessThan(
+        0.01,
+      );
     });
   }, 90_000);
 
@@ -161,10 +189,41 @@ describe('the drills page in Chromium', () => {
   });
 
   it.each([
-    { pair: ['Bbm', 'Ab'], pattern: 'scale-steps', direction: 'up-down', instrument: 'trombone', meter: [3, 4], tempo: 80 },
-    { pair: ['G', 'Db'], pattern: 'weave', direction: 'down', instrument: 'guitar', meter: [7, 8], tempo: 132, chord: 'G7' },
-    { pair: ['A', 'G'], pattern: 'leap-back', direction: 'up', instrument: 'tenor-sax', meter: [6, 8], tempo: 90, chord: 'Em7' },
-    { pair: ['C', 'D'], pattern: 'stack', direction: 'up', instrument: 'trumpet', meter: [5, 4], tempo: 200, chord: 'Cmaj7#11' },
+    {
+      pair: ['Bbm', 'Ab'],
+      pattern: 'scale-steps',
+      direction: 'up-down',
+      instrument: 'trombone',
+      meter: [3, 4],
+      tempo: 80,
+    },
+    {
+      pair: ['G', 'Db'],
+      pattern: 'weave',
+      direction: 'down',
+      instrument: 'guitar',
+      meter: [7, 8],
+      tempo: 132,
+      chord: 'G7',
+    },
+    {
+      pair: ['A', 'G'],
+      pattern: 'leap-back',
+      direction: 'up',
+      instrument: 'tenor-sax',
+      meter: [6, 8],
+      tempo: 90,
+      chord: 'Em7',
+    },
+    {
+      pair: ['C', 'D'],
+      pattern: 'stack',
+      direction: 'up',
+      instrument: 'trumpet',
+      meter: [5, 4],
+      tempo: 200,
+      chord: 'Cmaj7#11',
+    },
     {
       pair: ['D', 'C'],
       pattern: { name: 'Sixteenth climb', subdivision: 'sixteenth', source: 'scale', degrees: [0, 2, 1, 3], step: 1 },
@@ -176,22 +235,33 @@ describe('the drills page in Chromium', () => {
   ])('draws $pattern $direction for $instrument in $meter, every note, from the address alone', async (spec) => {
     const { page } = browser;
     const expected = generateDrill(spec as Parameters<typeof generateDrill>[0]);
-    await page.goto(`${server.url}/drills?spec=${encodeURIComponent(JSON.stringify(spec))}`, { waitUntil: 'networkidle' });
-    await page.waitForFunction((n) => document.querySelectorAll('[data-testid="drill-staff"] [data-note-index]').length === n, expected.notes.length);
-    const written = await page.locator('[data-testid="drill-staff"] [data-note-index]').evaluateAll((els) => els.map((el) => el.getAttribute('data-written')));
+    await page.goto(`${server.url}/drills?spec=${encodeURIComponent(JSON.stringify(spec))}`, {
+      waitUntil: 'networkidle',
+    });
+    await page.waitForFunction(
+      (n) => document.querySelectorAll('[data-testid="drill-staff"] [data-note-index]').length === n,
+      expected.notes.length,
+    );
+    const written = await page
+      .locator('[data-testid="drill-staff"] [data-note-index]')
+      .evaluateAll((els) => els.map((el) => el.getAttribute('data-written')));
     expect(written).toEqual(expected.notes.map((n) => n.written));
     expect(browser.errors).toEqual([]);
   });
 
   it('prints the key cycle: 12 staves in written pitch, then a PDF', async () => {
     const { page } = browser;
-    await page.goto(`${server.url}/drills?spec=${encodeURIComponent(JSON.stringify(EXPECTED_SPEC))}&order=chromatic`, { waitUntil: 'networkidle' });
+    await page.goto(`${server.url}/drills?spec=${encodeURIComponent(JSON.stringify(EXPECTED_SPEC))}&order=chromatic`, {
+      waitUntil: 'networkidle',
+    });
     await page.getByRole('link', { name: /Printable key cycle/ }).click();
     await page.waitForURL(/\/drills\/print\?/);
     await page.getByText('All 12 keys are drawn.').waitFor({ timeout: 30_000 });
     expect(await page.getByTestId('print-key').count()).toBe(12);
     const cycle = inAllKeys(EXPECTED_SPEC, 'chromatic');
-    const counts = await page.getByTestId('print-key').evaluateAll((els) => els.map((el) => el.querySelectorAll('[data-note-index]').length));
+    const counts = await page
+      .getByTestId('print-key')
+      .evaluateAll((els) => els.map((el) => el.querySelectorAll('[data-note-index]').length));
     expect(counts).toEqual(cycle.map((d) => d.notes.length));
     expect(await page.locator('progress').getAttribute('value')).toBe('12');
     await page.emulateMedia({ media: 'print' });

@@ -2,7 +2,6 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { type BrowserSession, openBrowser } from '../helpers/browser';
 import { startTestServer } from '../helpers/test-server';
 
-
 async function logRows(page: BrowserSession['page']) {
   return page.$$eval('[data-testid="note-log"] tbody tr', (rows) =>
     rows.map((r) => ({
@@ -31,7 +30,9 @@ describe('note input in Chromium with the fake MIDI device', () => {
     try {
       const { page } = b;
       await page.goto(`${server.url}/input`, { waitUntil: 'networkidle' });
-      await page.waitForFunction(() => document.querySelector('[data-testid="input-status"]')?.textContent?.includes('Listening to Fake Keyboard'));
+      await page.waitForFunction(() =>
+        document.querySelector('[data-testid="input-status"]')?.textContent?.includes('Listening to Fake Keyboard'),
+      );
 
       // The event's own timestamp travels through, not the moment the handler ran.
       await page.evaluate(() => {
@@ -55,7 +56,9 @@ describe('note input in Chromium with the fake MIDI device', () => {
       await page.evaluate(() => __fakeMidi.addInput({ id: 'in-2', name: 'Second Keys', manufacturer: 'Test' }));
       await page.waitForSelector('option:has-text("Second Keys")', { state: 'attached' });
       await page.evaluate(() => __fakeMidi.removeInput('in-1'));
-      await page.waitForFunction(() => document.querySelector('[data-testid="input-status"]')?.textContent?.includes('disconnected'));
+      await page.waitForFunction(() =>
+        document.querySelector('[data-testid="input-status"]')?.textContent?.includes('disconnected'),
+      );
       expect(await page.locator('option:has-text("Fake Keyboard")').count()).toBe(0);
       expect(b.errors).toEqual([]);
     } finally {
@@ -73,7 +76,10 @@ describe('note input in Chromium with the fake MIDI device', () => {
         const { page } = b;
         await page.goto(`${server.url}/input`, { waitUntil: 'networkidle' });
         const status = page.getByTestId('input-status');
-        await page.waitForFunction((s) => document.querySelector('[data-testid="input-status"]')?.getAttribute('data-state') === s, state);
+        await page.waitForFunction(
+          (s) => document.querySelector('[data-testid="input-status"]')?.getAttribute('data-state') === s,
+          state,
+        );
         expect(await status.textContent()).toMatch(words);
         await page.keyboard.down('a');
         await page.keyboard.up('a');

@@ -6,8 +6,14 @@ import { type BrowserSession, openBrowser, signInThroughPage } from '../helpers/
 import { createUser, type TestUser } from '../helpers/factories';
 import { createTestApp } from '../helpers/test-server';
 
-const SPEC: DrillSpec = { pair: ['Bbm', 'Ab'], pattern: 'stack', direction: 'up', instrument: 'piano', tempo: 120, range: { low: 55, high: 79 } };
-
+const SPEC: DrillSpec = {
+  pair: ['Bbm', 'Ab'],
+  pattern: 'stack',
+  direction: 'up',
+  instrument: 'piano',
+  tempo: 120,
+  range: { low: 55, high: 79 },
+};
 
 describe('a take finished while the server is down', () => {
   const ctx = createTestApp();
@@ -32,7 +38,10 @@ describe('a take finished while the server is down', () => {
     port = (http.address() as AddressInfo).port;
     url = `http://127.0.0.1:${port}`;
     player = await createUser(ctx.db, { role: 'player' });
-    b = await openBrowser(url, { fakeMidi: true, midiOptions: { inputs: [{ id: 'kb', name: 'Fake Keyboard' }], outputs: [] } });
+    b = await openBrowser(url, {
+      fakeMidi: true,
+      midiOptions: { inputs: [{ id: 'kb', name: 'Fake Keyboard' }], outputs: [] },
+    });
     await signInThroughPage(b.page, url, player);
   });
   afterAll(async () => {
@@ -46,7 +55,9 @@ describe('a take finished while the server is down', () => {
     await page.goto(`${url}/practice?spec=${encodeURIComponent(JSON.stringify(SPEC))}`, { waitUntil: 'networkidle' });
     await page.getByTestId('drill-staff').waitFor();
     await page.getByLabel('Count-in').selectOption('0');
-    await page.waitForFunction(() => document.querySelector('[data-testid="input-status"]')?.textContent?.includes('Listening'));
+    await page.waitForFunction(() =>
+      document.querySelector('[data-testid="input-status"]')?.textContent?.includes('Listening'),
+    );
 
     await halt();
     await page.getByRole('button', { name: 'Start the take' }).click();
@@ -55,11 +66,19 @@ describe('a take finished while the server is down', () => {
     const notes = generateDrill(SPEC).notes.map((n) => ({ midi: n.midi, t: n.beat * 500 }));
     await page.evaluate(
       ({ origin, notes }) => {
-        for (const n of notes) setTimeout(() => window.__fakeMidi.noteOn(n.midi, 90, 1, origin + n.t), Math.max(0, origin + n.t - performance.now()));
+        for (const n of notes)
+          setTimeout(
+            () => window.__fakeMidi.noteOn(n.midi, 90, 1, origin + n.t),
+            Math.max(0, origin + n.t - performance.now()),
+          );
       },
       { origin, notes },
     );
-    await page.waitForFunction(() => document.querySelector('[data-testid="practice"]')?.getAttribute('data-phase') === 'done', null, { timeout: 20_000 });
+    await page.waitForFunction(
+      () => document.querySelector('[data-testid="practice"]')?.getAttribute('data-phase') === 'done',
+      null,
+      { timeout: 20_000 },
+    );
     await page.getByTestId('queue-waiting').waitFor();
     expect(await page.getByTestId('queue-waiting').textContent()).toMatch(/1 take waiting/);
     const before = await ctx.pool.query('SELECT count(*)::int AS n FROM takes WHERE player_id = $1', [player.id]);
@@ -68,7 +87,10 @@ describe('a take finished while the server is down', () => {
     // Back up: the retry (with backoff) delivers it; the page says nothing waits any more.
     await listen();
     await page.getByTestId('queue-waiting').waitFor({ state: 'detached', timeout: 30_000 });
-    const after = await ctx.pool.query('SELECT count(*)::int AS n, min(accuracy) AS acc FROM takes WHERE player_id = $1', [player.id]);
+    const after = await ctx.pool.query(
+      'SELECT count(*)::int AS n, min(accuracy) AS acc FROM takes WHERE player_id = $1',
+      [player.id],
+    );
     expect(after.rows[0]).toEqual({ n: 1, acc: 1 });
 
     // A reload sends nothing twice: the queue is empty and the id would be stored once anyway.

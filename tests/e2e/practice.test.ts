@@ -11,11 +11,17 @@ const require = createRequire(import.meta.url);
 
 // A short drill at 100 bpm: a beat is 600 ms, so the default hit window is 75 ms and triplet
 // notes are 200 ms apart (match window 150 ms). Scripted mistakes sit well inside those.
-const SPEC: DrillSpec = { pair: ['F', 'Eb'], pattern: 'weave', direction: 'up', instrument: 'piano', tempo: 100, range: { low: 60, high: 76 } };
+const SPEC: DrillSpec = {
+  pair: ['F', 'Eb'],
+  pattern: 'weave',
+  direction: 'up',
+  instrument: 'piano',
+  tempo: 100,
+  range: { low: 60, high: 76 },
+};
 const msPerBeat = 600;
 
 type ScriptNote = { midi: number; t: number };
-
 
 /** Plays notes on the fake device at their times on the take's clock, each with its own timestamp. */
 async function play(page: BrowserSession['page'], notes: ScriptNote[]) {
@@ -39,7 +45,11 @@ async function play(page: BrowserSession['page'], notes: ScriptNote[]) {
 }
 
 async function takeDone(page: BrowserSession['page']) {
-  await page.waitForFunction(() => document.querySelector('[data-testid="practice"]')?.getAttribute('data-phase') === 'done', null, { timeout: 20_000 });
+  await page.waitForFunction(
+    () => document.querySelector('[data-testid="practice"]')?.getAttribute('data-phase') === 'done',
+    null,
+    { timeout: 20_000 },
+  );
 }
 
 async function startTake(page: BrowserSession['page']) {
@@ -55,7 +65,10 @@ describe('practice page in Chromium with the fake MIDI device', () => {
   beforeAll(async () => {
     server = await startTestServer();
     player = await createUser(server.db, { role: 'player', name: 'Theo Park' });
-    b = await openBrowser(server.url, { fakeMidi: true, midiOptions: { inputs: [{ id: 'kb', name: 'Fake Keyboard', manufacturer: 'Test' }], outputs: [] } });
+    b = await openBrowser(server.url, {
+      fakeMidi: true,
+      midiOptions: { inputs: [{ id: 'kb', name: 'Fake Keyboard', manufacturer: 'Test' }], outputs: [] },
+    });
     await signInThroughPage(b.page, server.url, player);
   });
   afterAll(async () => {
@@ -65,10 +78,14 @@ describe('practice page in Chromium with the fake MIDI device', () => {
 
   async function open(spec: DrillSpec) {
     const { page } = b;
-    await page.goto(`${server.url}/practice?spec=${encodeURIComponent(JSON.stringify(spec))}&order=chromatic`, { waitUntil: 'networkidle' });
+    await page.goto(`${server.url}/practice?spec=${encodeURIComponent(JSON.stringify(spec))}&order=chromatic`, {
+      waitUntil: 'networkidle',
+    });
     await page.getByTestId('drill-staff').waitFor();
     await page.getByLabel('Count-in').selectOption('0');
-    await page.waitForFunction(() => document.querySelector('[data-testid="input-status"]')?.textContent?.includes('Listening to Fake Keyboard'));
+    await page.waitForFunction(() =>
+      document.querySelector('[data-testid="input-status"]')?.textContent?.includes('Listening to Fake Keyboard'),
+    );
   }
 
   it('marks a left-out, a wrong and a late note, stores the take with those verdicts, and exports it', async () => {
@@ -82,8 +99,10 @@ describe('practice page in Chromium with the fake MIDI device', () => {
     drill.notes.forEach((n, i) => {
       const t = n.beat * msPerBeat;
       if (i === 2) return; // left out
-      if (i === 4) script.push({ midi: n.midi + 1, t }); // wrong
-      else if (i === 6) script.push({ midi: n.midi, t: t + 110 }); // late: past the hit window, inside the match window
+      if (i === 4)
+        script.push({ midi: n.midi + 1, t }); // wrong
+      else if (i === 6)
+        script.push({ midi: n.midi, t: t + 110 }); // late: past the hit window, inside the match window
       else script.push({ midi: n.midi, t });
     });
     await startTake(page);
@@ -117,11 +136,18 @@ describe('practice page in Chromium with the fake MIDI device', () => {
     expect(rows.filter((r) => r.verdict === 'hit')).toHaveLength(drill.notes.length - 3);
 
     // The download reads back in an independent parser (midi-file) with both tracks.
-    const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Download MIDI' }).click()]);
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('button', { name: 'Download MIDI' }).click(),
+    ]);
     const midi = parseMidi(readFileSync(await download.path()));
-    const names = midi.tracks.map((t) => t.find((e) => e.type === 'trackName')).map((e) => (e && 'text' in e ? e.text : ''));
+    const names = midi.tracks
+      .map((t) => t.find((e) => e.type === 'trackName'))
+      .map((e) => (e && 'text' in e ? e.text : ''));
     expect(names).toEqual(expect.arrayContaining(['Drill', 'Take']));
-    const takeOns = midi.tracks[names.indexOf('Take')].filter((e) => e.type === 'noteOn' && 'velocity' in e && e.velocity > 0);
+    const takeOns = midi.tracks[names.indexOf('Take')].filter(
+      (e) => e.type === 'noteOn' && 'velocity' in e && e.velocity > 0,
+    );
     expect(takeOns).toHaveLength(script.length);
     expect(b.errors).toEqual([]);
   });
@@ -158,7 +184,10 @@ describe('practice page in Chromium with the fake MIDI device', () => {
     for (const [s, [from, to]] of expectedSteps.entries()) {
       const step = page.getByTestId('ladder-step');
       expect(await step.getAttribute('data-step')).toBe(String(s));
-      expect([await step.getAttribute('data-from'), await step.getAttribute('data-to')]).toEqual([String(from), String(to)]);
+      expect([await step.getAttribute('data-from'), await step.getAttribute('data-to')]).toEqual([
+        String(from),
+        String(to),
+      ]);
       expect(await step.getAttribute('data-fade')).toBe(String(Math.min(2, s)));
       const slice = sliceDrill(full, from, to);
       for (let take = 0; take < 2; take++) {
@@ -216,7 +245,10 @@ describe('practice page in Chromium with the fake MIDI device', () => {
     await form.getByLabel(/written pitch/).check();
     await form.getByRole('button', { name: 'Save my settings' }).click();
     await form.getByText('Saved.').waitFor();
-    const res = await server.pool.query('SELECT instrument, default_tempo, written_pitch_input FROM player_settings WHERE user_id = $1', [player.id]);
+    const res = await server.pool.query(
+      'SELECT instrument, default_tempo, written_pitch_input FROM player_settings WHERE user_id = $1',
+      [player.id],
+    );
     expect(res.rows[0]).toEqual({ instrument: 'alto-sax', default_tempo: 88, written_pitch_input: true });
   });
 
@@ -225,7 +257,16 @@ describe('practice page in Chromium with the fake MIDI device', () => {
     await open(SPEC);
     await page.addScriptTag({ content: readFileSync(require.resolve('axe-core/axe.min.js'), 'utf8') });
     const violations = await page.evaluate(async () => {
-      const axe = (window as unknown as { axe: { run(ctx: Document, o: object): Promise<{ violations: Array<{ id: string; impact: string; nodes: unknown[] }> }> } }).axe;
+      const axe = (
+        window as unknown as {
+          axe: {
+            run(
+              ctx: Document,
+              o: object,
+            ): Promise<{ violations: Array<{ id: string; impact: string; nodes: unknown[] }> }>;
+          };
+        }
+      ).axe;
       const result = await axe.run(document, { resultTypes: ['violations'] });
       return result.violations.map((v) => ({ id: v.id, impact: v.impact, nodes: v.nodes.length }));
     });

@@ -50,7 +50,14 @@ describe('signing in through the page in Chromium', () => {
     await page.getByText('Harbour Lane Music Collective').waitFor();
     expect(await page.getByTestId('signed-in-name').textContent()).toBe('Theo Park');
     const nav = page.getByRole('navigation', { name: 'Main' });
-    expect(await nav.getByRole('link').allTextContents()).toEqual(['Home', 'Drills', 'Practice', 'History', 'Progress', 'Books']);
+    expect(await nav.getByRole('link').allTextContents()).toEqual([
+      'Home',
+      'Drills',
+      'Practice',
+      'History',
+      'Progress',
+      'Books',
+    ]);
     // A player's nav has no admin pages; an admin page says it is not for this role.
     await page.goto(`${server.url}/admin/users`, { waitUntil: 'networkidle' });
     expect(await page.getByText('Not for your role').count()).toBe(1);

@@ -3,7 +3,15 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { inAllKeys } from '../../shared/engine';
 import { drillKey } from '../../shared/practice/drill-identity';
 import { type BrowserSession, openBrowser } from '../helpers/browser';
-import { type Client, createStudio, createUser, signedIn, type TestUser, uniqueEmail, waitForMail } from '../helpers/factories';
+import {
+  type Client,
+  createStudio,
+  createUser,
+  signedIn,
+  type TestUser,
+  uniqueEmail,
+  waitForMail,
+} from '../helpers/factories';
 import { createSavedDrill, STUDIO_SPEC } from '../helpers/studio-fixtures';
 import { startTestServer } from '../helpers/test-server';
 
@@ -71,7 +79,9 @@ describe('a studio in Chromium: invite, assign, take, remark', () => {
     await page.waitForURL(new RegExp(`/studio/${studioId}$`));
     await page.getByText('Teacher: Mara Quill').waitFor();
     // the link works once
-    expect((await request(server.app).get(`/api/invites/${new URL(inviteLink).searchParams.get('token')}`)).status).toBe(404);
+    expect(
+      (await request(server.app).get(`/api/invites/${new URL(inviteLink).searchParams.get('token')}`)).status,
+    ).toBe(404);
   });
 
   it('the teacher sets the saved drill as an assignment; the player sees it on the home page', async () => {
@@ -102,7 +112,9 @@ describe('a studio in Chromium: invite, assign, take, remark', () => {
     await p.getByTestId('drill-staff').waitFor();
     expect(await p.getByLabel('Tempo (bpm)', { exact: true }).inputValue()).toBe('100');
     await p.getByLabel('Count-in').selectOption('0');
-    await p.waitForFunction(() => document.querySelector('[data-testid="input-status"]')?.textContent?.includes('Listening'));
+    await p.waitForFunction(() =>
+      document.querySelector('[data-testid="input-status"]')?.textContent?.includes('Listening'),
+    );
     const drill = inAllKeys({ ...STUDIO_SPEC, tempo: 100 }, 'chromatic').find((d) => drillKey(d.spec) === 'D')!;
     // The first two notes are left out; every other note is played on time.
     const notes = drill.notes.slice(2).map((n) => ({ midi: n.midi, t: (n.beat * 60000) / 100 }));
@@ -111,11 +123,19 @@ describe('a studio in Chromium: invite, assign, take, remark', () => {
     const origin = Number(await p.getByTestId('practice').getAttribute('data-origin'));
     await p.evaluate(
       ({ origin, notes }) => {
-        for (const n of notes) setTimeout(() => window.__fakeMidi.noteOn(n.midi, 90, 1, origin + n.t), Math.max(0, origin + n.t - performance.now()));
+        for (const n of notes)
+          setTimeout(
+            () => window.__fakeMidi.noteOn(n.midi, 90, 1, origin + n.t),
+            Math.max(0, origin + n.t - performance.now()),
+          );
       },
       { origin, notes },
     );
-    await p.waitForFunction(() => document.querySelector('[data-testid="practice"]')?.getAttribute('data-phase') === 'done', null, { timeout: 20_000 });
+    await p.waitForFunction(
+      () => document.querySelector('[data-testid="practice"]')?.getAttribute('data-phase') === 'done',
+      null,
+      { timeout: 20_000 },
+    );
     let rows: Array<{ id: string; assignment_id: string }> = [];
     for (let i = 0; i < 50 && rows.length === 0; i++) {
       rows = (await server.pool.query('SELECT id, assignment_id FROM takes WHERE assignment_id IS NOT NULL')).rows;
@@ -137,11 +157,16 @@ describe('a studio in Chromium: invite, assign, take, remark', () => {
     expect(await page.locator('.sf-mark-missed').count()).toBe(2);
     const pin = page.getByLabel('Pin to a note');
     expect(await pin.locator('option:checked').textContent()).toMatch(/^note 1 \(.+\): missed$/);
-    await page.getByLabel('Remark', { exact: true }).fill('Land on the first note: the count-in leads straight into it.');
+    await page
+      .getByLabel('Remark', { exact: true })
+      .fill('Land on the first note: the count-in leads straight into it.');
     await page.getByRole('button', { name: 'Leave the remark' }).click();
     await page.getByTestId('remarks').getByText('Land on the first note').waitFor();
     await page.locator('.sf-pinned').first().waitFor();
-    const download = await Promise.all([page.waitForEvent('download'), page.getByRole('link', { name: 'Download MIDI' }).click()]);
+    const download = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('link', { name: 'Download MIDI' }).click(),
+    ]);
     expect(download[0].suggestedFilename()).toMatch(/\.mid$/);
     expect(teacherBrowser.errors).toEqual([]);
   });
@@ -149,7 +174,10 @@ describe('a studio in Chromium: invite, assign, take, remark', () => {
   it('the player is told, reads the remark pinned to the note, and answers', async () => {
     const p = playerBrowser.page;
     await p.goto(`${server.url}/home`, { waitUntil: 'networkidle' });
-    await p.getByTestId('notifications').getByRole('link', { name: /Mara Quill left a remark/ }).click();
+    await p
+      .getByTestId('notifications')
+      .getByRole('link', { name: /Mara Quill left a remark/ })
+      .click();
     await p.waitForURL(new RegExp(`/takes/${takeId}$`));
     const remark = p.getByTestId('remarks').getByRole('listitem').first();
     await remark.getByText('Land on the first note').waitFor();

@@ -30,7 +30,14 @@ function noteOns(track: MidiData['tracks'][number]): { tick: number; key: number
 
 const weave = () => generateDrill({ pair: ['F', 'Eb'], pattern: 'weave', direction: 'up', start: 65, tempo: 96 });
 const fourThree = () =>
-  generateDrill({ pair: ['F', 'B'], pattern: 'four-three', direction: 'up-down', start: 57, tempo: 150, meter: [7, 8] });
+  generateDrill({
+    pair: ['F', 'B'],
+    pattern: 'four-three',
+    direction: 'up-down',
+    start: 57,
+    tempo: 150,
+    meter: [7, 8],
+  });
 
 describe('drillToMidi, read back by midi-file', () => {
   it.each([
@@ -112,7 +119,16 @@ describe('midiToPlayed on files written by midi-file', () => {
   it('reads every channel of the "Take" track, and 120 bpm until the first set tempo', () => {
     const bytes = file([
       [{ deltaTime: 96, meta: true, type: 'setTempo', microsecondsPerBeat: 1_000_000 }, end],
-      [{ deltaTime: 0, meta: true, type: 'trackName', text: 'Take' }, on(0, 60), { ...on(0, 67), channel: 3 }, off(96, 60), { ...off(0, 67), channel: 3 }, on(0, 64), off(96, 64), end],
+      [
+        { deltaTime: 0, meta: true, type: 'trackName', text: 'Take' },
+        on(0, 60),
+        { ...on(0, 67), channel: 3 },
+        off(96, 60),
+        { ...off(0, 67), channel: 3 },
+        on(0, 64),
+        off(96, 64),
+        end,
+      ],
     ]);
     // a quarter at 120 bpm (500 ms), then 60 bpm
     expect(midiToPlayed(bytes).map((p) => [p.midi, p.timeMs])).toEqual([
@@ -124,7 +140,20 @@ describe('midiToPlayed on files written by midi-file', () => {
 
   it('skips a chunk of another type (Standard MIDI Files 1.0)', () => {
     const whole = drillToMidi(weave());
-    const alien = Uint8Array.from([...whole.subarray(0, 14), 0x4d, 0x54, 0x78, 0x78, 0, 0, 0, 2, 1, 2, ...whole.subarray(14)]);
+    const alien = Uint8Array.from([
+      ...whole.subarray(0, 14),
+      0x4d,
+      0x54,
+      0x78,
+      0x78,
+      0,
+      0,
+      0,
+      2,
+      1,
+      2,
+      ...whole.subarray(14),
+    ]);
     expect(midiToPlayed(alien)).toEqual(midiToPlayed(whole));
   });
 
@@ -155,9 +184,9 @@ describe('midiToPlayed on files written by midi-file', () => {
       }
       expect(thrown).toBeInstanceOf(EngineError);
     }
-    expect(() => midiToPlayed(file([[{ deltaTime: 0, meta: true, type: 'setTempo', microsecondsPerBeat: 500_000 }, end]]))).toThrow(
-      /no notes/,
-    );
+    expect(() =>
+      midiToPlayed(file([[{ deltaTime: 0, meta: true, type: 'setTempo', microsecondsPerBeat: 500_000 }, end]])),
+    ).toThrow(/no notes/);
     const garbled = whole.slice();
     for (let i = 30; i < garbled.length; i += 5) garbled[i] = 0xf5;
     expect(() => midiToPlayed(garbled)).toThrow(EngineError);
@@ -172,7 +201,10 @@ describe('midiToPlayed counts the notes before reading a file', () => {
     out.set([0x4d, 0x54, 0x68, 0x64, 0, 0, 0, 6, 0, 1, 0, chunks.length, 0, 96]);
     let at = 14;
     for (const c of chunks) {
-      out.set([0x4d, 0x54, 0x72, 0x6b, c.length >>> 24, (c.length >> 16) & 255, (c.length >> 8) & 255, c.length & 255], at);
+      out.set(
+        [0x4d, 0x54, 0x72, 0x6b, c.length >>> 24, (c.length >> 16) & 255, (c.length >> 8) & 255, c.length & 255],
+        at,
+      );
       out.set(c, at + 8);
       at += 8 + c.length;
     }
@@ -229,25 +261,84 @@ describe('midiToPlayed counts the notes before reading a file', () => {
 
   it('steps over every kind of event by its own length', () => {
     const events = Uint8Array.from([
-      0x00, 0x90, 60, 100, // note-on
-      0x10, 62, 100, // running status: note-on
-      0x10, 60, 0, // running status, velocity 0: a note-off
-      0x00, 0xc2, 5, 0x00, 7, // program change and a running one, channel 3: one data byte each
-      0x00, 0xd2, 0x40, // channel pressure: one data byte
-      0x00, 0xb0, 7, 100, 0x00, 0xe0, 0, 0x40, 0x00, 0xa0, 62, 32, // control change, pitch bend, key pressure: two
-      0x00, 0xf0, 3, 0x7e, 0x7f, 0xf7, // sysex
-      0x00, 0xff, 0x01, 3, 0x90, 64, 100, // a text event whose text looks like a note-on
-      0x00, 0xf7, 2, 0x91, 0x40, // an escape
-      0x00, 0x91, 64, 90, // note-on, channel 2
-      0x81, 0x00, 67, 90, // running status after a two-byte delta time: note-on
-      0x10, 0x80, 62, 0, 0x00, 0x81, 64, 0, 0x00, 67, 0, // note-offs, the last in running status
-      0x00, 0xff, 0x2f, 0x00,
+      0x00,
+      0x90,
+      60,
+      100, // note-on
+      0x10,
+      62,
+      100, // running status: note-on
+      0x10,
+      60,
+      0, // running status, velocity 0: a note-off
+      0x00,
+      0xc2,
+      5,
+      0x00,
+      7, // program change and a running one, channel 3: one data byte each
+      0x00,
+      0xd2,
+      0x40, // channel pressure: one data byte
+      0x00,
+      0xb0,
+      7,
+      100,
+      0x00,
+      0xe0,
+      0,
+      0x40,
+      0x00,
+      0xa0,
+      62,
+      32, // control change, pitch bend, key pressure: two
+      0x00,
+      0xf0,
+      3,
+      0x7e,
+      0x7f,
+      0xf7, // sysex
+      0x00,
+      0xff,
+      0x01,
+      3,
+      0x90,
+      64,
+      100, // a text event whose text looks like a note-on
+      0x00,
+      0xf7,
+      2,
+      0x91,
+      0x40, // an escape
+      0x00,
+      0x91,
+      64,
+      90, // note-on, channel 2
+      0x81,
+      0x00,
+      67,
+      90, // running status after a two-byte delta time: note-on
+      0x10,
+      0x80,
+      62,
+      0,
+      0x00,
+      0x81,
+      64,
+      0,
+      0x00,
+      67,
+      0, // note-offs, the last in running status
+      0x00,
+      0xff,
+      0x2f,
+      0x00,
     ]);
     expect(countNoteOns(events)).toEqual({ noteOns: 4, overlong: false });
     expect(parseMidi(smf(events)).tracks.flatMap(noteOns)).toHaveLength(4); // midi-file agrees
     expect(midiToPlayed(smf(events)).map((n) => n.midi)).toEqual([60, 62, 64, 67]);
     // cut anywhere, or garbled, the count stops where the events stop making sense, and never throws
-    for (let cut = 0; cut <= events.length; cut++) expect(countNoteOns(events.subarray(0, cut)).noteOns).toBeLessThanOrEqual(4);
+    for (let cut = 0; cut <= events.length; cut++)
+      expect(countNoteOns(events.subarray(0, cut)).noteOns).toBeLessThanOrEqual(4);
     let seed = 7;
     for (let round = 0; round < 200; round++) {
       const noise = events.map((b) => {
@@ -272,7 +363,9 @@ describe('midiToPlayed counts the notes before reading a file', () => {
 
   it('refuses a length longer than four bytes, which sends the package back over the same bytes for ever', () => {
     // 8F FF FF FF 78 adds up to -8 in the package's 32 bits: the text event would be read again and again
-    const events = Uint8Array.from([0x00, 0xff, 0x01, 0x8f, 0xff, 0xff, 0xff, 0x78, 0x00, 0x90, 60, 100, 0x60, 60, 0, 0x00, 0xff, 0x2f, 0x00]);
+    const events = Uint8Array.from([
+      0x00, 0xff, 0x01, 0x8f, 0xff, 0xff, 0xff, 0x78, 0x00, 0x90, 60, 100, 0x60, 60, 0, 0x00, 0xff, 0x2f, 0x00,
+    ]);
     expect(countNoteOns(events).overlong).toBe(true);
     expect(() => midiToPlayed(smf(events))).toThrow(/could not be read/);
   });
@@ -280,7 +373,12 @@ describe('midiToPlayed counts the notes before reading a file', () => {
 
 describe('drillToMusicXml, read back by fast-xml-parser', () => {
   const parser = new XMLParser({ ignoreAttributes: false, isArray: (name) => ['measure', 'note'].includes(name) });
-  type XmlNote = { pitch?: { step: string; alter?: number; octave: number }; rest?: unknown; accidental?: string; duration: number };
+  type XmlNote = {
+    pitch?: { step: string; alter?: number; octave: number };
+    rest?: unknown;
+    accidental?: string;
+    duration: number;
+  };
 
   function read(xml: string) {
     const doc = parser.parse(xml);
@@ -289,7 +387,8 @@ describe('drillToMusicXml, read back by fast-xml-parser', () => {
     const notes = measures.flatMap((m) => m.note ?? []);
     return { doc, measures, notes, pitched: notes.filter((n) => n.pitch) };
   }
-  const midiOf = (p: NonNullable<XmlNote['pitch']>) => (Number(p.octave) + 1) * 12 + (Note.chroma(p.step) ?? 0) + Number(p.alter ?? 0);
+  const midiOf = (p: NonNullable<XmlNote['pitch']>) =>
+    (Number(p.octave) + 1) * 12 + (Note.chroma(p.step) ?? 0) + Number(p.alter ?? 0);
 
   it.each([
     ['piano', 0],
@@ -327,7 +426,7 @@ describe('drillToMusicXml, read back by fast-xml-parser', () => {
     expect(doc['score-partwise']['part-list']['score-part']['part-name']).toBe('Piano');
   });
 
-  it('keeps a slice\'s measure numbers', () => {
+  it("keeps a slice's measure numbers", () => {
     const drill = generateDrill({ pair: ['F', 'B'], pattern: 'four-three', direction: 'up', start: 57 });
     const { measures } = read(drillToMusicXml(sliceDrill(drill, 2, 3)));
     expect(measures.map((m) => m['@_number'])).toEqual(['2', '3']);

@@ -26,9 +26,7 @@ describe('worked examples of the engine contract', () => {
 
   it('four-three, F/B, start A3 = 57, up: the second group of seven starts on the "and" of four', () => {
     const d = generateDrill({ pair: ['F', 'B'], pattern: 'four-three', direction: 'up', start: 57 });
-    expect(names(d.notes.slice(0, 18))).toEqual(
-      'A3 C4 F4 A4 F#4 D#4 B3 C4 F4 A4 C5 B4 F#4 D#4 F4 A4 C5 F5'.split(' '),
-    );
+    expect(names(d.notes.slice(0, 18))).toEqual('A3 C4 F4 A4 F#4 D#4 B3 C4 F4 A4 C5 B4 F#4 D#4 F4 A4 C5 F5'.split(' '));
     // common practice: in eighths a cycle of four notes and three lasts seven eighths, so the
     // second cycle starts on the "and" of beat four
     const second = d.notes[7];
@@ -47,7 +45,13 @@ describe('MIDI numbers and names', () => {
   });
 
   it('spells a note with the octave that makes it sound (Cb4 is 59)', () => {
-    const d = generateDrill({ pair: ['Fdim', 'D'], pattern: 'stack', direction: 'up', start: 53, range: { low: 50, high: 80 } });
+    const d = generateDrill({
+      pair: ['Fdim', 'D'],
+      pattern: 'stack',
+      direction: 'up',
+      start: 53,
+      range: { low: 50, high: 80 },
+    });
     const cb = d.notes.find((n) => n.name.startsWith('Cb'));
     expect(cb).toBeDefined();
     expect(Note.midi(cb!.name)).toBe(cb!.midi); // tonal as reference library
@@ -83,10 +87,16 @@ describe('presets', () => {
   });
 
   it('up-down turns on the highest a tone at or below the top and drops a repeated note', () => {
-    const d = generateDrill({ pair: ['F', 'Eb'], pattern: 'stack', direction: 'up-down', range: { low: 53, high: 84 } });
+    const d = generateDrill({
+      pair: ['F', 'Eb'],
+      pattern: 'stack',
+      direction: 'up-down',
+      range: { low: 53, high: 84 },
+    });
     const top = Math.max(...d.notes.map((n) => n.midi));
     const topIndex = d.notes.findIndex((n) => n.midi === top);
-    for (let i = 1; i < d.notes.length; i++) expect(d.notes[i].midi === d.notes[i - 1].midi && i === topIndex + 1).toBe(false);
+    for (let i = 1; i < d.notes.length; i++)
+      expect(d.notes[i].midi === d.notes[i - 1].midi && i === topIndex + 1).toBe(false);
     expect(d.notes[d.notes.length - 1].midi).toBeLessThan(top);
     const cells = d.notes.map((n) => n.cell);
     expect(cells).toEqual([...cells].sort((x, y) => x - y));
@@ -103,7 +113,9 @@ describe('presets', () => {
 
   it('moves a start that is not a tone of a to the next one in the drill direction', () => {
     expect(generateDrill({ pair: ['F', 'Eb'], pattern: 'weave', direction: 'up', start: 66 }).notes[0].name).toBe('A4');
-    expect(generateDrill({ pair: ['F', 'Eb'], pattern: 'weave', direction: 'down', start: 66 }).notes[0].name).toBe('F4');
+    expect(generateDrill({ pair: ['F', 'Eb'], pattern: 'weave', direction: 'down', start: 66 }).notes[0].name).toBe(
+      'F4',
+    );
   });
 });
 
@@ -114,11 +126,14 @@ describe('meters and subdivisions', () => {
     [[6, 8], 'eighth', 7, 2, 2],
     [[7, 8], 'eighth', 7, 1, 2],
     [[4, 4], 'sixteenth', 5, 2.25, 1],
-  ] as const)('%j in %s: note %i falls on beat %d of measure %i', (meter, subdivision, index, beatInMeasure, measure) => {
-    const pattern: PatternDef = { name: 'line', subdivision, source: 'scale', degrees: [0, 1, 2, 3], step: 1 };
-    const d = generateDrill({ pair: ['C', 'D'], pattern, direction: 'up', start: 48, meter: [...meter] });
-    expect(d.notes[index]).toMatchObject({ beatInMeasure, measure });
-  });
+  ] as const)(
+    '%j in %s: note %i falls on beat %d of measure %i',
+    (meter, subdivision, index, beatInMeasure, measure) => {
+      const pattern: PatternDef = { name: 'line', subdivision, source: 'scale', degrees: [0, 1, 2, 3], step: 1 };
+      const d = generateDrill({ pair: ['C', 'D'], pattern, direction: 'up', start: 48, meter: [...meter] });
+      expect(d.notes[index]).toMatchObject({ beatInMeasure, measure });
+    },
+  );
 
   it('counts measures to hold the last note', () => {
     const d = generateDrill({ pair: ['F', 'B'], pattern: 'four-three', direction: 'up', start: 57, meter: [7, 8] });
@@ -223,6 +238,19 @@ describe('a preset that comes back to where it began', () => {
     // weave on Cdim/E: after the first cycle each a cell re-enters on C4 and the b cell falls
     // back to B3, so the drill would go round in place for ever.
     const d = generateDrill({ pair: ['Cdim', 'E'], pattern: 'weave', direction: 'up', range: { low: 48, high: 68 } });
-    expect(d.notes.map((n) => n.name)).toEqual(['Eb3', 'Gb3', 'C4', 'E4', 'B3', 'G#3', 'C4', 'Eb4', 'Gb4', 'G#4', 'E4', 'B3']);
+    expect(d.notes.map((n) => n.name)).toEqual([
+      'Eb3',
+      'Gb3',
+      'C4',
+      'E4',
+      'B3',
+      'G#3',
+      'C4',
+      'Eb4',
+      'Gb4',
+      'G#4',
+      'E4',
+      'B3',
+    ]);
   });
 });

@@ -17,7 +17,15 @@ import {
   parseTriad,
 } from '../../shared/engine';
 
-const PRESETS: PatternId[] = ['stack', 'weave', 'weave-four', 'leap-back', 'four-three', 'scale-steps', 'scale-steps-triplet'];
+const PRESETS: PatternId[] = [
+  'stack',
+  'weave',
+  'weave-four',
+  'leap-back',
+  'four-three',
+  'scale-steps',
+  'scale-steps-triplet',
+];
 const DIRECTIONS: Direction[] = ['up', 'down', 'up-down'];
 const INSTRUMENTS = Object.keys(instruments) as InstrumentId[];
 const CELL_NOTES: Record<PatternId, number> = {
@@ -105,20 +113,25 @@ describe('every preset, key, direction and instrument', () => {
 
   it('keeps those promises in any range wide enough, and refuses narrower ones with EngineError', () => {
     fc.assert(
-      fc.property(specArb, fc.double({ min: 0, max: 1, noNaN: true }), fc.integer({ min: 0, max: 40 }), (v, at, width) => {
-        // a range inside the instrument's own, so written pitches stay MIDI numbers
-        const own = instruments[v.instrument].range;
-        const low = own.low + Math.floor(at * (own.high - own.low));
-        const spec = { ...specOf(v), range: { low, high: Math.min(own.high, low + width) } };
-        let drill: Drill;
-        try {
-          drill = generateDrill(spec);
-        } catch (err) {
-          expect(err).toBeInstanceOf(EngineError);
-          return;
-        }
-        checkDrill(drill);
-      }),
+      fc.property(
+        specArb,
+        fc.double({ min: 0, max: 1, noNaN: true }),
+        fc.integer({ min: 0, max: 40 }),
+        (v, at, width) => {
+          // a range inside the instrument's own, so written pitches stay MIDI numbers
+          const own = instruments[v.instrument].range;
+          const low = own.low + Math.floor(at * (own.high - own.low));
+          const spec = { ...specOf(v), range: { low, high: Math.min(own.high, low + width) } };
+          let drill: Drill;
+          try {
+            drill = generateDrill(spec);
+          } catch (err) {
+            expect(err).toBeInstanceOf(EngineError);
+            return;
+          }
+          checkDrill(drill);
+        },
+      ),
       { numRuns: 300 },
     );
   });
@@ -168,7 +181,8 @@ describe('every preset, key, direction and instrument', () => {
             // a minor triad over the major triad a whole step below, moved to each key
             const pair: [string, string] = [`${root}m`, roots[(k + 10) % 12]];
             const d = generateDrill({ pair, pattern, direction, instrument });
-            for (const p of problemsOf(d)) problems.push(`${pair.join('/')} ${pattern} ${direction} ${instrument}: ${p}`);
+            for (const p of problemsOf(d))
+              problems.push(`${pair.join('/')} ${pattern} ${direction} ${instrument}: ${p}`);
           });
         }
       }

@@ -75,7 +75,11 @@ function playLive(f: ScoringFixture) {
     updates,
     onPush,
     order,
-    finish: { ...finish, results: finish.results.map((r) => ({ ...r, playedIndex: r.playedIndex === null ? null : order[r.playedIndex] })), extras: finish.extras.map((e) => order[e]).sort((x, y) => x - y) },
+    finish: {
+      ...finish,
+      results: finish.results.map((r) => ({ ...r, playedIndex: r.playedIndex === null ? null : order[r.playedIndex] })),
+      extras: finish.extras.map((e) => order[e]).sort((x, y) => x - y),
+    },
   };
 }
 
@@ -109,7 +113,10 @@ describe('scorer fixtures (fixtures/scoring/*.json)', () => {
         order.forEach((k, p) => {
           const index = f.score.results.findIndex((r) => r.playedIndex === k);
           if (index < 0) return; // an extra has no expected note to mark
-          expect(onPush[p].some((u) => u.index === index && u.result.playedIndex === k), `played ${k}`).toBe(true);
+          expect(
+            onPush[p].some((u) => u.index === index && u.result.playedIndex === k),
+            `played ${k}`,
+          ).toBe(true);
         });
       });
     });
@@ -131,6 +138,8 @@ describe('live settling in time', () => {
   it('settles a note nobody played as missed when its window closes', () => {
     if (!f) throw new Error('perfect fixture missing');
     const live = createLiveScorer(f.expected, f.options);
-    expect(live.tick(126)).toEqual([{ index: 0, result: { verdict: 'missed', playedIndex: null, offsetMs: null }, settled: true }]);
+    expect(live.tick(126)).toEqual([
+      { index: 0, result: { verdict: 'missed', playedIndex: null, offsetMs: null }, settled: true },
+    ]);
   });
 });

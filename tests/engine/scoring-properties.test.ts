@@ -16,7 +16,15 @@ import {
   type TakeScore,
 } from '../../shared/engine';
 
-const PRESETS: PatternId[] = ['stack', 'weave', 'weave-four', 'leap-back', 'four-three', 'scale-steps', 'scale-steps-triplet'];
+const PRESETS: PatternId[] = [
+  'stack',
+  'weave',
+  'weave-four',
+  'leap-back',
+  'four-three',
+  'scale-steps',
+  'scale-steps-triplet',
+];
 const PAIRS = allPairs();
 
 const drillArb = fc
@@ -74,16 +82,38 @@ const lineArb = fc
     const notes: DrillNote[] = steps.map((step, k) => {
       beat += k === 0 ? 0 : step;
       return {
-        midi: pitches[k], name: '', written: '', beat, duration: 0.25,
-        measure: Math.floor(beat / 4) + 1, beatInMeasure: (beat % 4) + 1, source: 'a', cell: k,
+        midi: pitches[k],
+        name: '',
+        written: '',
+        beat,
+        duration: 0.25,
+        measure: Math.floor(beat / 4) + 1,
+        beatInMeasure: (beat % 4) + 1,
+        source: 'a',
+        cell: k,
       };
     });
     return { notes, tempo };
   });
 
-type Action = { kind: 'play' | 'drop' | 'wrong' | 'octave' | 'bounce' | 'extra' | 'far'; jitter: number; shift: number };
+type Action = {
+  kind: 'play' | 'drop' | 'wrong' | 'octave' | 'bounce' | 'extra' | 'far';
+  jitter: number;
+  shift: number;
+};
 const actionArb = fc.record({
-  kind: fc.constantFrom<Action['kind'][]>('play', 'play', 'play', 'play', 'drop', 'wrong', 'octave', 'bounce', 'extra', 'far'),
+  kind: fc.constantFrom<Action['kind'][]>(
+    'play',
+    'play',
+    'play',
+    'play',
+    'drop',
+    'wrong',
+    'octave',
+    'bounce',
+    'extra',
+    'far',
+  ),
   jitter: fc.double({ min: -1.2, max: 1.2, noNaN: true }),
   shift: fc.integer({ min: -13, max: 13 }),
 });
@@ -207,8 +237,15 @@ describe('scoring properties (fast-check)', () => {
 
   it('free mode settles a clean run no more than the band behind the last note', () => {
     const notes: DrillNote[] = Array.from({ length: 300 }, (_, k) => ({
-      midi: 60 + (k % 12), name: '', written: '', beat: k / 2, duration: 0.5,
-      measure: Math.floor(k / 8) + 1, beatInMeasure: ((k / 2) % 4) + 1, source: 'scale', cell: k,
+      midi: 60 + (k % 12),
+      name: '',
+      written: '',
+      beat: k / 2,
+      duration: 0.5,
+      measure: Math.floor(k / 8) + 1,
+      beatInMeasure: ((k / 2) % 4) + 1,
+      source: 'scale',
+      cell: k,
     }));
     const live = createLiveScorer(notes, { tempo: 100, mode: 'free' });
     let settled = 0;

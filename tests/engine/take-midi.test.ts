@@ -54,7 +54,8 @@ function notesOf(track: MidiEvent[]): { name: string | null; notes: ReadNote[]; 
     tick += e.deltaTime;
     if (e.type === 'trackName') name = e.text;
     // MIDI 1.0: a note-on with velocity 0 counts as a note-off
-    if (e.type === 'noteOn' && e.velocity > 0) notes.push({ tick, midi: e.noteNumber, velocity: e.velocity, channel: e.channel });
+    if (e.type === 'noteOn' && e.velocity > 0)
+      notes.push({ tick, midi: e.noteNumber, velocity: e.velocity, channel: e.channel });
     else if (e.type === 'noteOff' || e.type === 'noteOn') offs++;
   }
   return { name, notes, offs };

@@ -70,7 +70,12 @@ describe('allPairs', () => {
     // common practice: a major triad shares no note with the major triads a half step, a whole step
     // and a tritone away (5 of them), so 12 x 5 / 2 = 30 pairs
     expect(allPairs(['major'])).toHaveLength(30);
-    const aug = new Set(allPairs(['augmented', 'major']).flatMap((p) => [p.a, p.b]).filter((t) => t.quality === 'augmented').map((t) => t.root));
+    const aug = new Set(
+      allPairs(['augmented', 'major'])
+        .flatMap((p) => [p.a, p.b])
+        .filter((t) => t.quality === 'augmented')
+        .map((t) => t.root),
+    );
     expect([...aug].sort()).toEqual(['C', 'D', 'Db', 'Eb']);
     expect(allPairs(['major']).some((p) => p.a.symbol === 'Eb' && p.b.symbol === 'F')).toBe(true);
   });
@@ -113,19 +118,22 @@ describe('pairsForChord', () => {
     ['CmMaj7', 'melodic minor'],
     ['C7sus4', 'mixolydian'],
     ['Caug', 'whole tone'],
-  ])('%s: every pair sits in a scale of its family that holds the chord (tonal as reference library)', (chord, firstScale) => {
-    const fits = pairsForChord(chord);
-    expect(fits.length).toBeGreaterThan(0);
-    expect(fits.some((f) => f.scale === firstScale)).toBe(true);
-    const root = Chord.get(chord).tonic;
-    const chordChroma = Chord.get(chord).notes.map((n) => Note.chroma(n));
-    for (const f of fits) {
-      const scale = Scale.get(`${root} ${f.scale}`).notes.map((n) => Note.chroma(n));
-      for (const c of chordChroma) expect(scale).toContain(c);
-      for (const n of f.pair.hexatonic) expect(scale).toContain(Note.chroma(n));
-      expect(f.functions).toHaveLength(6);
-    }
-  });
+  ])(
+    '%s: every pair sits in a scale of its family that holds the chord (tonal as reference library)',
+    (chord, firstScale) => {
+      const fits = pairsForChord(chord);
+      expect(fits.length).toBeGreaterThan(0);
+      expect(fits.some((f) => f.scale === firstScale)).toBe(true);
+      const root = Chord.get(chord).tonic;
+      const chordChroma = Chord.get(chord).notes.map((n) => Note.chroma(n));
+      for (const f of fits) {
+        const scale = Scale.get(`${root} ${f.scale}`).notes.map((n) => Note.chroma(n));
+        for (const c of chordChroma) expect(scale).toContain(c);
+        for (const n of f.pair.hexatonic) expect(scale).toContain(Note.chroma(n));
+        expect(f.functions).toHaveLength(6);
+      }
+    },
+  );
 
   it('names chord tones by degree and others as tensions', () => {
     const fit = pairsForChord('Cdim7').find((f) => f.functions.includes('bb7'));

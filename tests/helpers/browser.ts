@@ -20,7 +20,10 @@ export interface BrowserSession {
  * Debian's Chromium driven by playwright-core (never a downloaded browser), with a fresh
  * profile and the flags that keep it off the network.
  */
-export async function openBrowser(appUrl: string, opts: { fakeMidi?: boolean; midiOptions?: unknown } = {}): Promise<BrowserSession> {
+export async function openBrowser(
+  appUrl: string,
+  opts: { fakeMidi?: boolean; midiOptions?: unknown } = {},
+): Promise<BrowserSession> {
   const profile = mkdtempSync(join(tmpdir(), 'sixfold-chromium-'));
   const context = await chromium.launchPersistentContext(profile, {
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',

@@ -76,7 +76,8 @@ export async function client(app: Express): Promise<Client> {
 export async function signedIn(app: Express, user: Pick<TestUser, 'email' | 'password'>): Promise<Client> {
   const c = await client(app);
   const res = await c.post('/api/auth/sign-in', { email: user.email, password: user.password });
-  if (res.status !== 200) throw new Error(`sign-in failed for ${user.email}: ${res.status} ${JSON.stringify(res.body)}`);
+  if (res.status !== 200)
+    throw new Error(`sign-in failed for ${user.email}: ${res.status} ${JSON.stringify(res.body)}`);
   await c.refreshCsrf();
   return c;
 }

@@ -13,7 +13,9 @@ export default async function setup() {
   process.env.TEST_DATABASE_URL = url;
   const client = new pg.Client({ connectionString: url });
   await client.connect();
-  await client.query('DROP SCHEMA IF EXISTS public CASCADE; DROP SCHEMA IF EXISTS drizzle CASCADE; CREATE SCHEMA public;');
+  await client.query(
+    'DROP SCHEMA IF EXISTS public CASCADE; DROP SCHEMA IF EXISTS drizzle CASCADE; CREATE SCHEMA public;',
+  );
   await client.end();
   const { db, pool } = createDb(url, 2);
   await runMigrations(db);

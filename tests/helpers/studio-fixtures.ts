@@ -5,10 +5,25 @@ import { savedDrills } from '../../server/db/schema';
 import type { Client } from './factories';
 
 /** A short drill, quick to score: D/C four-three, one octave and a bit, at 100 bpm. */
-export const STUDIO_SPEC: DrillSpec = { pair: ['D', 'C'], pattern: 'four-three', direction: 'up', instrument: 'piano', tempo: 100, range: { low: 60, high: 79 } };
+export const STUDIO_SPEC: DrillSpec = {
+  pair: ['D', 'C'],
+  pattern: 'four-three',
+  direction: 'up',
+  instrument: 'piano',
+  tempo: 100,
+  range: { low: 60, high: 79 },
+};
 
-export async function createSavedDrill(db: Db, ownerId: string, spec: DrillSpec = STUDIO_SPEC, name = 'Four-three on D/C') {
-  const [row] = await db.insert(savedDrills).values({ ownerId, name, spec: spec as never, keyOrder: null }).returning();
+export async function createSavedDrill(
+  db: Db,
+  ownerId: string,
+  spec: DrillSpec = STUDIO_SPEC,
+  name = 'Four-three on D/C',
+) {
+  const [row] = await db
+    .insert(savedDrills)
+    .values({ ownerId, name, spec: spec as never, keyOrder: null })
+    .returning();
   return row;
 }
 
@@ -19,7 +34,9 @@ export async function createSavedDrill(db: Db, ownerId: string, spec: DrillSpec 
 export function takeBody(spec: DrillSpec, opts: { assignmentId?: string; miss?: number } = {}) {
   const drill = generateDrill(spec);
   const tempo = drill.spec.tempo;
-  const played: PlayedNote[] = drill.notes.slice(opts.miss ?? 0).map((n) => ({ midi: n.midi, timeMs: (n.beat * 60000) / tempo, velocity: 80 }));
+  const played: PlayedNote[] = drill.notes
+    .slice(opts.miss ?? 0)
+    .map((n) => ({ midi: n.midi, timeMs: (n.beat * 60000) / tempo, velocity: 80 }));
   return {
     id: randomUUID(),
     spec,

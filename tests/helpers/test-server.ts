@@ -17,14 +17,24 @@ import { startFakeCheckout } from '../../server/payments/fake-checkout';
 export function createTestApp(overrides: Record<string, string> = {}) {
   const url = process.env.TEST_DATABASE_URL;
   if (!url) throw new Error('TEST_DATABASE_URL is not set (the global set-up sets it)');
-  const env = parseEnv({ ...process.env, NODE_ENV: 'test', DATABASE_URL: url, SIGN_IN_IP_LIMIT: '10000', ...overrides });
+  const env = parseEnv({
+    ...process.env,
+    NODE_ENV: 'test',
+    DATABASE_URL: url,
+    SIGN_IN_IP_LIMIT: '10000',
+    ...overrides,
+  });
   const { db, pool } = createDb(url, 4);
   let fake: Promise<FakeSmtp> | undefined;
   const startFake = () => {
     fake ??= startFakeSmtp({ db, port: 0 });
     return fake;
   };
-  const mailer = createSmtpMailer({ host: '127.0.0.1', port: async () => (await startFake()).port, from: env.MAIL_FROM });
+  const mailer = createSmtpMailer({
+    host: '127.0.0.1',
+    port: async () => (await startFake()).port,
+    from: env.MAIL_FROM,
+  });
   const app = createApp({ db, pool, env, mailer });
   return {
     app,
@@ -59,6 +69,10 @@ export async function startTestServer(overrides: Record<string, string> = {}) {
  * `PAYMENTS_API_PORT: String(fake.port)` to the app, then `fake.setWebhookUrl(...)` once it listens.
  */
 export function startPaymentsFake() {
-  const env = parseEnv({ ...process.env, NODE_ENV: 'test', DATABASE_URL: process.env.TEST_DATABASE_URL ?? 'postgres://unused' });
+  const env = parseEnv({
+    ...process.env,
+    NODE_ENV: 'test',
+    DATABASE_URL: process.env.TEST_DATABASE_URL ?? 'postgres://unused',
+  });
   return startFakeCheckout({ port: 0, secretKey: env.STRIPE_SECRET_KEY, webhookSecret: env.STRIPE_WEBHOOK_SECRET });
 }

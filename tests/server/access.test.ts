@@ -50,7 +50,14 @@ describe('GET /api/admin/users', () => {
   it('lists every account for an admin, without hashes', async () => {
     const res = await admin.get('/api/admin/users').expect(200);
     const mara = res.body.users.find((u: { email: string }) => u.email === teacherUser.email);
-    expect(mara).toEqual({ id: teacherUser.id, email: teacherUser.email, name: 'Mara Quill', role: 'teacher', disabled: false, createdAt: expect.any(String) });
+    expect(mara).toEqual({
+      id: teacherUser.id,
+      email: teacherUser.email,
+      name: 'Mara Quill',
+      role: 'teacher',
+      disabled: false,
+      createdAt: expect.any(String),
+    });
     expect(JSON.stringify(res.body)).not.toMatch(/argon|hash/i);
   });
 });
@@ -80,14 +87,19 @@ describe('GET /api/dev/outbox', () => {
   });
 });
 
-describe('studios: another teacher\'s studio is not revealed', () => {
+describe("studios: another teacher's studio is not revealed", () => {
   it('answers 401 when signed out', async () => {
     expect((await request(ctx.app).get(`/api/studios/${studioId}`)).status).toBe(401);
   });
 
   it('shows the teacher their own studio with its players', async () => {
     const res = await teacher.get(`/api/studios/${studioId}`).expect(200);
-    expect(res.body.studio).toMatchObject({ id: studioId, name: 'Harbour Lane test', playerCount: 1, teacher: { id: teacherUser.id } });
+    expect(res.body.studio).toMatchObject({
+      id: studioId,
+      name: 'Harbour Lane test',
+      playerCount: 1,
+      teacher: { id: teacherUser.id },
+    });
     expect(res.body.studio.members.map((m: { name: string }) => m.name)).toEqual(['Theo Park']);
   });
 
@@ -114,6 +126,8 @@ describe('studios: another teacher\'s studio is not revealed', () => {
     const theirs = await otherTeacher.get('/api/studios').expect(200);
     expect(theirs.body.studios.map((s: { id: string }) => s.id)).toEqual([otherStudioId]);
     const all = await admin.get('/api/studios').expect(200);
-    expect(all.body.studios.map((s: { id: string }) => s.id)).toEqual(expect.arrayContaining([studioId, otherStudioId]));
+    expect(all.body.studios.map((s: { id: string }) => s.id)).toEqual(
+      expect.arrayContaining([studioId, otherStudioId]),
+    );
   });
 });

@@ -57,6 +57,8 @@ describe('admin: roles, switching accounts off, the audit log', () => {
     const bad = await admin.patch(`/api/admin/users/${user.id}`, { role: 'owner' });
     expect(bad.status).toBe(400);
     expect(bad.body.error.fields.role).toBeDefined();
-    expect((await admin.patch('/api/admin/users/00000000-0000-4000-8000-000000000000', { role: 'player' })).status).toBe(404);
+    expect(
+      (await admin.patch('/api/admin/users/00000000-0000-4000-8000-000000000000', { role: 'player' })).status,
+    ).toBe(404);
   });
 });

@@ -17,7 +17,12 @@ describe('POST /api/auth/sign-up', () => {
   it('creates a player, signs them in, and never returns the hash', async () => {
     const c = await client(ctx.app);
     const email = uniqueEmail('new-player');
-    const res = await c.post('/api/auth/sign-up', { email: email.toUpperCase(), password: TEST_PASSWORD, name: 'Theo Park', role: 'player' });
+    const res = await c.post('/api/auth/sign-up', {
+      email: email.toUpperCase(),
+      password: TEST_PASSWORD,
+      name: 'Theo Park',
+      role: 'player',
+    });
     expect(res.status).toBe(201);
     expect(res.body.user).toEqual({ id: expect.any(String), email, name: 'Theo Park', role: 'player' });
     expect(JSON.stringify(res.body)).not.toMatch(/hash|argon/i);
@@ -29,14 +34,24 @@ describe('POST /api/auth/sign-up', () => {
 
   it('creates a teacher', async () => {
     const c = await client(ctx.app);
-    const res = await c.post('/api/auth/sign-up', { email: uniqueEmail('new-teacher'), password: TEST_PASSWORD, name: 'Mara Quill', role: 'teacher' });
+    const res = await c.post('/api/auth/sign-up', {
+      email: uniqueEmail('new-teacher'),
+      password: TEST_PASSWORD,
+      name: 'Mara Quill',
+      role: 'teacher',
+    });
     expect(res.status).toBe(201);
     expect(res.body.user.role).toBe('teacher');
   });
 
   it('refuses the admin role with a 400 naming the field', async () => {
     const c = await client(ctx.app);
-    const res = await c.post('/api/auth/sign-up', { email: uniqueEmail(), password: TEST_PASSWORD, name: 'Sneaky', role: 'admin' });
+    const res = await c.post('/api/auth/sign-up', {
+      email: uniqueEmail(),
+      password: TEST_PASSWORD,
+      name: 'Sneaky',
+      role: 'admin',
+    });
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe('validation');
     expect(Object.keys(res.body.error.fields)).toEqual(['role']);
@@ -47,13 +62,19 @@ describe('POST /api/auth/sign-up', () => {
     const res = await c.post('/api/auth/sign-up', { email: 'not-an-address', password: 'short', name: '  ' });
     expect(res.status).toBe(400);
     expect(Object.keys(res.body.error.fields).sort()).toEqual(['email', 'name', 'password', 'role']);
-    for (const messages of Object.values(res.body.error.fields)) expect((messages as string[])[0]).toEqual(expect.any(String));
+    for (const messages of Object.values(res.body.error.fields))
+      expect((messages as string[])[0]).toEqual(expect.any(String));
   });
 
   it('answers 409 on an address already in use, naming the field', async () => {
     const user = await createUser(ctx.db);
     const c = await client(ctx.app);
-    const res = await c.post('/api/auth/sign-up', { email: user.email, password: TEST_PASSWORD, name: 'Again', role: 'player' });
+    const res = await c.post('/api/auth/sign-up', {
+      email: user.email,
+      password: TEST_PASSWORD,
+      name: 'Again',
+      role: 'player',
+    });
     expect(res.status).toBe(409);
     expect(res.body.error.fields.email).toBeDefined();
   });
@@ -97,7 +118,10 @@ describe('POST /api/auth/sign-in', () => {
     const agent = request.agent(ctx.app);
     const first = await agent.get('/api/auth/csrf');
     const before = sessionCookie(first)!.split(';')[0];
-    const res = await agent.post('/api/auth/sign-in').set('X-CSRF-Token', first.body.token).send({ email: user.email, password: user.password });
+    const res = await agent
+      .post('/api/auth/sign-in')
+      .set('X-CSRF-Token', first.body.token)
+      .send({ email: user.email, password: user.password });
     expect(res.status).toBe(200);
     const after = sessionCookie(res)!.split(';')[0];
     expect(after).not.toBe(before);
@@ -131,7 +155,10 @@ describe('POST /api/auth/sign-in', () => {
     await ctx.db.update(users).set({ disabled: true }).where(eq(users.id, user.id));
     expect((await c.get('/api/auth/me')).status).toBe(401);
     expect((await c.get('/api/auth/session')).body).toEqual({ user: null });
-    const again = await (await client(ctx.app)).post('/api/auth/sign-in', { email: user.email, password: user.password });
+    const again = await (await client(ctx.app)).post('/api/auth/sign-in', {
+      email: user.email,
+      password: user.password,
+    });
     expect(again.status).toBe(401);
   });
 });
@@ -185,7 +212,10 @@ describe('account settings', () => {
     const user = await createUser(ctx.db);
     const c = await signedIn(ctx.app, user);
     const other = await signedIn(ctx.app, user);
-    const wrong = await c.post('/api/auth/password', { currentPassword: 'not-it-at-all', newPassword: 'a-brand-new-one' });
+    const wrong = await c.post('/api/auth/password', {
+      currentPassword: 'not-it-at-all',
+      newPassword: 'a-brand-new-one',
+    });
     expect(wrong.status).toBe(400);
     expect(Object.keys(wrong.body.error.fields)).toEqual(['currentPassword']);
     const short = await c.post('/api/auth/password', { currentPassword: user.password, newPassword: 'x' });
@@ -197,7 +227,9 @@ describe('account settings', () => {
     expect((await other.get('/api/auth/me')).status).toBe(401);
     const fresh = await client(ctx.app);
     expect((await fresh.post('/api/auth/sign-in', { email: user.email, password: user.password })).status).toBe(401);
-    expect((await fresh.post('/api/auth/sign-in', { email: user.email, password: 'a-brand-new-one' })).status).toBe(200);
+    expect((await fresh.post('/api/auth/sign-in', { email: user.email, password: 'a-brand-new-one' })).status).toBe(
+      200,
+    );
   });
 
   it('answers 401 to account changes when signed out', async () => {

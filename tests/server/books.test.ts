@@ -27,13 +27,29 @@ async function saveDrill(c: Client, name: string, spec: DrillSpec, keyOrder: str
 }
 
 /** A book of Mara's with the given drills added in order; published at a price when asked. */
-async function makeBook(opts: { title: string; priceMinor?: number; publish?: boolean; drills?: [string, DrillSpec][] }) {
-  const created = await teacher.post('/api/books', { title: opts.title, priceMinor: opts.priceMinor ?? 1200, currency: 'EUR', coverColour: 'reed' }).expect(201);
+async function makeBook(opts: {
+  title: string;
+  priceMinor?: number;
+  publish?: boolean;
+  drills?: [string, DrillSpec][];
+}) {
+  const created = await teacher
+    .post('/api/books', {
+      title: opts.title,
+      priceMinor: opts.priceMinor ?? 1200,
+      currency: 'EUR',
+      coverColour: 'reed',
+    })
+    .expect(201);
   const id: string = created.body.book.id;
   let book = created.body.book;
-  for (const [name, spec] of opts.drills ?? [['Starter C/D', CD], ['Four-three D/C', DC]]) {
+  for (const [name, spec] of opts.drills ?? [
+    ['Starter C/D', CD],
+    ['Four-three D/C', DC],
+  ]) {
     const savedDrillId = await saveDrill(teacher, name, spec, 'chromatic');
-    book = (await teacher.post(`/api/books/${id}/drills`, { savedDrillId, note: `Note for ${name}` }).expect(201)).body.book;
+    book = (await teacher.post(`/api/books/${id}/drills`, { savedDrillId, note: `Note for ${name}` }).expect(201)).body
+      .book;
   }
   if (opts.publish) book = (await teacher.patch(`/api/books/${id}`, { published: true }).expect(200)).body.book;
   return book as { id: string; drills: { id: string; title: string; free: boolean }[] };
@@ -52,24 +68,43 @@ describe('teachers make drill books', () => {
     expect(book.drills.map((d) => d.title)).toEqual(['Starter C/D', 'Four-three D/C']);
     const [first, second] = book.drills;
 
-    const reordered = await teacher.agent.put(`/api/books/${book.id}/order`).set('X-CSRF-Token', teacher.csrf).send({ drillIds: [second.id, first.id] }).expect(200);
+    const reordered = await teacher.agent
+      .put(`/api/books/${book.id}/order`)
+      .set('X-CSRF-Token', teacher.csrf)
+      .send({ drillIds: [second.id, first.id] })
+      .expect(200);
     expect(reordered.body.book.drills.map((d: { id: string }) => d.id)).toEqual([second.id, first.id]);
 
-    const noted = await teacher.patch(`/api/books/${book.id}/drills/${first.id}`, { note: 'Sing the top triad.', free: true, keyCycle: null }).expect(200);
+    const noted = await teacher
+      .patch(`/api/books/${book.id}/drills/${first.id}`, { note: 'Sing the top triad.', free: true, keyCycle: null })
+      .expect(200);
     const starter = noted.body.book.drills.find((d: { id: string }) => d.id === first.id);
     expect(starter).toMatchObject({ note: 'Sing the top triad.', free: true, keyCycle: null });
 
     // Marking another drill free moves the mark: one free drill per book.
     const moved = await teacher.patch(`/api/books/${book.id}/drills/${second.id}`, { free: true }).expect(200);
-    expect(moved.body.book.drills.filter((d: { free: boolean }) => d.free).map((d: { id: string }) => d.id)).toEqual([second.id]);
+    expect(moved.body.book.drills.filter((d: { free: boolean }) => d.free).map((d: { id: string }) => d.id)).toEqual([
+      second.id,
+    ]);
 
-    const published = await teacher.patch(`/api/books/${book.id}`, { published: true, description: 'For the combo' }).expect(200);
-    expect(published.body.book).toMatchObject({ published: true, priceMinor: 1200, currency: 'EUR', coverColour: 'reed', access: 'owner' });
+    const published = await teacher
+      .patch(`/api/books/${book.id}`, { published: true, description: 'For the combo' })
+      .expect(200);
+    expect(published.body.book).toMatchObject({
+      published: true,
+      priceMinor: 1200,
+      currency: 'EUR',
+      coverColour: 'reed',
+      access: 'owner',
+    });
   });
 
   it('rejects a reorder that does not name every drill once', async () => {
     const book = await makeBook({ title: 'Order check' });
-    const res = await teacher.agent.put(`/api/books/${book.id}/order`).set('X-CSRF-Token', teacher.csrf).send({ drillIds: [book.drills[0].id] });
+    const res = await teacher.agent
+      .put(`/api/books/${book.id}/order`)
+      .set('X-CSRF-Token', teacher.csrf)
+      .send({ drillIds: [book.drills[0].id] });
     expect(res.status).toBe(400);
     expect(res.body.error.fields.drillIds).toBeDefined();
   });
@@ -102,8 +137,16 @@ describe('teachers make drill books', () => {
     expect((await player.post('/api/books', { title: 'Mine' })).status).toBe(403);
     const book = await makeBook({ title: 'Not yours' });
     expect((await otherTeacher.patch(`/api/books/${book.id}`, { title: 'Taken' })).status).toBe(404);
-    expect((await otherTeacher.patch(`/api/books/${book.id}/drills/${book.drills[0].id}`, { note: 'x' })).status).toBe(404);
-    expect((await otherTeacher.agent.delete(`/api/books/${book.id}/drills/${book.drills[0].id}`).set('X-CSRF-Token', otherTeacher.csrf)).status).toBe(404);
+    expect((await otherTeacher.patch(`/api/books/${book.id}/drills/${book.drills[0].id}`, { note: 'x' })).status).toBe(
+      404,
+    );
+    expect(
+      (
+        await otherTeacher.agent
+          .delete(`/api/books/${book.id}/drills/${book.drills[0].id}`)
+          .set('X-CSRF-Token', otherTeacher.csrf)
+      ).status,
+    ).toBe(404);
     // Another teacher's saved drill cannot be added to one's own book.
     const theirs = await saveDrill(otherTeacher, 'Theirs', DC);
     expect((await teacher.post(`/api/books/${book.id}/drills`, { savedDrillId: theirs })).status).toBe(404);
@@ -122,10 +165,15 @@ describe('teachers make drill books', () => {
 
   it('removes a drill; the free mark passes on in a published book', async () => {
     const book = await makeBook({ title: 'Removal', publish: true });
-    const res = await teacher.agent.delete(`/api/books/${book.id}/drills/${book.drills[0].id}`).set('X-CSRF-Token', teacher.csrf).expect(200);
+    const res = await teacher.agent
+      .delete(`/api/books/${book.id}/drills/${book.drills[0].id}`)
+      .set('X-CSRF-Token', teacher.csrf)
+      .expect(200);
     expect(res.body.book.drills).toHaveLength(1);
     expect(res.body.book.drills[0].free).toBe(true);
-    const last = await teacher.agent.delete(`/api/books/${book.id}/drills/${book.drills[1].id}`).set('X-CSRF-Token', teacher.csrf);
+    const last = await teacher.agent
+      .delete(`/api/books/${book.id}/drills/${book.drills[1].id}`)
+      .set('X-CSRF-Token', teacher.csrf);
     expect(last.status).toBe(400);
   });
 });
@@ -143,10 +191,18 @@ describe('the catalogue and entitlements', () => {
 
   it('GET /api/books lists published books in the agreed shape, drafts left out', async () => {
     const res = await request(ctx.app).get('/api/books').expect(200);
-    const books = res.body.books as { id: string; title: string; priceMinor: number; currency: string; drills: { id: string; title: string; free: boolean }[] }[];
+    const books = res.body.books as {
+      id: string;
+      title: string;
+      priceMinor: number;
+      currency: string;
+      drills: { id: string; title: string; free: boolean }[];
+    }[];
     const mine = books.find((b) => b.id === priced.id)!;
     expect(mine).toMatchObject({ id: priced.id, title: 'Catalogue priced', priceMinor: 1500, currency: 'EUR' });
-    expect(mine.drills).toEqual(priced.drills.map((d) => expect.objectContaining({ id: d.id, title: d.title, free: d.free })));
+    expect(mine.drills).toEqual(
+      priced.drills.map((d) => expect.objectContaining({ id: d.id, title: d.title, free: d.free })),
+    );
     expect(mine.drills.filter((d) => d.free)).toHaveLength(1);
     expect(books.some((b) => b.id === draft.id)).toBe(false);
     // The contents list never carries a drill's spec.
@@ -187,7 +243,8 @@ describe('the catalogue and entitlements', () => {
   });
 
   it('opens every drill of a free book to anyone', async () => {
-    for (const d of freeBook.drills) expect((await player.get(`/api/books/${freeBook.id}/drills/${d.id}`)).status).toBe(200);
+    for (const d of freeBook.drills)
+      expect((await player.get(`/api/books/${freeBook.id}/drills/${d.id}`)).status).toBe(200);
     const edition = await player.get(`/api/books/${freeBook.id}/edition`).expect(200);
     expect(edition.body.drills).toHaveLength(freeBook.drills.length);
     expect((await player.post(`/api/books/${freeBook.id}/checkout`)).status).toBe(400);
@@ -213,15 +270,27 @@ describe('the demo seed', () => {
     // The seed's own demo account (made here the way the seed makes it, if no other test has).
     await ctx.db
       .insert(users)
-      .values({ email: 'teacher@sixfold.test', name: 'Mara Quill', role: 'teacher', passwordHash: await hashPassword(DEMO_PASSWORD) })
+      .values({
+        email: 'teacher@sixfold.test',
+        name: 'Mara Quill',
+        role: 'teacher',
+        passwordHash: await hashPassword(DEMO_PASSWORD),
+      })
       .onConflictDoNothing();
     await seedDemoBooks(ctx.db);
     await seedDemoBooks(ctx.db);
     const [demoMara] = await ctx.db.select().from(users).where(eq(users.email, 'teacher@sixfold.test'));
-    const found = await ctx.db.select().from(books).where(and(eq(books.teacherId, demoMara.id), eq(books.title, DEMO_BOOK_TITLE)));
+    const found = await ctx.db
+      .select()
+      .from(books)
+      .where(and(eq(books.teacherId, demoMara.id), eq(books.title, DEMO_BOOK_TITLE)));
     expect(found).toHaveLength(1);
     expect(found[0]).toMatchObject({ published: true, priceMinor: 1200, currency: 'EUR' });
-    const drills = await ctx.db.select().from(bookDrills).where(eq(bookDrills.bookId, found[0].id)).orderBy(bookDrills.position);
+    const drills = await ctx.db
+      .select()
+      .from(bookDrills)
+      .where(eq(bookDrills.bookId, found[0].id))
+      .orderBy(bookDrills.position);
     expect(drills.map((d) => d.spec.pair.join('/'))).toEqual(['C/D', 'D/C', 'Bbm/Ab', 'G/Db', 'A/G']);
     expect(drills.map((d) => d.spec.chord)).toEqual(['Cmaj7#11', 'D7', 'Bbm7', 'G7', 'Em7']);
     expect(drills.filter((d) => d.free).map((d) => d.spec.pair.join('/'))).toEqual(['C/D']);
@@ -229,6 +298,10 @@ describe('the demo seed', () => {
     expect(drills[1].spec).toMatchObject({ pattern: 'four-three', tempo: 100 });
     expect(drills[2]).toMatchObject({ keyCycle: 'fourths' });
     const res = await request(ctx.app).get('/api/books').expect(200);
-    expect(res.body.books.filter((b: { title: string; teacher: { id: string } }) => b.title === DEMO_BOOK_TITLE && b.teacher.id === demoMara.id)).toHaveLength(1);
+    expect(
+      res.body.books.filter(
+        (b: { title: string; teacher: { id: string } }) => b.title === DEMO_BOOK_TITLE && b.teacher.id === demoMara.id,
+      ),
+    ).toHaveLength(1);
   });
 });

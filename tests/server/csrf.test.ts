@@ -19,7 +19,9 @@ describe('CSRF', () => {
   it('refuses a state-changing request with no token (403, code csrf)', async () => {
     const agent = request.agent(ctx.app);
     await agent.get('/api/auth/csrf');
-    const res = await agent.post('/api/auth/sign-up').send({ email: uniqueEmail(), password: TEST_PASSWORD, name: 'X', role: 'player' });
+    const res = await agent
+      .post('/api/auth/sign-up')
+      .send({ email: uniqueEmail(), password: TEST_PASSWORD, name: 'X', role: 'player' });
     expect(res.status).toBe(403);
     expect(res.body.error.code).toBe('csrf');
   });
@@ -28,9 +30,15 @@ describe('CSRF', () => {
     const user = await createUser(ctx.db);
     const mine = await client(ctx.app);
     const theirs = await client(ctx.app);
-    const wrong = await mine.agent.post('/api/auth/sign-in').set('X-CSRF-Token', 'x'.repeat(43)).send({ email: user.email, password: user.password });
+    const wrong = await mine.agent
+      .post('/api/auth/sign-in')
+      .set('X-CSRF-Token', 'x'.repeat(43))
+      .send({ email: user.email, password: user.password });
     expect(wrong.status).toBe(403);
-    const borrowed = await mine.agent.post('/api/auth/sign-in').set('X-CSRF-Token', theirs.csrf).send({ email: user.email, password: user.password });
+    const borrowed = await mine.agent
+      .post('/api/auth/sign-in')
+      .set('X-CSRF-Token', theirs.csrf)
+      .send({ email: user.email, password: user.password });
     expect(borrowed.status).toBe(403);
     expect(borrowed.body.error.code).toBe('csrf');
   });

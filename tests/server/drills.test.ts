@@ -8,9 +8,17 @@ import { createTestApp } from '../helpers/test-server';
 const ctx = createTestApp();
 afterAll(() => ctx.close());
 
-const preview = (spec: unknown) => request(ctx.app).get(`/api/drills/preview?spec=${encodeURIComponent(JSON.stringify(spec))}`);
+const preview = (spec: unknown) =>
+  request(ctx.app).get(`/api/drills/preview?spec=${encodeURIComponent(JSON.stringify(spec))}`);
 
-const SPEC: DrillSpec = { pair: ['D', 'C'], pattern: 'four-three', direction: 'up', instrument: 'alto-sax', tempo: 100, chord: 'D7' };
+const SPEC: DrillSpec = {
+  pair: ['D', 'C'],
+  pattern: 'four-three',
+  direction: 'up',
+  instrument: 'alto-sax',
+  tempo: 100,
+  chord: 'D7',
+};
 
 describe('GET /api/drills/preview', () => {
   it('returns the same drill the engine makes in the browser', async () => {
@@ -43,7 +51,11 @@ describe('GET /api/drills/preview', () => {
     [{ ...SPEC, range: { low: 80, high: 60 } }, 'range.low', /above/],
     [{ ...SPEC, direction: 'sideways' }, 'direction', /up, down or up-down/],
     [{ ...SPEC, chord: 'H7' }, 'chord', /chord symbol/],
-    [{ ...SPEC, pattern: { name: 'x', subdivision: 'triplet', source: 'triads', cells: [{ triad: 'c' }] } }, 'pattern', /./],
+    [
+      { ...SPEC, pattern: { name: 'x', subdivision: 'triplet', source: 'triads', cells: [{ triad: 'c' }] } },
+      'pattern',
+      /./,
+    ],
   ])('answers a bad field with a 400 naming it (%#)', async (spec, field, message) => {
     const res = await preview(spec);
     expect(res.status).toBe(400);
@@ -97,7 +109,11 @@ describe('saved drills and custom patterns', () => {
     player = await createUser(ctx.db, { role: 'player', name: 'Ines Test' });
     stranger = await createUser(ctx.db, { role: 'player', name: 'Other Test' });
     await createStudio(ctx.db, teacher.id, [player.id]);
-    [asTeacher, asPlayer, asStranger] = await Promise.all([signedIn(ctx.app, teacher), signedIn(ctx.app, player), signedIn(ctx.app, stranger)]);
+    [asTeacher, asPlayer, asStranger] = await Promise.all([
+      signedIn(ctx.app, teacher),
+      signedIn(ctx.app, player),
+      signedIn(ctx.app, stranger),
+    ]);
   });
 
   it('asks a visitor to sign in', async () => {
@@ -109,7 +125,13 @@ describe('saved drills and custom patterns', () => {
     const created = await asPlayer.post('/api/drills', { name: 'D7 four-three', spec: SPEC, keyOrder: 'fourths' });
     expect(created.status).toBe(201);
     const drill = created.body.drill;
-    expect(drill).toMatchObject({ name: 'D7 four-three', spec: SPEC, keyOrder: 'fourths', mine: true, owner: { id: player.id, name: 'Ines Test' } });
+    expect(drill).toMatchObject({
+      name: 'D7 four-three',
+      spec: SPEC,
+      keyOrder: 'fourths',
+      mine: true,
+      owner: { id: player.id, name: 'Ines Test' },
+    });
 
     const got = await asPlayer.get(`/api/drills/${drill.id}`);
     expect(got.status).toBe(200);
@@ -122,7 +144,9 @@ describe('saved drills and custom patterns', () => {
     const list = await asPlayer.get('/api/drills');
     expect(list.body.drills.map((d: { id: string }) => d.id)).toContain(drill.id);
 
-    expect((await asPlayer.agent.delete(`/api/drills/${drill.id}`).set('X-CSRF-Token', asPlayer.csrf)).status).toBe(204);
+    expect((await asPlayer.agent.delete(`/api/drills/${drill.id}`).set('X-CSRF-Token', asPlayer.csrf)).status).toBe(
+      204,
+    );
     expect((await asPlayer.get(`/api/drills/${drill.id}`)).status).toBe(404);
   });
 
@@ -139,7 +163,9 @@ describe('saved drills and custom patterns', () => {
     const mine = (await asPlayer.post('/api/drills', { name: 'Private', spec: SPEC })).body.drill;
     expect((await asStranger.get(`/api/drills/${mine.id}`)).status).toBe(404);
     expect((await asStranger.patch(`/api/drills/${mine.id}`, { name: 'Taken' })).status).toBe(404);
-    expect((await asStranger.agent.delete(`/api/drills/${mine.id}`).set('X-CSRF-Token', asStranger.csrf)).status).toBe(404);
+    expect((await asStranger.agent.delete(`/api/drills/${mine.id}`).set('X-CSRF-Token', asStranger.csrf)).status).toBe(
+      404,
+    );
     const list = await asStranger.get('/api/drills');
     expect(list.body.drills.map((d: { id: string }) => d.id)).not.toContain(mine.id);
     // The teacher of the player's studio does not see it either: only teachers' drills are shared.
@@ -148,17 +174,28 @@ describe('saved drills and custom patterns', () => {
   });
 
   it("shows a teacher's saved drill to the studio's players, read-only", async () => {
-    const set = (await asTeacher.post('/api/drills', { name: 'Tuesday: D/C over D7', spec: SPEC, keyOrder: 'fifths' })).body.drill;
+    const set = (await asTeacher.post('/api/drills', { name: 'Tuesday: D/C over D7', spec: SPEC, keyOrder: 'fifths' }))
+      .body.drill;
     const list = await asPlayer.get('/api/drills');
     const seen = list.body.drills.find((d: { id: string }) => d.id === set.id);
-    expect(seen).toMatchObject({ name: 'Tuesday: D/C over D7', mine: false, owner: { id: teacher.id, name: 'Mara Test', role: 'teacher' } });
+    expect(seen).toMatchObject({
+      name: 'Tuesday: D/C over D7',
+      mine: false,
+      owner: { id: teacher.id, name: 'Mara Test', role: 'teacher' },
+    });
     expect((await asPlayer.get(`/api/drills/${set.id}`)).status).toBe(200);
     expect((await asPlayer.patch(`/api/drills/${set.id}`, { name: 'Mine now' })).status).toBe(404);
     expect((await asStranger.get(`/api/drills/${set.id}`)).status).toBe(404);
   });
 
   it('keeps custom patterns the same way', async () => {
-    const def: PatternDef = { name: 'Wide steps', subdivision: 'eighth', source: 'scale', degrees: [0, 2, 4, 1], step: 1 };
+    const def: PatternDef = {
+      name: 'Wide steps',
+      subdivision: 'eighth',
+      source: 'scale',
+      degrees: [0, 2, 4, 1],
+      step: 1,
+    };
     const created = await asTeacher.post('/api/patterns', { name: 'Wide steps', def });
     expect(created.status).toBe(201);
     const id = created.body.pattern.id;

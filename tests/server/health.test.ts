@@ -42,7 +42,9 @@ describe('GET /api/health', () => {
 
 describe('environment', () => {
   it('names each bad variable', () => {
-    expect(() => parseEnv({ NODE_ENV: 'staging', PORT: 'abc', DATABASE_URL: 'mysql://x' })).toThrow(/NODE_ENV[\s\S]*PORT[\s\S]*DATABASE_URL/);
+    expect(() => parseEnv({ NODE_ENV: 'staging', PORT: 'abc', DATABASE_URL: 'mysql://x' })).toThrow(
+      /NODE_ENV[\s\S]*PORT[\s\S]*DATABASE_URL/,
+    );
   });
 
   it('asks for a session secret in production', () => {

@@ -16,12 +16,26 @@ let p: Client;
 const ids: Record<string, string> = {};
 
 /** A take of the pair at a tempo, with the first `missing` notes left out. */
-async function take(name: string, pair: [string, string], tempo: number, day: string, missing: number, playerId = player.id) {
+async function take(
+  name: string,
+  pair: [string, string],
+  tempo: number,
+  day: string,
+  missing: number,
+  playerId = player.id,
+) {
   const spec: DrillSpec = { pair, pattern: 'four-three', direction: 'up', tempo, instrument: 'piano' };
   const drill = generateDrill(spec);
   const ms = 60000 / tempo;
   const played = drill.notes.slice(missing).map((n) => ({ midi: n.midi, timeMs: n.beat * ms }));
-  const { take: row } = await createTake(ctx.db, { playerId, id: randomUUID(), spec, played, options: { tempo, mode: 'timed' }, startedAt: new Date(`${day}T20:00:00Z`) });
+  const { take: row } = await createTake(ctx.db, {
+    playerId,
+    id: randomUUID(),
+    spec,
+    played,
+    options: { tempo, mode: 'timed' },
+    startedAt: new Date(`${day}T20:00:00Z`),
+  });
   ids[name] = row.id;
 }
 
@@ -40,23 +54,48 @@ beforeAll(async () => {
   p = await signedIn(ctx.app, player);
 });
 
-const names = (body: { takes: Array<{ id: string }> }) => body.takes.map((t) => Object.keys(ids).find((k) => ids[k] === t.id));
+const names = (body: { takes: Array<{ id: string }> }) =>
+  body.takes.map((t) => Object.keys(ids).find((k) => ids[k] === t.id));
 
 describe('GET /api/takes', () => {
   it('lists the player’s own takes, newest first, with the summary columns', async () => {
     const res = await p.get('/api/takes').expect(200);
     expect(names(res.body)).toEqual(['c1', 'd2', 'e1', 'b1', 'd1']);
     expect(res.body).toMatchObject({ total: 5, page: 1, pageSize: 25 });
-    expect(res.body.takes[4]).toMatchObject({ pair: 'D/C', pattern: 'four-three', key: 'D', instrument: 'piano', tempo: 100, accuracy: 1, meanOffsetMs: 0, stopped: false, measures: null });
+    expect(res.body.takes[4]).toMatchObject({
+      pair: 'D/C',
+      pattern: 'four-three',
+      key: 'D',
+      instrument: 'piano',
+      tempo: 100,
+      accuracy: 1,
+      meanOffsetMs: 0,
+      stopped: false,
+      measures: null,
+    });
     expect(res.body.takes[4].startedAt).toBe('2026-02-01T20:00:00.000Z');
   });
 
   it('sorts by accuracy, tempo and key (in C Db D ... B order) either way', async () => {
-    expect(names((await p.get('/api/takes?sort=tempo&dir=asc').expect(200)).body)).toEqual(['b1', 'c1', 'd1', 'd2', 'e1']);
-    const acc = (await p.get('/api/takes?sort=accuracy&dir=desc').expect(200)).body.takes.map((t: { accuracy: number }) => t.accuracy);
+    expect(names((await p.get('/api/takes?sort=tempo&dir=asc').expect(200)).body)).toEqual([
+      'b1',
+      'c1',
+      'd1',
+      'd2',
+      'e1',
+    ]);
+    const acc = (await p.get('/api/takes?sort=accuracy&dir=desc').expect(200)).body.takes.map(
+      (t: { accuracy: number }) => t.accuracy,
+    );
     expect(acc).toEqual([...acc].sort((a, b) => b - a));
     expect(acc[0]).toBe(1);
-    expect(names((await p.get('/api/takes?sort=key&dir=asc').expect(200)).body)).toEqual(['c1', 'd2', 'd1', 'e1', 'b1']);
+    expect(names((await p.get('/api/takes?sort=key&dir=asc').expect(200)).body)).toEqual([
+      'c1',
+      'd2',
+      'd1',
+      'e1',
+      'b1',
+    ]);
   });
 
   it('filters by key, pattern, pair, instrument and days', async () => {

@@ -9,7 +9,14 @@ const ctx = createTestApp();
 afterAll(() => ctx.close());
 
 // B/A four-three in B3..D5 at 120: B3 D#4 F#4 B4 | A4 E4 C#4, eighth notes.
-const SPEC: DrillSpec = { pair: ['B', 'A'], pattern: 'four-three', direction: 'up', range: { low: 59, high: 74 }, tempo: 120, instrument: 'piano' };
+const SPEC: DrillSpec = {
+  pair: ['B', 'A'],
+  pattern: 'four-three',
+  direction: 'up',
+  range: { low: 59, high: 74 },
+  tempo: 120,
+  instrument: 'piano',
+};
 const PITCHES = [59, 63, 66, 71, 69, 64, 61];
 
 /** The drill as another program would write it (midi-writer-js), after a rest of `restTicks` (128 a beat). */
@@ -18,7 +25,9 @@ function writtenElsewhere(restTicks = 0, pitches = PITCHES): Buffer {
   track.setTempo(120);
   track.addTrackName('Piano');
   pitches.forEach((pitch, i) => {
-    track.addEvent(new MidiWriter.NoteEvent({ pitch: [pitch], duration: '8', startTick: restTicks + i * 64, velocity: 80 }));
+    track.addEvent(
+      new MidiWriter.NoteEvent({ pitch: [pitch], duration: '8', startTick: restTicks + i * 64, velocity: 80 }),
+    );
   });
   return Buffer.from(new MidiWriter.Writer(track).buildFile());
 }
@@ -32,12 +41,17 @@ beforeAll(async () => {
 });
 
 const upload = (file: Buffer, name: string, fields: Record<string, string> = {}) => {
-  const req = p.agent.post('/api/takes/import').set('X-CSRF-Token', p.csrf).attach('file', file, name).field('spec', JSON.stringify(SPEC));
+  const req = p.agent
+    .post('/api/takes/import')
+    .set('X-CSRF-Token', p.csrf)
+    .attach('file', file, name)
+    .field('spec', JSON.stringify(SPEC));
   for (const [k, v] of Object.entries(fields)) req.field(k, v);
   return req;
 };
 
-const stored = async () => (await ctx.pool.query('SELECT count(*)::int AS n FROM takes WHERE player_id = $1', [player.id])).rows[0].n as number;
+const stored = async () =>
+  (await ctx.pool.query('SELECT count(*)::int AS n FROM takes WHERE player_id = $1', [player.id])).rows[0].n as number;
 
 describe('POST /api/takes/import', () => {
   it('scores a file written by another program, its first note on the first downbeat', async () => {
@@ -46,7 +60,9 @@ describe('POST /api/takes/import', () => {
     expect(res.body.take).toMatchObject({ playerId: player.id, key: 'B', pattern: 'four-three', accuracy: 1 });
     expect(res.body.take.played.map((n: { midi: number }) => n.midi)).toEqual(PITCHES);
     expect(res.body.take.played[0].timeMs).toBe(0);
-    const notes = await ctx.pool.query('SELECT count(*)::int AS n FROM take_notes WHERE take_id = $1', [res.body.take.id]);
+    const notes = await ctx.pool.query('SELECT count(*)::int AS n FROM take_notes WHERE take_id = $1', [
+      res.body.take.id,
+    ]);
     expect(notes.rows[0].n).toBe(7);
   });
 
@@ -76,7 +92,10 @@ describe('POST /api/takes/import', () => {
     const cutTrack = await upload(writtenElsewhere().subarray(0, 40), 'cut-track.mid').expect(400);
     expect(cutTrack.body.error.message).toMatch(/cut short/);
 
-    const text = await upload(Buffer.from('These are my notes for Tuesday: B D# F# B, then A E C#.\n'), 'notes.mid').expect(400);
+    const text = await upload(
+      Buffer.from('These are my notes for Tuesday: B D# F# B, then A E C#.\n'),
+      'notes.mid',
+    ).expect(400);
     expect(text.body.error.message).toMatch(/not a Standard MIDI File/);
 
     const silent = new MidiWriter.Track();
@@ -111,16 +130,34 @@ describe('POST /api/takes/import', () => {
   });
 
   it('asks for the file and a valid spec', async () => {
-    const noFile = await p.agent.post('/api/takes/import').set('X-CSRF-Token', p.csrf).field('spec', JSON.stringify(SPEC)).expect(400);
+    const noFile = await p.agent
+      .post('/api/takes/import')
+      .set('X-CSRF-Token', p.csrf)
+      .field('spec', JSON.stringify(SPEC))
+      .expect(400);
     expect(noFile.body.error.fields).toHaveProperty('file');
-    const badSpec = await p.agent.post('/api/takes/import').set('X-CSRF-Token', p.csrf).attach('file', writtenElsewhere(), 'a.mid').field('spec', '{"pair":["B"]}').expect(400);
+    const badSpec = await p.agent
+      .post('/api/takes/import')
+      .set('X-CSRF-Token', p.csrf)
+      .attach('file', writtenElsewhere(), 'a.mid')
+      .field('spec', '{"pair":["B"]}')
+      .expect(400);
     expect(Object.keys(badSpec.body.error.fields).some((k) => k.startsWith('spec'))).toBe(true);
   });
 
   it('is for players, with the CSRF token', async () => {
-    await p.agent.post('/api/takes/import').attach('file', writtenElsewhere(), 'a.mid').field('spec', JSON.stringify(SPEC)).expect(403);
+    await p.agent
+      .post('/api/takes/import')
+      .attach('file', writtenElsewhere(), 'a.mid')
+      .field('spec', JSON.stringify(SPEC))
+      .expect(403);
     const teacher = await createUser(ctx.db, { role: 'teacher' });
     const t = await signedIn(ctx.app, teacher);
-    await t.agent.post('/api/takes/import').set('X-CSRF-Token', t.csrf).attach('file', writtenElsewhere(), 'a.mid').field('spec', JSON.stringify(SPEC)).expect(403);
+    await t.agent
+      .post('/api/takes/import')
+      .set('X-CSRF-Token', t.csrf)
+      .attach('file', writtenElsewhere(), 'a.mid')
+      .field('spec', JSON.stringify(SPEC))
+      .expect(403);
   });
 });

@@ -25,8 +25,22 @@ import { createTestApp } from '../helpers/test-server';
 const ctx = createTestApp();
 afterAll(() => ctx.close());
 
-const WEAVE: DrillSpec = { pair: ['F', 'Eb'], pattern: 'weave', direction: 'up', range: { low: 65, high: 77 }, tempo: 120, instrument: 'piano' };
-const FOUR_THREE: DrillSpec = { pair: ['B', 'A'], pattern: 'four-three', direction: 'up', range: { low: 59, high: 74 }, tempo: 120, instrument: 'piano' };
+const WEAVE: DrillSpec = {
+  pair: ['F', 'Eb'],
+  pattern: 'weave',
+  direction: 'up',
+  range: { low: 65, high: 77 },
+  tempo: 120,
+  instrument: 'piano',
+};
+const FOUR_THREE: DrillSpec = {
+  pair: ['B', 'A'],
+  pattern: 'four-three',
+  direction: 'up',
+  range: { low: 59, high: 74 },
+  tempo: 120,
+  instrument: 'piano',
+};
 const WEAVE_NOTES = [65, 69, 72, 75, 70, 67, 69, 72, 77].map((midi, i) => ({ midi, timeMs: (i * 500) / 3 }));
 const FOUR_THREE_NOTES = [59, 63, 66, 71, 69, 64, 61].map((midi, i) => ({ midi, timeMs: i * 250 }));
 const options = { tempo: 120, mode: 'timed' as const };
@@ -38,7 +52,15 @@ let outsider: TestUser;
 let p: Client;
 
 async function take(playerId: string, spec: DrillSpec, played: PlayedNote[], day: string, stoppedAtMs?: number) {
-  const { take: row } = await createTake(ctx.db, { playerId, id: randomUUID(), spec, played, options, startedAt: new Date(`${day}T10:00:00Z`), stoppedAtMs });
+  const { take: row } = await createTake(ctx.db, {
+    playerId,
+    id: randomUUID(),
+    spec,
+    played,
+    options,
+    startedAt: new Date(`${day}T10:00:00Z`),
+    stoppedAtMs,
+  });
   return row;
 }
 
@@ -48,14 +70,25 @@ beforeAll(async () => {
   teacher = await createUser(ctx.db, { role: 'teacher' });
   outsider = await createUser(ctx.db, { role: 'teacher' });
   await createStudio(ctx.db, teacher.id, [player.id]);
-  await take(player.id, WEAVE, WEAVE_NOTES.filter((_, i) => i !== 1 && i !== 4), '2026-03-02');
+  await take(
+    player.id,
+    WEAVE,
+    WEAVE_NOTES.filter((_, i) => i !== 1 && i !== 4),
+    '2026-03-02',
+  );
   await take(
     player.id,
     FOUR_THREE,
     FOUR_THREE_NOTES.map((n, i) => (i === 0 ? { ...n, midi: 60 } : i === 6 ? { ...n, timeMs: n.timeMs - 100 } : n)),
     '2026-03-03',
   );
-  await take(player.id, WEAVE, WEAVE_NOTES.filter((_, i) => i !== 2), '2026-03-10', 1000);
+  await take(
+    player.id,
+    WEAVE,
+    WEAVE_NOTES.filter((_, i) => i !== 2),
+    '2026-03-10',
+    1000,
+  );
   // Someone else's take, which must never show in the player's maps.
   await take(other.id, WEAVE, [], '2026-03-02');
   p = await signedIn(ctx.app, player);
@@ -73,10 +106,18 @@ describe('GET /api/maps/keys', () => {
   });
 
   it('filters by pattern, pair, instrument and days', async () => {
-    expect((await p.get('/api/maps/keys?pattern=four-three').expect(200)).body.cells).toEqual([{ key: 'B', pattern: 'four-three', ...cell(7, 2) }]);
-    expect((await p.get('/api/maps/keys?pair=F/Eb').expect(200)).body.cells).toEqual([{ key: 'F', pattern: 'weave', ...cell(16, 3) }]);
-    expect((await p.get('/api/maps/keys?from=2026-03-05').expect(200)).body.cells).toEqual([{ key: 'F', pattern: 'weave', ...cell(7, 1) }]);
-    expect((await p.get('/api/maps/keys?from=2026-03-02&to=2026-03-02').expect(200)).body.cells).toEqual([{ key: 'F', pattern: 'weave', ...cell(9, 2) }]);
+    expect((await p.get('/api/maps/keys?pattern=four-three').expect(200)).body.cells).toEqual([
+      { key: 'B', pattern: 'four-three', ...cell(7, 2) },
+    ]);
+    expect((await p.get('/api/maps/keys?pair=F/Eb').expect(200)).body.cells).toEqual([
+      { key: 'F', pattern: 'weave', ...cell(16, 3) },
+    ]);
+    expect((await p.get('/api/maps/keys?from=2026-03-05').expect(200)).body.cells).toEqual([
+      { key: 'F', pattern: 'weave', ...cell(7, 1) },
+    ]);
+    expect((await p.get('/api/maps/keys?from=2026-03-02&to=2026-03-02').expect(200)).body.cells).toEqual([
+      { key: 'F', pattern: 'weave', ...cell(9, 2) },
+    ]);
     expect((await p.get('/api/maps/keys?instrument=flute').expect(200)).body.cells).toEqual([]);
   });
 
@@ -132,9 +173,13 @@ describe('GET /api/maps/beats', () => {
 describe('deleting a take', () => {
   it('takes its notes out of every map', async () => {
     const extra = await take(player.id, FOUR_THREE, [], '2026-03-11');
-    expect((await p.get('/api/maps/keys?pattern=four-three').expect(200)).body.cells).toEqual([{ key: 'B', pattern: 'four-three', ...cell(14, 9) }]);
+    expect((await p.get('/api/maps/keys?pattern=four-three').expect(200)).body.cells).toEqual([
+      { key: 'B', pattern: 'four-three', ...cell(14, 9) },
+    ]);
     await p.agent.delete(`/api/takes/${extra.id}`).set('X-CSRF-Token', p.csrf).expect(204);
-    expect((await p.get('/api/maps/keys?pattern=four-three').expect(200)).body.cells).toEqual([{ key: 'B', pattern: 'four-three', ...cell(7, 2) }]);
+    expect((await p.get('/api/maps/keys?pattern=four-three').expect(200)).body.cells).toEqual([
+      { key: 'B', pattern: 'four-three', ...cell(7, 2) },
+    ]);
     expect((await p.get('/api/maps/range?from=2026-03-11').expect(200)).body.cells).toEqual([]);
     expect((await p.get('/api/maps/beats?from=2026-03-11').expect(200)).body.cells).toEqual([]);
   });
@@ -156,7 +201,9 @@ describe('who may read a map', () => {
     const x = await signedIn(ctx.app, outsider);
     await x.get(`/api/maps/beats?player=${player.id}`).expect(404);
     // The other player's own map holds only their own take.
-    expect((await o.get('/api/maps/keys').expect(200)).body.cells).toEqual([{ key: 'F', pattern: 'weave', ...cell(9, 9) }]);
+    expect((await o.get('/api/maps/keys').expect(200)).body.cells).toEqual([
+      { key: 'F', pattern: 'weave', ...cell(9, 9) },
+    ]);
   });
 
   it('is for signed-in users only', async () => {
@@ -168,7 +215,11 @@ describe('who may read a map', () => {
 describe('charts', () => {
   it('gives accuracy and tempo per day and key, and practice minutes per day in the asked time zone', async () => {
     const tl = await p.get('/api/maps/timeline?tz=UTC').expect(200);
-    expect(tl.body.points.map((x: { day: string; key: string }) => `${x.day} ${x.key}`)).toEqual(['2026-03-02 F', '2026-03-03 B', '2026-03-10 F']);
+    expect(tl.body.points.map((x: { day: string; key: string }) => `${x.day} ${x.key}`)).toEqual([
+      '2026-03-02 F',
+      '2026-03-03 B',
+      '2026-03-10 F',
+    ]);
     expect(tl.body.points[0].accuracy).toBeCloseTo(7 / 9);
     // 10:00 UTC on the 2nd is still the 2nd in Honolulu (UTC-10 -> 00:00); in Kiritimati (UTC+14) the 3rd.
     const cal = await p.get('/api/maps/calendar?tz=Pacific/Kiritimati').expect(200);

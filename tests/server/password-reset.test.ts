@@ -63,7 +63,9 @@ describe('password reset by e-mail', () => {
     expect((await old.get('/api/auth/me')).status).toBe(401);
     const fresh = await client(ctx.app);
     expect((await fresh.post('/api/auth/sign-in', { email: user.email, password: user.password })).status).toBe(401);
-    expect((await fresh.post('/api/auth/sign-in', { email: user.email, password: 'harbour-lane-new' })).status).toBe(200);
+    expect((await fresh.post('/api/auth/sign-in', { email: user.email, password: 'harbour-lane-new' })).status).toBe(
+      200,
+    );
   });
 
   it('refuses an expired link', async () => {
@@ -71,8 +73,14 @@ describe('password reset by e-mail', () => {
     const c = await client(ctx.app);
     await c.post('/api/auth/password-reset', { email: user.email }).expect(200);
     const [mail] = await waitForMail(admin, user.email);
-    await ctx.db.update(passwordResets).set({ expiresAt: new Date(Date.now() - 1000) }).where(eq(passwordResets.userId, user.id));
-    const res = await c.post('/api/auth/password-reset/confirm', { token: tokenFrom(mail.text), password: 'too-late-for-this' });
+    await ctx.db
+      .update(passwordResets)
+      .set({ expiresAt: new Date(Date.now() - 1000) })
+      .where(eq(passwordResets.userId, user.id));
+    const res = await c.post('/api/auth/password-reset/confirm', {
+      token: tokenFrom(mail.text),
+      password: 'too-late-for-this',
+    });
     expect(res.status).toBe(400);
     expect(res.body.error.fields.token).toBeDefined();
   });
@@ -90,7 +98,10 @@ describe('password reset by e-mail', () => {
 
   it('refuses a made-up token and names bad fields', async () => {
     const c = await client(ctx.app);
-    const made = await c.post('/api/auth/password-reset/confirm', { token: 'x'.repeat(43), password: 'whatever-new-one' });
+    const made = await c.post('/api/auth/password-reset/confirm', {
+      token: 'x'.repeat(43),
+      password: 'whatever-new-one',
+    });
     expect(made.status).toBe(400);
     expect(made.body.error.fields.token).toBeDefined();
     const bad = await c.post('/api/auth/password-reset/confirm', { password: 'x' });

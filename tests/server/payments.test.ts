@@ -48,21 +48,26 @@ async function press(sessionId: string, button: 'complete' | 'cancel') {
 }
 
 const canOpenLocked = async (c: Client) => (await c.get(`/api/books/${bookId}/drills/${lockedDrillId}`)).status;
-const purchaseOf = async (sessionId: string) => (await server.db.select().from(purchases).where(eq(purchases.sessionId, sessionId)))[0];
+const purchaseOf = async (sessionId: string) =>
+  (await server.db.select().from(purchases).where(eq(purchases.sessionId, sessionId)))[0];
 const eventCount = async () => (await server.db.select({ n: count() }).from(paymentEvents))[0].n;
 
 beforeAll(async () => {
   const mara = await createUser(server.db, { role: 'teacher', name: 'Mara Quill' });
   teacher = await signedIn(server.app, mara);
   admin = await signedIn(server.app, await createUser(server.db, { role: 'admin', name: 'Desk' }));
-  const book = await teacher.post('/api/books', { title: 'Pairs for the Tuesday combo', priceMinor: 1200, currency: 'EUR' }).expect(201);
+  const book = await teacher
+    .post('/api/books', { title: 'Pairs for the Tuesday combo', priceMinor: 1200, currency: 'EUR' })
+    .expect(201);
   bookId = book.body.book.id;
   for (const [name, spec] of [
     ['Starter', CD],
     ['Four-three', DC],
   ] as const) {
     const saved = await teacher.post('/api/drills', { name, spec, keyOrder: 'chromatic' }).expect(201);
-    await teacher.post(`/api/books/${bookId}/drills`, { savedDrillId: saved.body.drill.id, note: 'Slow first.' }).expect(201);
+    await teacher
+      .post(`/api/books/${bookId}/drills`, { savedDrillId: saved.body.drill.id, note: 'Slow first.' })
+      .expect(201);
   }
   const published = await teacher.patch(`/api/books/${bookId}`, { published: true }).expect(200);
   freeDrillId = published.body.book.drills[0].id;
@@ -86,7 +91,13 @@ describe('buying a book through the checkout fake', () => {
     expect(back).toBe(`/books/${bookId}?checkout=done`);
     expect(await canOpenLocked(c)).toBe(200);
     const drill = await c.get(`/api/books/${bookId}/drills/${lockedDrillId}`).expect(200);
-    expect(drill.body.drill).toMatchObject({ id: lockedDrillId, title: 'Four-three', note: 'Slow first.', spec: DC, keyCycle: 'chromatic' });
+    expect(drill.body.drill).toMatchObject({
+      id: lockedDrillId,
+      title: 'Four-three',
+      note: 'Slow first.',
+      spec: DC,
+      keyCycle: 'chromatic',
+    });
     const bought = await c.get(`/api/books/${bookId}`).expect(200);
     expect(bought.body.book.access).toBe('bought');
     const paid = await purchaseOf(sessionId);
@@ -102,7 +113,11 @@ describe('buying a book through the checkout fake', () => {
     const before = await eventCount();
     expect(await fake.resend(sessionId)).toBe(200);
     const event = fake.lastEvent(sessionId)!;
-    const again = await request(server.app).post('/api/payments/webhook').set('Content-Type', 'application/json').set('Stripe-Signature', event.signature).send(event.payload);
+    const again = await request(server.app)
+      .post('/api/payments/webhook')
+      .set('Content-Type', 'application/json')
+      .set('Stripe-Signature', event.signature)
+      .send(event.payload);
     expect(again.status).toBe(200);
     expect(again.body.granted).toBe(false);
     expect(await eventCount()).toBe(before);
@@ -118,7 +133,9 @@ describe('buying a book through the checkout fake', () => {
   it('refuses a forged webhook (bad signature) with 400 and changes nothing', async () => {
     const { c } = await newPlayer();
     const { sessionId } = await checkout(c);
-    const session = (await fetch(`${fake.url}/v1/checkout/sessions/${sessionId}`, { headers: { Authorization: `Bearer ${server.env.STRIPE_SECRET_KEY}` } }).then((r) => r.json())) as Record<string, unknown>;
+    const session = (await fetch(`${fake.url}/v1/checkout/sessions/${sessionId}`, {
+      headers: { Authorization: `Bearer ${server.env.STRIPE_SECRET_KEY}` },
+    }).then((r) => r.json())) as Record<string, unknown>;
     const payload = JSON.stringify({
       id: 'evt_forged_1',
       object: 'event',
@@ -130,13 +147,20 @@ describe('buying a book through the checkout fake', () => {
       const r = request(server.app).post('/api/payments/webhook').set('Content-Type', 'application/json');
       return (signature === null ? r : r.set('Stripe-Signature', signature)).send(body);
     };
-    for (const signature of [signPayload(payload, 'whsec_someone_else'), null, 't=1,v1=deadbeef', signPayload('{"id":"other"}', server.env.STRIPE_WEBHOOK_SECRET)]) {
+    for (const signature of [
+      signPayload(payload, 'whsec_someone_else'),
+      null,
+      't=1,v1=deadbeef',
+      signPayload('{"id":"other"}', server.env.STRIPE_WEBHOOK_SECRET),
+    ]) {
       const res = await post(signature);
       expect(res.status).toBe(400);
       expect(res.body.error.message).toMatch(/signature/);
     }
     // A real signature that is too old is refused as well (replay).
-    const old = await post(signPayload(payload, server.env.STRIPE_WEBHOOK_SECRET, Math.floor(Date.now() / 1000) - 3600));
+    const old = await post(
+      signPayload(payload, server.env.STRIPE_WEBHOOK_SECRET, Math.floor(Date.now() / 1000) - 3600),
+    );
     expect(old.status).toBe(400);
     expect(await eventCount()).toBe(before);
     expect((await purchaseOf(sessionId)).status).toBe('pending');
@@ -150,9 +174,23 @@ describe('buying a book through the checkout fake', () => {
       id: 'evt_cheap_1',
       object: 'event',
       type: 'checkout.session.completed',
-      data: { object: { id: sessionId, object: 'checkout.session', amount_total: 1, currency: 'eur', payment_status: 'paid', payment_intent: 'pi_x', metadata: {} } },
+      data: {
+        object: {
+          id: sessionId,
+          object: 'checkout.session',
+          amount_total: 1,
+          currency: 'eur',
+          payment_status: 'paid',
+          payment_intent: 'pi_x',
+          metadata: {},
+        },
+      },
     });
-    const res = await request(server.app).post('/api/payments/webhook').set('Content-Type', 'application/json').set('Stripe-Signature', signPayload(payload, server.env.STRIPE_WEBHOOK_SECRET)).send(payload);
+    const res = await request(server.app)
+      .post('/api/payments/webhook')
+      .set('Content-Type', 'application/json')
+      .set('Stripe-Signature', signPayload(payload, server.env.STRIPE_WEBHOOK_SECRET))
+      .send(payload);
     expect(res.status).toBe(200);
     expect(res.body.granted).toBe(false);
     expect(await canOpenLocked(c)).toBe(404);
@@ -179,7 +217,10 @@ describe('buying a book through the checkout fake', () => {
     expect((await c.post(`/api/admin/purchases/${purchase.id}/refund`)).status).toBe(403);
     expect((await teacher.post(`/api/admin/purchases/${purchase.id}/refund`)).status).toBe(403);
     const list = await admin.get('/api/admin/purchases').expect(200);
-    expect(list.body.purchases.find((p: { id: string }) => p.id === purchase.id)).toMatchObject({ status: 'paid', player: { email: user.email } });
+    expect(list.body.purchases.find((p: { id: string }) => p.id === purchase.id)).toMatchObject({
+      status: 'paid',
+      player: { email: user.email },
+    });
 
     const res = await admin.post(`/api/admin/purchases/${purchase.id}/refund`).expect(200);
     expect(res.body.purchase).toMatchObject({ id: purchase.id, status: 'refunded' });
@@ -192,7 +233,12 @@ describe('buying a book through the checkout fake', () => {
     expect(entry).toMatchObject({ action: 'purchase.refund' });
     expect(entry.detail).toMatchObject({ purchaseId: purchase.id, bookId, amount: '12.00 EUR' });
     const audit = await admin.get('/api/admin/audit').expect(200);
-    expect(audit.body.entries.some((e: { action: string; target: { id: string } | null }) => e.action === 'purchase.refund' && e.target?.id === user.id)).toBe(true);
+    expect(
+      audit.body.entries.some(
+        (e: { action: string; target: { id: string } | null }) =>
+          e.action === 'purchase.refund' && e.target?.id === user.id,
+      ),
+    ).toBe(true);
 
     expect((await admin.post(`/api/admin/purchases/${purchase.id}/refund`)).status).toBe(409);
     // A refunded player may buy again.

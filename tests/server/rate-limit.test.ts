@@ -18,14 +18,16 @@ async function clientFrom(ip: string) {
   const agent = request.agent(ctx.app);
   const res = await agent.get('/api/auth/csrf').set('X-Forwarded-For', ip);
   const token = res.body.token as string;
-  return (body: object) => agent.post('/api/auth/sign-in').set('X-Forwarded-For', ip).set('X-CSRF-Token', token).send(body);
+  return (body: object) =>
+    agent.post('/api/auth/sign-in').set('X-Forwarded-For', ip).set('X-CSRF-Token', token).send(body);
 }
 
 describe('sign-in failures', () => {
   it('answers 429 after 5 failures for one address within a minute, even with the right password', async () => {
     const user = await createUser(ctx.db);
     const signIn = await clientFrom(uniqueIp());
-    for (let i = 0; i < 5; i++) expect((await signIn({ email: user.email, password: `wrong-${i}-password` })).status).toBe(401);
+    for (let i = 0; i < 5; i++)
+      expect((await signIn({ email: user.email, password: `wrong-${i}-password` })).status).toBe(401);
     const sixth = await signIn({ email: user.email, password: 'wrong-again-password' });
     expect(sixth.status).toBe(429);
     expect(sixth.body.error.code).toBe('rate_limited');
@@ -39,7 +41,8 @@ describe('sign-in failures', () => {
   it('answers 429 after 5 failures from one IP across addresses; other IPs are unaffected', async () => {
     const ip = uniqueIp();
     const signIn = await clientFrom(ip);
-    for (let i = 0; i < 5; i++) expect((await signIn({ email: uniqueEmail('probe'), password: 'guess-guess-guess' })).status).toBe(401);
+    for (let i = 0; i < 5; i++)
+      expect((await signIn({ email: uniqueEmail('probe'), password: 'guess-guess-guess' })).status).toBe(401);
     const user = await createUser(ctx.db);
     expect((await signIn({ email: user.email, password: user.password })).status).toBe(429);
     const other = await clientFrom(uniqueIp());
@@ -62,7 +65,9 @@ describe('sign-in failures', () => {
     const signIn = await clientFrom(uniqueIp());
     for (let i = 0; i < 4; i++) await signIn({ email: user.email, password: 'wrong-wrong-wrong' });
     expect((await signIn({ email: user.email, password: user.password })).status).toBe(200);
-    const { rows } = await ctx.pool.query('SELECT count(*)::int AS n FROM sign_in_failures WHERE email = $1', [user.email]);
+    const { rows } = await ctx.pool.query('SELECT count(*)::int AS n FROM sign_in_failures WHERE email = $1', [
+      user.email,
+    ]);
     expect(rows[0].n).toBe(0);
   });
 });

@@ -25,7 +25,10 @@ describe('demo seed', () => {
     );
     const mara = rows.find((r) => r.email === 'teacher@sixfold.test')!;
     // Other tests may make studios of the same name; the demo one is Mara's.
-    const found = await ctx.db.select().from(studios).where(and(eq(studios.name, DEMO_STUDIO), eq(studios.teacherId, mara.id)));
+    const found = await ctx.db
+      .select()
+      .from(studios)
+      .where(and(eq(studios.name, DEMO_STUDIO), eq(studios.teacherId, mara.id)));
     expect(found).toHaveLength(1);
     const members = await ctx.db.select().from(studioMembers).where(eq(studioMembers.studioId, found[0].id));
     expect(members).toHaveLength(3);

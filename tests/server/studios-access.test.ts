@@ -41,7 +41,12 @@ beforeAll(async () => {
 describe('the API shapes outside checks use', () => {
   it('POST /api/studios makes a studio for a teacher; a player may not', async () => {
     const res = await a.post('/api/studios', { name: 'Thursday duo' }).expect(201);
-    expect(res.body.studio).toMatchObject({ name: 'Thursday duo', role: 'teacher', teacher: { id: teacherA.id, name: 'Mara Quill', email: teacherA.email }, players: [] });
+    expect(res.body.studio).toMatchObject({
+      name: 'Thursday duo',
+      role: 'teacher',
+      teacher: { id: teacherA.id, name: 'Mara Quill', email: teacherA.email },
+      players: [],
+    });
     expect((await pa.post('/api/studios', { name: 'Mine' })).status).toBe(403);
     const bad = await a.post('/api/studios', { name: '' });
     expect(bad.status).toBe(400);
@@ -54,7 +59,9 @@ describe('the API shapes outside checks use', () => {
     expect(harbour).toMatchObject({ id: studioA, name: 'Harbour Lane A', role: 'teacher' });
     expect(mine.body.studios.some((s: { id: string }) => s.id === studioB)).toBe(false);
     const theirs = await pa.get('/api/studios').expect(200);
-    expect(theirs.body.studios).toEqual([expect.objectContaining({ id: studioA, name: 'Harbour Lane A', role: 'player' })]);
+    expect(theirs.body.studios).toEqual([
+      expect.objectContaining({ id: studioA, name: 'Harbour Lane A', role: 'player' }),
+    ]);
   });
 
   it('GET /api/studios/:id gives the teacher and the players with e-mails', async () => {
@@ -92,7 +99,16 @@ describe('teacher A never reaches studio B', () => {
       // an outsider's bad body still gets the 404, never a 400 that confirms the studio
       expect((await c.post(`/api/studios/${studioB}/invites`, {})).status).toBe(404);
       const drill = await createSavedDrill(ctx.db, teacherA.id);
-      expect((await c.post(`/api/studios/${studioB}/assignments`, { savedDrillId: drill.id, targetTempo: 100, targetAccuracy: 0.9, dueAt: inDays(7) })).status).toBe(404);
+      expect(
+        (
+          await c.post(`/api/studios/${studioB}/assignments`, {
+            savedDrillId: drill.id,
+            targetTempo: 100,
+            targetAccuracy: 0.9,
+            dueAt: inDays(7),
+          })
+        ).status,
+      ).toBe(404);
     }
   });
 
@@ -116,7 +132,9 @@ describe('teacher A never reaches studio B', () => {
   });
 
   it("shows a teacher who teaches the player in both studios only their own studio's remarks", async () => {
-    await ctx.db.insert((await import('../../server/db/schema')).studioMembers).values({ studioId: studioA, playerId: playerB.id });
+    await ctx.db
+      .insert((await import('../../server/db/schema')).studioMembers)
+      .values({ studioId: studioA, playerId: playerB.id });
     const mine = await a.get(`/api/takes/${takeB}/remarks`).expect(200);
     expect(mine.body.remarks).toEqual([]);
     const own = await pb.get(`/api/takes/${takeB}/remarks`).expect(200);

@@ -26,14 +26,25 @@ beforeAll(async () => {
 });
 
 async function assign(body: Record<string, unknown> = {}) {
-  const res = await t.post(`/api/studios/${studioId}/assignments`, { savedDrillId: drillId, targetTempo: 100, targetAccuracy: 0.9, dueAt: inDays(7), note: 'Slow and even', ...body });
+  const res = await t.post(`/api/studios/${studioId}/assignments`, {
+    savedDrillId: drillId,
+    targetTempo: 100,
+    targetAccuracy: 0.9,
+    dueAt: inDays(7),
+    note: 'Slow and even',
+    ...body,
+  });
   if (res.status !== 201) throw new Error(`${res.status} ${JSON.stringify(res.body)}`);
   return res.body.assignment as { id: string; keys: string[]; spec: typeof STUDIO_SPEC };
 }
 
 async function statusOf(c: Client, id: string) {
   const res = await c.get(`/api/studios/${studioId}/assignments`).expect(200);
-  return res.body.assignments.find((a: { id: string }) => a.id === id) as { status: string; keysMet: string[]; players?: { playerId: string; status: string }[] };
+  return res.body.assignments.find((a: { id: string }) => a.id === id) as {
+    status: string;
+    keysMet: string[];
+    players?: { playerId: string; status: string }[];
+  };
 }
 
 describe('setting assignments', () => {
@@ -45,7 +56,11 @@ describe('setting assignments', () => {
     expect(cycle.keys).toEqual(['D', 'G', 'C', 'F', 'Bb', 'Eb', 'Ab', 'Db', 'F#', 'B', 'E', 'A']);
     const mine = await p.get('/api/assignments').expect(200);
     expect(mine.body.assignments.map((a: { id: string }) => a.id)).toEqual(expect.arrayContaining([one.id, cycle.id]));
-    expect(mine.body.assignments[0]).toMatchObject({ status: 'open', studioName: 'Assignments studio', note: 'Slow and even' });
+    expect(mine.body.assignments[0]).toMatchObject({
+      status: 'open',
+      studioName: 'Assignments studio',
+      note: 'Slow and even',
+    });
     expect(mine.body.assignments[0].players).toBeUndefined();
     // players are told in the app
     const n = await p.get('/api/notifications').expect(200);
@@ -55,13 +70,32 @@ describe('setting assignments', () => {
   it("refuses another teacher's saved drill, a player setting one, and bad targets (naming the field)", async () => {
     const other = await createUser(ctx.db, { role: 'teacher' });
     const theirs = await createSavedDrill(ctx.db, other.id);
-    const res = await t.post(`/api/studios/${studioId}/assignments`, { savedDrillId: theirs.id, targetTempo: 100, targetAccuracy: 0.9, dueAt: inDays(7) });
+    const res = await t.post(`/api/studios/${studioId}/assignments`, {
+      savedDrillId: theirs.id,
+      targetTempo: 100,
+      targetAccuracy: 0.9,
+      dueAt: inDays(7),
+    });
     expect(res.status).toBe(400);
     expect(res.body.error.fields.savedDrillId).toBeDefined();
-    const bad = await t.post(`/api/studios/${studioId}/assignments`, { savedDrillId: drillId, targetTempo: 5, targetAccuracy: 2, dueAt: 'soon' });
+    const bad = await t.post(`/api/studios/${studioId}/assignments`, {
+      savedDrillId: drillId,
+      targetTempo: 5,
+      targetAccuracy: 2,
+      dueAt: 'soon',
+    });
     expect(bad.status).toBe(400);
     expect(Object.keys(bad.body.error.fields).sort()).toEqual(['dueAt', 'targetAccuracy', 'targetTempo']);
-    expect((await p.post(`/api/studios/${studioId}/assignments`, { savedDrillId: drillId, targetTempo: 100, targetAccuracy: 0.9, dueAt: inDays(7) })).status).toBe(403);
+    expect(
+      (
+        await p.post(`/api/studios/${studioId}/assignments`, {
+          savedDrillId: drillId,
+          targetTempo: 100,
+          targetAccuracy: 0.9,
+          dueAt: inDays(7),
+        })
+      ).status,
+    ).toBe(403);
   });
 });
 
@@ -90,7 +124,10 @@ describe('"met": every key has a take from the assignment at the targets, made a
   it('a take made before the assignment was set does not count', async () => {
     const a = await assign();
     const take = await postTake(p, STUDIO_SPEC, { assignmentId: a.id });
-    await ctx.db.update(takes).set({ createdAt: new Date(Date.now() - 3_600_000) }).where(eq(takes.id, take.id));
+    await ctx.db
+      .update(takes)
+      .set({ createdAt: new Date(Date.now() - 3_600_000) })
+      .where(eq(takes.id, take.id));
     expect((await statusOf(p, a.id)).status).toBe('open');
   });
 
@@ -101,7 +138,10 @@ describe('"met": every key has a take from the assignment at the targets, made a
     const partly = await statusOf(p, a.id);
     expect(partly.status).toBe('open');
     expect(partly.keysMet).toHaveLength(11);
-    await ctx.db.update(assignments).set({ dueAt: new Date(Date.now() - 60_000) }).where(eq(assignments.id, a.id));
+    await ctx.db
+      .update(assignments)
+      .set({ dueAt: new Date(Date.now() - 60_000) })
+      .where(eq(assignments.id, a.id));
     expect((await statusOf(p, a.id)).status).toBe('overdue');
     expect((await statusOf(t, a.id)).players?.find((x) => x.playerId === player.id)?.status).toBe('overdue');
     await postTake(p, specs[11], { assignmentId: a.id });

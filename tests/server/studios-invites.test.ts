@@ -2,7 +2,16 @@ import { eq } from 'drizzle-orm';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { studioInvites } from '../../server/db/schema';
-import { type Client, client, createStudio, createUser, signedIn, type TestUser, uniqueEmail, waitForMail } from '../helpers/factories';
+import {
+  type Client,
+  client,
+  createStudio,
+  createUser,
+  signedIn,
+  type TestUser,
+  uniqueEmail,
+  waitForMail,
+} from '../helpers/factories';
 import { createTestApp } from '../helpers/test-server';
 
 const ctx = createTestApp();
@@ -16,7 +25,10 @@ let studioId: string;
 beforeAll(async () => {
   teacher = await createUser(ctx.db, { role: 'teacher', name: 'Mara Quill' });
   studioId = (await createStudio(ctx.db, teacher.id, [], 'Harbour Lane invites')).id;
-  [admin, t] = await Promise.all([signedIn(ctx.app, await createUser(ctx.db, { role: 'admin' })), signedIn(ctx.app, teacher)]);
+  [admin, t] = await Promise.all([
+    signedIn(ctx.app, await createUser(ctx.db, { role: 'admin' })),
+    signedIn(ctx.app, teacher),
+  ]);
 });
 
 /** Invites the address and reads the token back from the e-mail in the fake's outbox. */
@@ -55,10 +67,18 @@ describe('invites by e-mail', () => {
     const email = uniqueEmail('newplayer');
     const { token } = await invite(email);
     const preview = await request(ctx.app).get(`/api/invites/${token}`).expect(200);
-    expect(preview.body.invite).toMatchObject({ studio: { id: studioId, name: 'Harbour Lane invites' }, teacher: { name: 'Mara Quill' }, email, accountExists: false });
+    expect(preview.body.invite).toMatchObject({
+      studio: { id: studioId, name: 'Harbour Lane invites' },
+      teacher: { name: 'Mara Quill' },
+      email,
+      accountExists: false,
+    });
 
     const visitor = await client(ctx.app);
-    const res = await visitor.post(`/api/invites/${token}/sign-up`, { name: 'Sam Okafor', password: 'wind-controller-9' });
+    const res = await visitor.post(`/api/invites/${token}/sign-up`, {
+      name: 'Sam Okafor',
+      password: 'wind-controller-9',
+    });
     expect(res.status).toBe(201);
     expect(res.body.user).toMatchObject({ email, name: 'Sam Okafor', role: 'player' });
     await visitor.refreshCsrf();
@@ -70,12 +90,18 @@ describe('invites by e-mail', () => {
     // single use: the preview, accepting and signing up all refuse it now
     expect((await request(ctx.app).get(`/api/invites/${token}`)).status).toBe(404);
     const again = await client(ctx.app);
-    expect((await again.post(`/api/invites/${token}/sign-up`, { name: 'Someone', password: 'another-password' })).status).toBe(404);
+    expect(
+      (await again.post(`/api/invites/${token}/sign-up`, { name: 'Someone', password: 'another-password' })).status,
+    ).toBe(404);
     const p = await signedIn(ctx.app, await createUser(ctx.db, { role: 'player' }));
     expect((await p.post(`/api/invites/${token}/accept`)).status).toBe(404);
     // the teacher hears of it in the app
     const n = await t.get('/api/notifications').expect(200);
-    expect(n.body.notifications[0]).toMatchObject({ kind: 'joined', text: expect.stringContaining('Sam Okafor'), read: false });
+    expect(n.body.notifications[0]).toMatchObject({
+      kind: 'joined',
+      text: expect.stringContaining('Sam Okafor'),
+      read: false,
+    });
   });
 
   it('a signed-in player with an account accepts once', async () => {
@@ -90,7 +116,9 @@ describe('invites by e-mail', () => {
     // signing up on an address that has an account is refused
     const { token: second } = await invite(player.email, 2);
     const visitor = await client(ctx.app);
-    expect((await visitor.post(`/api/invites/${second}/sign-up`, { name: 'Theo', password: 'whatever-123' })).status).toBe(409);
+    expect(
+      (await visitor.post(`/api/invites/${second}/sign-up`, { name: 'Theo', password: 'whatever-123' })).status,
+    ).toBe(409);
   });
 
   it('two answers to one link at the same moment: one joins, the other is refused', async () => {
@@ -99,19 +127,27 @@ describe('invites by e-mail', () => {
       signedIn(ctx.app, await createUser(ctx.db, { role: 'player' })),
       signedIn(ctx.app, await createUser(ctx.db, { role: 'player' })),
     ]);
-    const results = await Promise.all([p1.post(`/api/invites/${token}/accept`), p2.post(`/api/invites/${token}/accept`)]);
+    const results = await Promise.all([
+      p1.post(`/api/invites/${token}/accept`),
+      p2.post(`/api/invites/${token}/accept`),
+    ]);
     expect(results.map((r) => r.status).sort()).toEqual([200, 404]);
   });
 
   it('an expired link does not work', async () => {
     const email = uniqueEmail('late');
     const { token } = await invite(email);
-    await ctx.db.update(studioInvites).set({ expiresAt: new Date(Date.now() - 1000) }).where(eq(studioInvites.email, email));
+    await ctx.db
+      .update(studioInvites)
+      .set({ expiresAt: new Date(Date.now() - 1000) })
+      .where(eq(studioInvites.email, email));
     expect((await request(ctx.app).get(`/api/invites/${token}`)).status).toBe(404);
     const p = await signedIn(ctx.app, await createUser(ctx.db, { role: 'player' }));
     expect((await p.post(`/api/invites/${token}/accept`)).status).toBe(404);
     const visitor = await client(ctx.app);
-    expect((await visitor.post(`/api/invites/${token}/sign-up`, { name: 'Late', password: 'too-late-123' })).status).toBe(404);
+    expect(
+      (await visitor.post(`/api/invites/${token}/sign-up`, { name: 'Late', password: 'too-late-123' })).status,
+    ).toBe(404);
   });
 
   it('refuses a bad address with a 400 that names the field, and a teacher account accepting', async () => {

@@ -17,7 +17,11 @@ beforeAll(async () => {
   const teacher = await createUser(ctx.db, { role: 'teacher', name: 'Mara Quill' });
   player = await createUser(ctx.db, { role: 'player', name: 'Theo Park' });
   studioId = (await createStudio(ctx.db, teacher.id, [player.id], 'Remarks studio')).id;
-  [admin, t, p] = await Promise.all([signedIn(ctx.app, await createUser(ctx.db, { role: 'admin' })), signedIn(ctx.app, teacher), signedIn(ctx.app, player)]);
+  [admin, t, p] = await Promise.all([
+    signedIn(ctx.app, await createUser(ctx.db, { role: 'admin' })),
+    signedIn(ctx.app, teacher),
+    signedIn(ctx.app, player),
+  ]);
   takeId = (await postTake(p, STUDIO_SPEC, { miss: 2 })).id;
 });
 
@@ -26,9 +30,17 @@ describe('remarks on a take', () => {
     const take = (await t.get(`/api/takes/${takeId}`).expect(200)).body.take;
     const missed = take.score.results.findIndex((r: { verdict: string }) => r.verdict === 'missed');
     expect(missed).toBeGreaterThanOrEqual(0);
-    const res = await t.post(`/api/takes/${takeId}/remarks`, { body: 'You skipped the entry note; land on it.', noteIndex: missed });
+    const res = await t.post(`/api/takes/${takeId}/remarks`, {
+      body: 'You skipped the entry note; land on it.',
+      noteIndex: missed,
+    });
     expect(res.status).toBe(201);
-    expect(res.body.remark).toMatchObject({ takeId, noteIndex: missed, parentId: null, author: { name: 'Mara Quill', role: 'teacher' } });
+    expect(res.body.remark).toMatchObject({
+      takeId,
+      noteIndex: missed,
+      parentId: null,
+      author: { name: 'Mara Quill', role: 'teacher' },
+    });
 
     const n = await p.get('/api/notifications').expect(200);
     expect(n.body.unread).toBeGreaterThanOrEqual(1);
@@ -48,11 +60,17 @@ describe('remarks on a take', () => {
     const list = await p.get(`/api/takes/${takeId}/remarks`).expect(200);
     const first = list.body.remarks[0];
     expect((await p.post(`/api/takes/${takeId}/remarks`, { body: 'Without answering anything' })).status).toBe(400);
-    const reply = await p.post(`/api/takes/${takeId}/remarks`, { body: 'Got it, I will try again at 90.', parentId: first.id });
+    const reply = await p.post(`/api/takes/${takeId}/remarks`, {
+      body: 'Got it, I will try again at 90.',
+      parentId: first.id,
+    });
     expect(reply.status).toBe(201);
     expect(reply.body.remark).toMatchObject({ parentId: first.id, author: { role: 'player' } });
     const seen = await t.get(`/api/takes/${takeId}/remarks`).expect(200);
-    expect(seen.body.remarks.map((r: { body: string }) => r.body)).toEqual(['You skipped the entry note; land on it.', 'Got it, I will try again at 90.']);
+    expect(seen.body.remarks.map((r: { body: string }) => r.body)).toEqual([
+      'You skipped the entry note; land on it.',
+      'Got it, I will try again at 90.',
+    ]);
     const n = await t.get('/api/notifications').expect(200);
     expect(n.body.notifications[0]).toMatchObject({ kind: 'reply', link: `/takes/${takeId}` });
     // The teacher's page of this player counts the take's remarks (the pinned one and the answer).

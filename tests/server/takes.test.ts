@@ -9,7 +9,14 @@ import { createTestApp } from '../helpers/test-server';
 const ctx = createTestApp();
 afterAll(() => ctx.close());
 
-const SPEC: DrillSpec = { pair: ['F', 'Eb'], pattern: 'weave', direction: 'up', instrument: 'piano', tempo: 120, range: { low: 60, high: 84 } };
+const SPEC: DrillSpec = {
+  pair: ['F', 'Eb'],
+  pattern: 'weave',
+  direction: 'up',
+  instrument: 'piano',
+  tempo: 120,
+  range: { low: 60, high: 84 },
+};
 const drill = generateDrill(SPEC);
 const msPerBeat = 60000 / 120;
 const perfect: PlayedNote[] = drill.notes.map((n) => ({ midi: n.midi, timeMs: n.beat * msPerBeat, velocity: 80 }));
@@ -83,7 +90,10 @@ describe('POST /api/takes', () => {
   });
 
   it('bounds the windows and holds the tempo to the drill', async () => {
-    const res = await p.post('/api/takes', takeBody({ options: { tempo: 40, mode: 'timed', hitWindowMs: 5000, matchWindowMs: 9000 } }));
+    const res = await p.post(
+      '/api/takes',
+      takeBody({ options: { tempo: 40, mode: 'timed', hitWindowMs: 5000, matchWindowMs: 9000 } }),
+    );
     expect(res.status).toBe(201);
     expect(res.body.take.options).toMatchObject({ tempo: 120, hitWindowMs: 150, matchWindowMs: 400 });
     const low = await p.post('/api/takes', takeBody({ options: { tempo: 120, mode: 'timed', hitWindowMs: 1 } }));
@@ -134,7 +144,11 @@ describe('POST /api/takes', () => {
   it('is for players: signed out 401, a teacher 403', async () => {
     const anon = await request(ctx.app).get('/api/auth/csrf');
     const cookie = anon.headers['set-cookie'];
-    const res = await request(ctx.app).post('/api/takes').set('Cookie', cookie).set('X-CSRF-Token', anon.body.token).send(takeBody());
+    const res = await request(ctx.app)
+      .post('/api/takes')
+      .set('Cookie', cookie)
+      .set('X-CSRF-Token', anon.body.token)
+      .send(takeBody());
     expect(res.status).toBe(401);
     const t = await signedIn(ctx.app, teacher);
     expect((await t.post('/api/takes', takeBody())).status).toBe(403);
@@ -161,16 +175,21 @@ describe('GET, MIDI and DELETE /api/takes/:id', () => {
   });
 
   it('exports a Standard MIDI File with a Drill and a Take track', async () => {
-    const res = await p.get(`/api/takes/${takeId}/midi`).buffer(true).parse((r, cb) => {
-      const chunks: Buffer[] = [];
-      r.on('data', (c: Buffer) => chunks.push(c));
-      r.on('end', () => cb(null, Buffer.concat(chunks)));
-    });
+    const res = await p
+      .get(`/api/takes/${takeId}/midi`)
+      .buffer(true)
+      .parse((r, cb) => {
+        const chunks: Buffer[] = [];
+        r.on('data', (c: Buffer) => chunks.push(c));
+        r.on('end', () => cb(null, Buffer.concat(chunks)));
+      });
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toMatch(/audio\/midi/);
     // Read back with an independent parser (midi-file), per Standard MIDI Files 1.0.
     const midi = parseMidi(res.body as Buffer);
-    const names = midi.tracks.map((t) => t.find((e) => e.type === 'trackName')).map((e) => (e && 'text' in e ? e.text : null));
+    const names = midi.tracks
+      .map((t) => t.find((e) => e.type === 'trackName'))
+      .map((e) => (e && 'text' in e ? e.text : null));
     expect(names).toContain('Drill');
     expect(names).toContain('Take');
     const takeTrack = midi.tracks[names.indexOf('Take')];

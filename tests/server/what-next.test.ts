@@ -36,7 +36,15 @@ async function takes(s: DrillSpec, count: number, missing: number, daysAgo: numb
   const played = playNothing ? [] : notes.slice(missing).map((n) => ({ midi: n.midi, timeMs: n.beat * 500 }));
   const at = Date.now() - daysAgo * 86_400_000;
   for (let i = 0; i < count; i++) {
-    await createTake(ctx.db, { playerId: player.id, id: randomUUID(), spec: s, played, options: { tempo: 120, mode: 'timed' }, startedAt: new Date(at - i * 1000), stoppedAtMs: stop });
+    await createTake(ctx.db, {
+      playerId: player.id,
+      id: randomUUID(),
+      spec: s,
+      played,
+      options: { tempo: 120, mode: 'timed' },
+      startedAt: new Date(at - i * 1000),
+      stoppedAtMs: stop,
+    });
   }
 }
 const pattern = (s: DrillSpec) => s.pattern as string;
@@ -55,7 +63,9 @@ describe('GET /api/maps/next', () => {
   it('puts the weakest cells first, weighted by days since, then keys never played', async () => {
     const p = await signedIn(ctx.app, player);
     const { items } = (await p.get('/api/maps/next').expect(200)).body;
-    expect(items.map((i: { key: string; pattern: string; reason: string }) => `${i.key} ${i.pattern} ${i.reason}`)).toEqual([
+    expect(
+      items.map((i: { key: string; pattern: string; reason: string }) => `${i.key} ${i.pattern} ${i.reason}`),
+    ).toEqual([
       'Bb four-three weak',
       'F weave weak',
       'B four-three weak',

@@ -24,18 +24,16 @@ const scope = {
   pair: text('pair').notNull(),
 };
 
-export const mapKeyDays = pgTable(
-  'map_key_days',
-  { ...scope, key: text('key').notNull(), ...counts },
-  (t) => [
-    primaryKey({ columns: [t.playerId, t.day, t.instrument, t.pattern, t.pair, t.key] }),
-    index('map_key_days_player_key_idx').on(t.playerId, t.key, t.pattern),
-  ],
-);
-
-export const mapRangeDays = pgTable('map_range_days', { ...scope, midi: smallint('midi').notNull(), ...counts }, (t) => [
-  primaryKey({ columns: [t.playerId, t.day, t.instrument, t.pattern, t.pair, t.midi] }),
+export const mapKeyDays = pgTable('map_key_days', { ...scope, key: text('key').notNull(), ...counts }, (t) => [
+  primaryKey({ columns: [t.playerId, t.day, t.instrument, t.pattern, t.pair, t.key] }),
+  index('map_key_days_player_key_idx').on(t.playerId, t.key, t.pattern),
 ]);
+
+export const mapRangeDays = pgTable(
+  'map_range_days',
+  { ...scope, midi: smallint('midi').notNull(), ...counts },
+  (t) => [primaryKey({ columns: [t.playerId, t.day, t.instrument, t.pattern, t.pair, t.midi] })],
+);
 
 export const mapBeatDays = pgTable(
   'map_beat_days',

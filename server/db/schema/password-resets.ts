@@ -17,5 +17,8 @@ export const passwordResets = pgTable(
     usedAt: timestamp('used_at', { withTimezone: true }),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [uniqueIndex('password_resets_token_hash_key').on(t.tokenHash), index('password_resets_user_idx').on(t.userId)],
+  (t) => [
+    uniqueIndex('password_resets_token_hash_key').on(t.tokenHash),
+    index('password_resets_user_idx').on(t.userId),
+  ],
 );

@@ -23,7 +23,10 @@ export const studioInvites = pgTable(
     usedBy: uuid('used_by').references(() => users.id, { onDelete: 'set null' }),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [uniqueIndex('studio_invites_token_hash_key').on(t.tokenHash), index('studio_invites_studio_idx').on(t.studioId, t.createdAt)],
+  (t) => [
+    uniqueIndex('studio_invites_token_hash_key').on(t.tokenHash),
+    index('studio_invites_studio_idx').on(t.studioId, t.createdAt),
+  ],
 );
 
 export type StudioInviteRow = typeof studioInvites.$inferSelect;

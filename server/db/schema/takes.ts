@@ -35,7 +35,10 @@ export const takes = pgTable(
     startedAt: timestamp('started_at', { withTimezone: true }).notNull(),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [index('takes_player_started_idx').on(t.playerId, t.startedAt), index('takes_assignment_idx').on(t.assignmentId)],
+  (t) => [
+    index('takes_player_started_idx').on(t.playerId, t.startedAt),
+    index('takes_assignment_idx').on(t.assignmentId),
+  ],
 );
 
 /**

@@ -9,7 +9,14 @@ export const DEMO_BOOK_TITLE = 'Pairs for the Tuesday combo';
  * The drills of Mara's book (SCENARIO.md), in order: the free starter first. No instrument is
  * set, so each player practises and prints them for their own.
  */
-const DRILLS: { name: string; title: string; spec: DrillSpec; keyCycle: KeyOrder | null; note: string; free?: boolean }[] = [
+const DRILLS: {
+  name: string;
+  title: string;
+  spec: DrillSpec;
+  keyCycle: KeyOrder | null;
+  note: string;
+  free?: boolean;
+}[] = [
   {
     name: 'Starter: stack on C/D over Cmaj7#11',
     title: 'Starter: C/D over Cmaj7#11',
@@ -49,9 +56,16 @@ const DRILLS: { name: string; title: string; spec: DrillSpec; keyCycle: KeyOrder
 ];
 
 async function ensureSavedDrill(db: Db, ownerId: string, d: (typeof DRILLS)[number]): Promise<string> {
-  const [found] = await db.select({ id: savedDrills.id }).from(savedDrills).where(and(eq(savedDrills.ownerId, ownerId), eq(savedDrills.name, d.name))).limit(1);
+  const [found] = await db
+    .select({ id: savedDrills.id })
+    .from(savedDrills)
+    .where(and(eq(savedDrills.ownerId, ownerId), eq(savedDrills.name, d.name)))
+    .limit(1);
   if (found) return found.id;
-  const [made] = await db.insert(savedDrills).values({ ownerId, name: d.name, spec: d.spec, keyOrder: d.keyCycle }).returning({ id: savedDrills.id });
+  const [made] = await db
+    .insert(savedDrills)
+    .values({ ownerId, name: d.name, spec: d.spec, keyOrder: d.keyCycle })
+    .returning({ id: savedDrills.id });
   return made.id;
 }
 
@@ -59,7 +73,11 @@ async function ensureSavedDrill(db: Db, ownerId: string, d: (typeof DRILLS)[numb
 export async function seedDemoBooks(db: Db): Promise<void> {
   const [mara] = await db.select({ id: users.id }).from(users).where(eq(users.email, 'teacher@sixfold.test'));
   if (!mara) return;
-  const [exists] = await db.select({ id: books.id }).from(books).where(and(eq(books.teacherId, mara.id), eq(books.title, DEMO_BOOK_TITLE))).limit(1);
+  const [exists] = await db
+    .select({ id: books.id })
+    .from(books)
+    .where(and(eq(books.teacherId, mara.id), eq(books.title, DEMO_BOOK_TITLE)))
+    .limit(1);
   if (exists) return;
   const savedIds: string[] = [];
   for (const d of DRILLS) savedIds.push(await ensureSavedDrill(db, mara.id, d));

@@ -1,5 +1,12 @@
 import { eq } from 'drizzle-orm';
-import { type Drill, type DrillSpec, type InstrumentId, inAllKeys, type PlayedNote, type ScoreOptions } from '../../../shared/engine';
+import {
+  type Drill,
+  type DrillSpec,
+  type InstrumentId,
+  inAllKeys,
+  type PlayedNote,
+  type ScoreOptions,
+} from '../../../shared/engine';
 import { createTake } from '../../services/takes/create';
 import type { Db } from '../client';
 import { takes, users } from '../schema';
@@ -43,7 +50,10 @@ interface Habits {
 
 const ASSIGNED = [
   { spec: { pair: ['D', 'C'], pattern: 'four-three', direction: 'up', tempo: 100, chord: 'D7' }, order: 'chromatic' },
-  { spec: { pair: ['Bbm', 'Ab'], pattern: 'scale-steps', direction: 'up', tempo: 90, chord: 'Bbm7' }, order: 'fourths' },
+  {
+    spec: { pair: ['Bbm', 'Ab'], pattern: 'scale-steps', direction: 'up', tempo: 90, chord: 'Bbm7' },
+    order: 'fourths',
+  },
   { spec: { pair: ['G', 'Db'], pattern: 'weave', direction: 'up-down', tempo: 80, chord: 'G7' }, order: 'fifths' },
 ] as const satisfies Habits['drills'];
 
@@ -58,7 +68,8 @@ export const DEMO_HABITS: Record<string, Habits> = {
     hour: 22,
     takesPerSession: [2, 4],
     practiceChance: 0.75,
-    missIn: (key) => (['B', 'E', 'F#'].includes(key) ? 0.16 : ['Db', 'Eb', 'Ab', 'Bb', 'F'].includes(key) ? 0.015 : 0.04),
+    missIn: (key) =>
+      ['B', 'E', 'F#'].includes(key) ? 0.16 : ['Db', 'Eb', 'Ab', 'Bb', 'F'].includes(key) ? 0.015 : 0.04,
     shape: steady,
   },
   // Plays written pitch on a keyboard; rushes groupings that cross the bar line.
@@ -86,7 +97,10 @@ export const DEMO_HABITS: Record<string, Habits> = {
     takesPerSession: [3, 5],
     practiceChance: 0.65,
     missIn: () => 0.025,
-    shape: (note, drill, rand) => ({ dMs: 0, dMidi: note.midi >= (drill.spec.range?.high ?? 127) - 5 && rand() < 0.35 ? -12 : 0 }),
+    shape: (note, drill, rand) => ({
+      dMs: 0,
+      dMidi: note.midi >= (drill.spec.range?.high ?? 127) - 5 && rand() < 0.35 ? -12 : 0,
+    }),
   },
 };
 
@@ -98,7 +112,11 @@ function perform(drill: Drill, habits: Habits, key: string, rand: () => number):
     if (rand() < habits.missIn(key)) continue;
     const { dMs, dMidi } = habits.shape(note, drill, rand);
     const jitter = (rand() - 0.5) * 30;
-    played.push({ midi: note.midi + dMidi - (habits.inputTransposition ?? 0), timeMs: Math.round(note.beat * ms + jitter + dMs), velocity: 64 + Math.floor(rand() * 40) });
+    played.push({
+      midi: note.midi + dMidi - (habits.inputTransposition ?? 0),
+      timeMs: Math.round(note.beat * ms + jitter + dMs),
+      velocity: 64 + Math.floor(rand() * 40),
+    });
   }
   return played;
 }
@@ -115,8 +133,18 @@ export async function seedDemoHistory(db: Db, now = new Date(), days = 42): Prom
     const [any] = await db.select({ id: takes.id }).from(takes).where(eq(takes.playerId, user.id)).limit(1);
     if (any) continue;
     const rand = prng([...email].reduce((h, c) => Math.imul(h ^ c.charCodeAt(0), 16777619), 2166136261));
-    const cycles = habits.drills.map((d) => ({ ...d, drills: inAllKeys({ ...d.spec, pair: [...d.spec.pair], instrument: habits.instrument, range: habits.range }, d.order) }));
-    const options: ScoreOptions = { tempo: 100, mode: 'timed', ...(habits.inputTransposition ? { inputTransposition: habits.inputTransposition } : {}) };
+    const cycles = habits.drills.map((d) => ({
+      ...d,
+      drills: inAllKeys(
+        { ...d.spec, pair: [...d.spec.pair], instrument: habits.instrument, range: habits.range },
+        d.order,
+      ),
+    }));
+    const options: ScoreOptions = {
+      tempo: 100,
+      mode: 'timed',
+      ...(habits.inputTransposition ? { inputTransposition: habits.inputTransposition } : {}),
+    };
     const start = new Date(now);
     start.setUTCHours(habits.hour, 0, 0, 0);
     let step = 0;

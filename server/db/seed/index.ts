@@ -23,7 +23,10 @@ async function ensureAccount(db: Db, account: (typeof DEMO_ACCOUNTS)[number]): P
   const [found] = await db.select({ id: users.id }).from(users).where(eq(users.email, account.email)).limit(1);
   if (found) return found.id;
   const passwordHash = await hashPassword(DEMO_PASSWORD);
-  await db.insert(users).values({ ...account, passwordHash }).onConflictDoNothing({ target: users.email });
+  await db
+    .insert(users)
+    .values({ ...account, passwordHash })
+    .onConflictDoNothing({ target: users.email });
   const [made] = await db.select({ id: users.id }).from(users).where(eq(users.email, account.email)).limit(1);
   return made.id;
 }
@@ -42,7 +45,8 @@ export async function seedDemo(db: Db): Promise<void> {
     .from(studios)
     .where(and(eq(studios.teacherId, teacherId), eq(studios.name, DEMO_STUDIO)))
     .limit(1);
-  if (!studio) [studio] = await db.insert(studios).values({ name: DEMO_STUDIO, teacherId }).returning({ id: studios.id });
+  if (!studio)
+    [studio] = await db.insert(studios).values({ name: DEMO_STUDIO, teacherId }).returning({ id: studios.id });
 
   for (const email of ['player@sixfold.test', 'alto@sixfold.test', 'wind@sixfold.test']) {
     await db

@@ -17,7 +17,12 @@ export async function seedDemoSettings(db: Db, ids: Map<string, string>): Promis
     if (!userId) continue;
     await db
       .insert(playerSettings)
-      .values({ userId, instrument: r.instrument, writtenPitchInput: r.writtenPitchInput, defaultTempo: r.defaultTempo })
+      .values({
+        userId,
+        instrument: r.instrument,
+        writtenPitchInput: r.writtenPitchInput,
+        defaultTempo: r.defaultTempo,
+      })
       .onConflictDoNothing({ target: playerSettings.userId });
   }
 }

@@ -6,7 +6,15 @@ import type { Db } from '../client';
 import { assignments, notifications, remarks, savedDrills, studios, takes, users } from '../schema';
 
 /** The week's assignments of SCENARIO.md, on saved drills of the teacher's. */
-const WEEK: { drill: string; spec: DrillSpec; keyOrder: KeyOrder; title: string; tempo: number; accuracy: number; note: string }[] = [
+const WEEK: {
+  drill: string;
+  spec: DrillSpec;
+  keyOrder: KeyOrder;
+  title: string;
+  tempo: number;
+  accuracy: number;
+  note: string;
+}[] = [
   {
     drill: 'Four-three on D/C over D7',
     spec: { pair: ['D', 'C'], pattern: 'four-three', direction: 'up', instrument: 'piano', tempo: 100, chord: 'D7' },
@@ -18,7 +26,14 @@ const WEEK: { drill: string; spec: DrillSpec; keyOrder: KeyOrder; title: string;
   },
   {
     drill: 'Scale-steps on Bbm/Ab over Bbm7',
-    spec: { pair: ['Bbm', 'Ab'], pattern: 'scale-steps', direction: 'up', instrument: 'piano', tempo: 88, chord: 'Bbm7' },
+    spec: {
+      pair: ['Bbm', 'Ab'],
+      pattern: 'scale-steps',
+      direction: 'up',
+      instrument: 'piano',
+      tempo: 88,
+      chord: 'Bbm7',
+    },
     keyOrder: 'fourths',
     title: 'scale-steps on Bbm/Ab, fourths order',
     tempo: 88,
@@ -30,14 +45,27 @@ const WEEK: { drill: string; spec: DrillSpec; keyOrder: KeyOrder; title: string;
 /** The Tuesday after `now`: the combo class, when the week's assignments are due. */
 function nextTuesday(now = new Date()): Date {
   const d = new Date(Date.UTC(now.getUTCFullYear(), now.getUTCMonth(), now.getUTCDate(), 18));
-  d.setUTCDate(d.getUTCDate() + (((2 - d.getUTCDay() + 7) % 7) || 7));
+  d.setUTCDate(d.getUTCDate() + ((2 - d.getUTCDay() + 7) % 7 || 7));
   return d;
 }
 
-async function ensureSavedDrill(db: Db, ownerId: string, name: string, spec: DrillSpec, keyOrder: KeyOrder): Promise<string> {
-  const [found] = await db.select({ id: savedDrills.id }).from(savedDrills).where(and(eq(savedDrills.ownerId, ownerId), eq(savedDrills.name, name))).limit(1);
+async function ensureSavedDrill(
+  db: Db,
+  ownerId: string,
+  name: string,
+  spec: DrillSpec,
+  keyOrder: KeyOrder,
+): Promise<string> {
+  const [found] = await db
+    .select({ id: savedDrills.id })
+    .from(savedDrills)
+    .where(and(eq(savedDrills.ownerId, ownerId), eq(savedDrills.name, name)))
+    .limit(1);
   if (found) return found.id;
-  const [made] = await db.insert(savedDrills).values({ ownerId, name, spec, keyOrder }).returning({ id: savedDrills.id });
+  const [made] = await db
+    .insert(savedDrills)
+    .values({ ownerId, name, spec, keyOrder })
+    .returning({ id: savedDrills.id });
   return made.id;
 }
 
@@ -51,7 +79,11 @@ export async function seedStudioWeek(db: Db, studioId: string): Promise<void> {
   const due = nextTuesday();
   for (const a of WEEK) {
     const drillId = await ensureSavedDrill(db, studio.teacherId, a.drill, a.spec, a.keyOrder);
-    const [exists] = await db.select({ id: assignments.id }).from(assignments).where(and(eq(assignments.studioId, studioId), eq(assignments.title, a.title))).limit(1);
+    const [exists] = await db
+      .select({ id: assignments.id })
+      .from(assignments)
+      .where(and(eq(assignments.studioId, studioId), eq(assignments.title, a.title)))
+      .limit(1);
     if (exists) continue;
     const spec = { ...a.spec, tempo: a.tempo };
     await db.insert(assignments).values({
@@ -81,12 +113,33 @@ export async function seedStudioWeek(db: Db, studioId: string): Promise<void> {
     .orderBy(desc(takes.startedAt))
     .limit(1);
   if (!take) return;
-  const [already] = await db.select({ id: remarks.id }).from(remarks).where(and(eq(remarks.takeId, take.id), eq(remarks.studioId, studioId))).limit(1);
+  const [already] = await db
+    .select({ id: remarks.id })
+    .from(remarks)
+    .where(and(eq(remarks.takeId, take.id), eq(remarks.studioId, studioId)))
+    .limit(1);
   if (already) return;
   const missed = take.score.results.findIndex((r) => r.verdict === 'missed');
   await db.insert(remarks).values([
-    { takeId: take.id, studioId, authorId: studio.teacherId, noteIndex: missed, body: `This is the note that keeps slipping in ${take.key}. Play the two cells around it slowly, then put it back in at tempo.` },
-    { takeId: take.id, studioId, authorId: studio.teacherId, noteIndex: null, body: 'The flat keys sound settled now. Give B, E and F# the first ten minutes of each session this week.' },
+    {
+      takeId: take.id,
+      studioId,
+      authorId: studio.teacherId,
+      noteIndex: missed,
+      body: `This is the note that keeps slipping in ${take.key}. Play the two cells around it slowly, then put it back in at tempo.`,
+    },
+    {
+      takeId: take.id,
+      studioId,
+      authorId: studio.teacherId,
+      noteIndex: null,
+      body: 'The flat keys sound settled now. Give B, E and F# the first ten minutes of each session this week.',
+    },
   ]);
-  await db.insert(notifications).values({ userId: theo.id, kind: 'remark', text: `Mara Quill left a remark on ${take.pair} ${take.pattern} in ${take.key}`, link: `/takes/${take.id}` });
+  await db.insert(notifications).values({
+    userId: theo.id,
+    kind: 'remark',
+    text: `Mara Quill left a remark on ${take.pair} ${take.pattern} in ${take.key}`,
+    link: `/takes/${take.id}`,
+  });
 }

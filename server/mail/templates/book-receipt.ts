@@ -32,7 +32,8 @@ export function bookReceiptMail(opts: {
     '',
     'Sixfold',
   ].join('\n');
-  const row = (k: string, v: string) => `<tr><td style="padding:2px 16px 2px 0;color:#545c6e">${escapeHtml(k)}</td><td style="padding:2px 0">${escapeHtml(v)}</td></tr>`;
+  const row = (k: string, v: string) =>
+    `<tr><td style="padding:2px 16px 2px 0;color:#545c6e">${escapeHtml(k)}</td><td style="padding:2px 0">${escapeHtml(v)}</td></tr>`;
   const html = layout(`
     <p>Hi ${escapeHtml(first)},</p>
     <p>Thank you for buying <strong>${escapeHtml(opts.book)}</strong> by ${escapeHtml(opts.teacher)}. Every drill in it is open to you now, in all twelve keys, and your takes count on your maps as usual.</p>

@@ -2,7 +2,13 @@ import type { MailMessage } from '../mailer';
 import { escapeHtml, layout } from './layout';
 
 /** The invitation to join a studio, with its single-use link. */
-export function studioInviteMail(opts: { to: string; teacher: string; studio: string; link: string; days: number }): MailMessage {
+export function studioInviteMail(opts: {
+  to: string;
+  teacher: string;
+  studio: string;
+  link: string;
+  days: number;
+}): MailMessage {
   const text = [
     'Hello,',
     '',

@@ -2,7 +2,15 @@ import type { MailMessage } from '../mailer';
 import { escapeHtml, layout } from './layout';
 
 /** Tells a player their teacher left a remark on one of their takes. */
-export function takeRemarkMail(opts: { to: string; player: string; teacher: string; take: string; body: string; pinned: string | null; link: string }): MailMessage {
+export function takeRemarkMail(opts: {
+  to: string;
+  player: string;
+  teacher: string;
+  take: string;
+  body: string;
+  pinned: string | null;
+  link: string;
+}): MailMessage {
   const first = opts.player.split(/\s+/)[0] || opts.player;
   const where = opts.pinned ? ` at ${opts.pinned}` : '';
   const text = [

@@ -13,10 +13,19 @@ export interface SummaryLine {
 const pct = (a: number | null) => (a === null ? '—' : `${Math.round(a * 100)}%`);
 
 /** The teacher's Monday note: how each player of the studio practised over the last seven days. */
-export function weeklySummaryMail(opts: { to: string; teacher: string; studio: string; week: string; assignments: number; lines: SummaryLine[]; link: string }): MailMessage {
+export function weeklySummaryMail(opts: {
+  to: string;
+  teacher: string;
+  studio: string;
+  week: string;
+  assignments: number;
+  lines: SummaryLine[];
+  link: string;
+}): MailMessage {
   const first = opts.teacher.split(/\s+/)[0] || opts.teacher;
   const rows = opts.lines.map(
-    (l) => `${l.player}: ${l.takes} ${l.takes === 1 ? 'take' : 'takes'}, accuracy ${pct(l.accuracy)}, ${l.met}/${opts.assignments} assignments met${l.overdue ? `, ${l.overdue} overdue` : ''}`,
+    (l) =>
+      `${l.player}: ${l.takes} ${l.takes === 1 ? 'take' : 'takes'}, accuracy ${pct(l.accuracy)}, ${l.met}/${opts.assignments} assignments met${l.overdue ? `, ${l.overdue} overdue` : ''}`,
   );
   const text = [
     `Hi ${first},`,

@@ -16,7 +16,12 @@ const KEY_ORDER_WORDS = { chromatic: 'chromatic', fourths: 'in fourths', fifths:
  * Sets one of the teacher's saved drills (one key, or the key cycle in an order) for every
  * player of the studio. The drill is copied at the target tempo, so the players open it there.
  */
-export async function createAssignment(db: Db, teacher: User, studioId: string, input: CreateAssignmentInput): Promise<Assignment> {
+export async function createAssignment(
+  db: Db,
+  teacher: User,
+  studioId: string,
+  input: CreateAssignmentInput,
+): Promise<Assignment> {
   const { studio } = await teacherAccess(db, teacher, studioId);
   const [drill] = isId(input.savedDrillId)
     ? await db
@@ -25,11 +30,16 @@ export async function createAssignment(db: Db, teacher: User, studioId: string, 
         .where(and(eq(savedDrills.id, input.savedDrillId), eq(savedDrills.ownerId, studio.teacherId)))
         .limit(1)
     : [];
-  if (!drill) throw new AppError('validation', 'Pick one of your saved drills', { savedDrillId: ['Pick one of your saved drills'] });
+  if (!drill)
+    throw new AppError('validation', 'Pick one of your saved drills', {
+      savedDrillId: ['Pick one of your saved drills'],
+    });
   const keyOrder = input.keyOrder ?? null;
   const spec = { ...drill.spec, tempo: input.targetTempo };
   const keys = assignmentKeys(spec as EngineSpec, keyOrder);
-  const title = input.title ?? `${drill.name}${keyOrder ? `, all keys ${KEY_ORDER_WORDS[keyOrder]}` : ''}, ${input.targetTempo} bpm`;
+  const title =
+    input.title ??
+    `${drill.name}${keyOrder ? `, all keys ${KEY_ORDER_WORDS[keyOrder]}` : ''}, ${input.targetTempo} bpm`;
   const [row] = await db
     .insert(assignments)
     .values({
@@ -46,10 +56,18 @@ export async function createAssignment(db: Db, teacher: User, studioId: string, 
       note: input.note ?? '',
     })
     .returning();
-  const members = await db.select({ id: studioMembers.playerId }).from(studioMembers).where(eq(studioMembers.studioId, studioId));
+  const members = await db
+    .select({ id: studioMembers.playerId })
+    .from(studioMembers)
+    .where(eq(studioMembers.studioId, studioId));
   if (members.length > 0) {
     await db.insert(notifications).values(
-      members.map((m) => ({ userId: m.id, kind: 'assignment' as const, text: `New in ${studio.name}: ${title}`, link: '/home' })),
+      members.map((m) => ({
+        userId: m.id,
+        kind: 'assignment' as const,
+        text: `New in ${studio.name}: ${title}`,
+        link: '/home',
+      })),
     );
   }
   return presentAssignment(

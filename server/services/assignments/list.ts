@@ -10,7 +10,11 @@ import { presentAssignment } from './present';
 /** A studio's assignments, latest due first: every player's progress for the teacher, one's own for a player. */
 export async function listStudioAssignments(db: Db, user: User, studioId: string): Promise<Assignment[]> {
   const { studio, role } = await studioAccess(db, user, studioId);
-  const rows = await db.select().from(assignments).where(eq(assignments.studioId, studioId)).orderBy(desc(assignments.dueAt), desc(assignments.createdAt));
+  const rows = await db
+    .select()
+    .from(assignments)
+    .where(eq(assignments.studioId, studioId))
+    .orderBy(desc(assignments.dueAt), desc(assignments.createdAt));
   const seesAll = role !== 'player';
   const progress = await assignmentProgress(
     db,
@@ -44,5 +48,7 @@ export async function listMyAssignments(db: Db, player: User): Promise<Assignmen
     rows.map((r) => r.id),
     player.id,
   );
-  return rows.map((r) => presentAssignment(r, names.get(r.studioId) ?? '', progress.get(r.id) ?? [], { id: player.id, seesAll: false }));
+  return rows.map((r) =>
+    presentAssignment(r, names.get(r.studioId) ?? '', progress.get(r.id) ?? [], { id: player.id, seesAll: false }),
+  );
 }

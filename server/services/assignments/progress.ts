@@ -19,7 +19,13 @@ export async function assignmentProgress(
     assignmentIds.map((id) => sql`${id}::uuid`),
     sql`, `,
   );
-  const result = await db.execute<{ assignment_id: string; player_id: string; keys_met: string[]; met: boolean; past_due: boolean }>(sql`
+  const result = await db.execute<{
+    assignment_id: string;
+    player_id: string;
+    keys_met: string[];
+    met: boolean;
+    past_due: boolean;
+  }>(sql`
     SELECT a.id AS assignment_id, m.player_id,
            coalesce(array_agg(DISTINCT t.key) FILTER (WHERE t.key IS NOT NULL), '{}'::text[]) AS keys_met,
            a.keys <@ coalesce(array_agg(DISTINCT t.key) FILTER (WHERE t.key IS NOT NULL), '{}'::text[]) AS met,

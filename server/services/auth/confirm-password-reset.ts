@@ -29,7 +29,11 @@ export async function confirmPasswordReset(db: Db, input: PasswordResetConfirmIn
       )
       .returning({ userId: passwordResets.userId });
     if (!reset) throw spent();
-    const [user] = await tx.update(users).set({ passwordHash }).where(eq(users.id, reset.userId)).returning({ email: users.email });
+    const [user] = await tx
+      .update(users)
+      .set({ passwordHash })
+      .where(eq(users.id, reset.userId))
+      .returning({ email: users.email });
     // Any other links for this account are spent too.
     await tx
       .update(passwordResets)

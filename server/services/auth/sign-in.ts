@@ -61,7 +61,10 @@ export async function signIn(db: Db, input: SignInInput & { ip: string }, limits
     throw mismatch();
   }
   if (user.disabled) {
-    throw new AppError('unauthenticated', 'This account has been switched off; ask the admin of this Sixfold to switch it back on');
+    throw new AppError(
+      'unauthenticated',
+      'This account has been switched off; ask the admin of this Sixfold to switch it back on',
+    );
   }
   // A good sign-in clears the address's own count (not the IP's).
   await db.delete(signInFailures).where(eq(signInFailures.email, input.email));

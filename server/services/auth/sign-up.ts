@@ -6,7 +6,10 @@ import { AppError } from '../../errors';
 import { hashPassword } from './password-hash';
 import { presentUser } from './present-user';
 
-const taken = () => new AppError('conflict', 'An account already uses this address', { email: ['An account already uses this address; sign in or reset the password'] });
+const taken = () =>
+  new AppError('conflict', 'An account already uses this address', {
+    email: ['An account already uses this address; sign in or reset the password'],
+  });
 
 /** Creates a player or teacher account (admins are made by hand, never by sign-up). */
 export async function signUp(db: Db, input: SignUpInput): Promise<User> {

@@ -29,7 +29,11 @@ export async function accessTo(db: Db, viewer: User | undefined, book: BookRow):
 }
 
 /** A book the viewer may see (published, or their own draft), with their access; else 404. */
-export async function loadVisibleBook(db: Db, viewer: User | undefined, id: string): Promise<{ book: BookRow; access: BookAccess }> {
+export async function loadVisibleBook(
+  db: Db,
+  viewer: User | undefined,
+  id: string,
+): Promise<{ book: BookRow; access: BookAccess }> {
   if (!isId(id)) throw notFound('That book');
   const [book] = await db.select().from(books).where(eq(books.id, id)).limit(1);
   if (!book) throw notFound('That book');

@@ -12,7 +12,12 @@ import { presentBookDrill } from './present';
  * One drill of a book, in full, for its teacher, a buyer, anyone on a free book, or anyone
  * when it is the free drill. Everyone else gets 404, exactly as for a drill that is not there.
  */
-export async function getBookDrill(db: Db, viewer: User | undefined, bookId: string, drillId: string): Promise<BookDrill> {
+export async function getBookDrill(
+  db: Db,
+  viewer: User | undefined,
+  bookId: string,
+  drillId: string,
+): Promise<BookDrill> {
   const { access } = await loadVisibleBook(db, viewer, bookId);
   if (!isId(drillId)) throw notFound('That drill');
   const [row] = await db

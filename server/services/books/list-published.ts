@@ -7,7 +7,12 @@ import { drillsByBook, presentBook, teachersById } from './present';
 
 /** The catalogue: every published book, newest first, with the viewer's access to each. */
 export async function listPublishedBooks(db: Db, viewer: User | undefined): Promise<Book[]> {
-  const rows = await db.select().from(books).where(eq(books.published, true)).orderBy(desc(books.publishedAt)).limit(500);
+  const rows = await db
+    .select()
+    .from(books)
+    .where(eq(books.published, true))
+    .orderBy(desc(books.publishedAt))
+    .limit(500);
   const ids = rows.map((r) => r.id);
   const bought = new Set<string>();
   if (viewer && ids.length > 0) {
@@ -18,10 +23,19 @@ export async function listPublishedBooks(db: Db, viewer: User | undefined): Prom
     for (const p of paid) bought.add(p.bookId);
   }
   const drills = await drillsByBook(db, ids);
-  const teachers = await teachersById(db, rows.map((r) => r.teacherId));
+  const teachers = await teachersById(
+    db,
+    rows.map((r) => r.teacherId),
+  );
   return rows.map((r) => {
     const access: BookAccess =
-      viewer?.id === r.teacherId ? 'owner' : r.priceMinor === 0 ? 'free-book' : bought.has(r.id) ? 'bought' : 'free-drill-only';
+      viewer?.id === r.teacherId
+        ? 'owner'
+        : r.priceMinor === 0
+          ? 'free-book'
+          : bought.has(r.id)
+            ? 'bought'
+            : 'free-drill-only';
     return presentBook(r, teachers.get(r.teacherId)!, drills.get(r.id) ?? [], access);
   });
 }

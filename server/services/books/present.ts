@@ -12,7 +12,14 @@ export function drillSummary(spec: DrillSpec): string {
 }
 
 export function presentEntry(row: BookDrillRow): BookDrillEntry {
-  return { id: row.id, title: row.title, note: row.note, free: row.free, summary: drillSummary(row.spec), keyCycle: row.keyCycle ?? null };
+  return {
+    id: row.id,
+    title: row.title,
+    note: row.note,
+    free: row.free,
+    summary: drillSummary(row.spec),
+    keyCycle: row.keyCycle ?? null,
+  };
 }
 
 export function presentBookDrill(row: BookDrillRow): BookDrill {
@@ -23,18 +30,30 @@ export function presentBookDrill(row: BookDrillRow): BookDrill {
 export async function drillsByBook(db: Db, bookIds: string[]): Promise<Map<string, BookDrillRow[]>> {
   const map = new Map<string, BookDrillRow[]>(bookIds.map((id) => [id, []]));
   if (bookIds.length === 0) return map;
-  const rows = await db.select().from(bookDrills).where(inArray(bookDrills.bookId, bookIds)).orderBy(asc(bookDrills.bookId), asc(bookDrills.position));
+  const rows = await db
+    .select()
+    .from(bookDrills)
+    .where(inArray(bookDrills.bookId, bookIds))
+    .orderBy(asc(bookDrills.bookId), asc(bookDrills.position));
   for (const r of rows) map.get(r.bookId)?.push(r);
   return map;
 }
 
 export async function teachersById(db: Db, ids: string[]): Promise<Map<string, { id: string; name: string }>> {
   if (ids.length === 0) return new Map();
-  const rows = await db.select({ id: users.id, name: users.name }).from(users).where(inArray(users.id, [...new Set(ids)]));
+  const rows = await db
+    .select({ id: users.id, name: users.name })
+    .from(users)
+    .where(inArray(users.id, [...new Set(ids)]));
   return new Map(rows.map((r) => [r.id, r]));
 }
 
-export function presentBook(row: BookRow, teacher: { id: string; name: string }, drills: BookDrillRow[], access: BookAccess): Book {
+export function presentBook(
+  row: BookRow,
+  teacher: { id: string; name: string },
+  drills: BookDrillRow[],
+  access: BookAccess,
+): Book {
   return {
     id: row.id,
     title: row.title,

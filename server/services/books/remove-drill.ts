@@ -22,9 +22,15 @@ export async function removeBookDrill(db: Db, teacher: User, bookId: string, dri
       .where(and(eq(bookDrills.id, drillId), eq(bookDrills.bookId, bookId)))
       .returning();
     if (!gone) throw notFound('That drill');
-    const rest = await tx.select().from(bookDrills).where(eq(bookDrills.bookId, bookId)).orderBy(asc(bookDrills.position));
-    if (book.published && rest.length === 0) throw new AppError('bad_request', 'A published book keeps at least one drill; unpublish it first');
-    if (gone.free && book.published) await tx.update(bookDrills).set({ free: true }).where(eq(bookDrills.id, rest[0].id));
+    const rest = await tx
+      .select()
+      .from(bookDrills)
+      .where(eq(bookDrills.bookId, bookId))
+      .orderBy(asc(bookDrills.position));
+    if (book.published && rest.length === 0)
+      throw new AppError('bad_request', 'A published book keeps at least one drill; unpublish it first');
+    if (gone.free && book.published)
+      await tx.update(bookDrills).set({ free: true }).where(eq(bookDrills.id, rest[0].id));
     const [after] = await tx.update(books).set({ updatedAt: new Date() }).where(eq(books.id, book.id)).returning();
     return after;
   });

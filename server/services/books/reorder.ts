@@ -16,9 +16,12 @@ export async function reorderBook(db: Db, teacher: User, bookId: string, input: 
     const have = new Set(current.map((d) => d.id));
     const given = new Set(input.drillIds);
     if (given.size !== input.drillIds.length || given.size !== have.size || ![...given].every((id) => have.has(id))) {
-      throw new AppError('validation', 'List every drill of the book once', { drillIds: ['List every drill of the book once'] });
+      throw new AppError('validation', 'List every drill of the book once', {
+        drillIds: ['List every drill of the book once'],
+      });
     }
-    for (const [position, id] of input.drillIds.entries()) await tx.update(bookDrills).set({ position }).where(eq(bookDrills.id, id));
+    for (const [position, id] of input.drillIds.entries())
+      await tx.update(bookDrills).set({ position }).where(eq(bookDrills.id, id));
     const [after] = await tx.update(books).set({ updatedAt: new Date() }).where(eq(books.id, book.id)).returning();
     return after;
   });

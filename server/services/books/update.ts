@@ -16,9 +16,17 @@ export async function updateBook(db: Db, teacher: User, id: string, input: Updat
   const row = await db.transaction(async (tx) => {
     const [before] = await tx.select().from(books).where(eq(books.id, id)).for('update');
     if (input.published && !before.published) {
-      const drills = await tx.select().from(bookDrills).where(eq(bookDrills.bookId, id)).orderBy(asc(bookDrills.position));
-      if (drills.length === 0) throw new AppError('validation', 'Add at least one drill before publishing', { published: ['Add at least one drill before publishing'] });
-      if (!drills.some((d) => d.free)) await tx.update(bookDrills).set({ free: true }).where(eq(bookDrills.id, drills[0].id));
+      const drills = await tx
+        .select()
+        .from(bookDrills)
+        .where(eq(bookDrills.bookId, id))
+        .orderBy(asc(bookDrills.position));
+      if (drills.length === 0)
+        throw new AppError('validation', 'Add at least one drill before publishing', {
+          published: ['Add at least one drill before publishing'],
+        });
+      if (!drills.some((d) => d.free))
+        await tx.update(bookDrills).set({ free: true }).where(eq(bookDrills.id, drills[0].id));
     }
     const publishedAt = input.published === true && !before.published ? new Date() : undefined;
     const [after] = await tx

@@ -11,5 +11,7 @@ export async function listOutbox(db: Db, opts: { to?: string; limit?: number } =
     .where(opts.to ? eq(devOutbox.to, opts.to) : undefined)
     .orderBy(desc(devOutbox.id))
     .limit(opts.limit ?? 200);
-  return rows.reverse().map((r) => ({ to: r.to, subject: r.subject, text: r.text, html: r.html, sentAt: r.sentAt.toISOString() }));
+  return rows
+    .reverse()
+    .map((r) => ({ to: r.to, subject: r.subject, text: r.text, html: r.html, sentAt: r.sentAt.toISOString() }));
 }

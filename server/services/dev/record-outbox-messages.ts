@@ -7,7 +7,7 @@ export async function recordOutboxMessages(
   msg: { recipients: string[]; from: string; subject: string; text: string; html: string },
 ): Promise<void> {
   if (msg.recipients.length === 0) return;
-  await db.insert(devOutbox).values(
-    msg.recipients.map((to) => ({ to, from: msg.from, subject: msg.subject, text: msg.text, html: msg.html })),
-  );
+  await db
+    .insert(devOutbox)
+    .values(msg.recipients.map((to) => ({ to, from: msg.from, subject: msg.subject, text: msg.text, html: msg.html })));
 }

@@ -9,7 +9,12 @@ import { visibleOwnerIds } from './visible-owner-ids';
 /** The user's own saved drills and their studios' teachers', newest change first. */
 export async function listSavedDrills(db: Db, user: User): Promise<SavedDrill[]> {
   const ownerIds = await visibleOwnerIds(db, user);
-  const rows = await db.select().from(savedDrills).where(inArray(savedDrills.ownerId, ownerIds)).orderBy(desc(savedDrills.updatedAt)).limit(500);
+  const rows = await db
+    .select()
+    .from(savedDrills)
+    .where(inArray(savedDrills.ownerId, ownerIds))
+    .orderBy(desc(savedDrills.updatedAt))
+    .limit(500);
   const owners = await ownersById(db, ownerIds);
   return rows.map((r) => presentSavedDrill(r, owners.get(r.ownerId)!, user));
 }

@@ -9,12 +9,18 @@ type Owner = SavedDrill['owner'];
 /** Owners by id, for presenting rows of several owners at once. */
 export async function ownersById(db: Db, ids: string[]): Promise<Map<string, Owner>> {
   if (ids.length === 0) return new Map();
-  const rows = await db.select({ id: users.id, name: users.name, role: users.role }).from(users).where(inArray(users.id, ids));
+  const rows = await db
+    .select({ id: users.id, name: users.name, role: users.role })
+    .from(users)
+    .where(inArray(users.id, ids));
   return new Map(rows.map((r) => [r.id, r]));
 }
 
 export async function ownerOf(db: Db, id: string): Promise<Owner> {
-  const [row] = await db.select({ id: users.id, name: users.name, role: users.role }).from(users).where(eq(users.id, id));
+  const [row] = await db
+    .select({ id: users.id, name: users.name, role: users.role })
+    .from(users)
+    .where(eq(users.id, id));
   return row;
 }
 

@@ -11,7 +11,9 @@ export function specFromQuery(raw: string, prefix?: string): DrillSpec {
   try {
     json = JSON.parse(raw);
   } catch {
-    throw new AppError('validation', 'The spec is not valid JSON', { spec: ['Send the drill spec as URL-encoded JSON'] });
+    throw new AppError('validation', 'The spec is not valid JSON', {
+      spec: ['Send the drill spec as URL-encoded JSON'],
+    });
   }
   const parsed = DrillSpec.safeParse(json);
   if (parsed.success) return parsed.data;

@@ -9,7 +9,12 @@ import { presentSavedDrill } from './present';
 import { isId } from './visible-owner-ids';
 
 /** Renames or changes the user's own saved drill; anyone else's (even a readable one) is 404. */
-export async function updateSavedDrill(db: Db, user: User, id: string, input: UpdateSavedDrillInput): Promise<SavedDrill> {
+export async function updateSavedDrill(
+  db: Db,
+  user: User,
+  id: string,
+  input: UpdateSavedDrillInput,
+): Promise<SavedDrill> {
   if (!isId(id)) throw notFound('That drill');
   if (input.spec) assertPlayable(input.spec);
   const [row] = await db

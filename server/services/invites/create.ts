@@ -36,7 +36,9 @@ export async function createInvite(
     .returning();
   const link = `${input.origin}/invite?token=${encodeURIComponent(token)}`;
   try {
-    await mailer.send(studioInviteMail({ to: input.email, teacher: teacher.name, studio: studio.name, link, days: INVITE_DAYS }));
+    await mailer.send(
+      studioInviteMail({ to: input.email, teacher: teacher.name, studio: studio.name, link, days: INVITE_DAYS }),
+    );
   } catch (err) {
     console.error('[mail] the invite could not be sent:', err instanceof Error ? err.message : err);
     await db.delete(studioInvites).where(eq(studioInvites.id, row.id));

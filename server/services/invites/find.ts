@@ -6,7 +6,8 @@ import { hashInviteToken } from './token';
 
 type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
 
-const gone = () => new AppError('not_found', 'This invite link has been used or has expired; ask your teacher for a new one');
+const gone = () =>
+  new AppError('not_found', 'This invite link has been used or has expired; ask your teacher for a new one');
 
 /**
  * The invite behind a token while it still works (not used, not expired), with its studio.

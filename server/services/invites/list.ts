@@ -12,7 +12,9 @@ export async function listInvites(db: Db, teacher: User, studioId: string): Prom
   const rows = await db
     .select()
     .from(studioInvites)
-    .where(and(eq(studioInvites.studioId, studioId), isNull(studioInvites.usedAt), gt(studioInvites.expiresAt, new Date())))
+    .where(
+      and(eq(studioInvites.studioId, studioId), isNull(studioInvites.usedAt), gt(studioInvites.expiresAt, new Date())),
+    )
     .orderBy(desc(studioInvites.createdAt));
   return rows.map(presentInvite);
 }

@@ -21,12 +21,29 @@ export function streaks(days: string[], today: string): { current: number; longe
 }
 
 /** Practice minutes and takes per day in the player's time zone, with streaks. */
-export async function practiceCalendar(db: Db, playerId: string, q: ChartQuery, now = new Date()): Promise<CalendarResponse> {
+export async function practiceCalendar(
+  db: Db,
+  playerId: string,
+  q: ChartQuery,
+  now = new Date(),
+): Promise<CalendarResponse> {
   const { rows } = await db.execute<PracticeDay>(sql`
     SELECT to_char((t.started_at AT TIME ZONE ${q.tz})::date, 'YYYY-MM-DD') AS day,
            round((sum(COALESCE(t.duration_ms, 0)) / 60000.0)::numeric, 1)::float8 AS minutes, count(*)::int AS takes
     FROM takes t WHERE ${takeWhere(playerId, q)}
     GROUP BY 1 ORDER BY 1`);
-  const today = new Intl.DateTimeFormat('en-CA', { timeZone: q.tz, year: 'numeric', month: '2-digit', day: '2-digit' }).format(now);
-  return { days: rows, streak: streaks(rows.map((r) => r.day), today), today };
+  const today = new Intl.DateTimeFormat('en-CA', {
+    timeZone: q.tz,
+    year: 'numeric',
+    month: '2-digit',
+    day: '2-digit',
+  }).format(now);
+  return {
+    days: rows,
+    streak: streaks(
+      rows.map((r) => r.day),
+      today,
+    ),
+    today,
+  };
 }

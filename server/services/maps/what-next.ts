@@ -43,7 +43,10 @@ export async function whatNext(db: Db, playerId: string, now = new Date()): Prom
       return { ...c, rate, score: rate * (1 + c.days_since / NEXT_WINDOW_DAYS) };
     })
     .filter((c) => c.errors > 0)
-    .sort((a, b) => b.score - a.score || b.notes - a.notes || order(a.key) - order(b.key) || a.pattern.localeCompare(b.pattern))
+    .sort(
+      (a, b) =>
+        b.score - a.score || b.notes - a.notes || order(a.key) - order(b.key) || a.pattern.localeCompare(b.pattern),
+    )
     .slice(0, WEAK);
 
   // Patterns the player plays (latest first) and the keys each has ever been played in.

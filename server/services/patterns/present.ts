@@ -3,7 +3,11 @@ import type { CustomPattern } from '../../../shared/schemas/drills';
 import type { CustomPatternRow } from '../../db/schema';
 
 /** A custom pattern as the API shows it: with its owner's name, and whether the viewer owns it. */
-export function presentCustomPattern(row: CustomPatternRow, owner: CustomPattern['owner'], viewer: User): CustomPattern {
+export function presentCustomPattern(
+  row: CustomPatternRow,
+  owner: CustomPattern['owner'],
+  viewer: User,
+): CustomPattern {
   return {
     id: row.id,
     name: row.name,

@@ -21,7 +21,14 @@ export async function climbTempo(tx: Tx, playerId: string, scored: ScoredTake, w
   const verdict = climbVerdict(take, hitWindowMs);
   await tx
     .insert(tempoClimbs)
-    .values({ playerId, drill: drillShape(scored.drill.spec), key: scored.key, tempo, lastTempo: played, lastVerdict: verdict })
+    .values({
+      playerId,
+      drill: drillShape(scored.drill.spec),
+      key: scored.key,
+      tempo,
+      lastTempo: played,
+      lastVerdict: verdict,
+    })
     .onConflictDoUpdate({
       target: [tempoClimbs.playerId, tempoClimbs.drill, tempoClimbs.key],
       set: { tempo, lastTempo: played, lastVerdict: verdict, updatedAt: sql`now()` },

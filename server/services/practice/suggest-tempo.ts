@@ -9,7 +9,20 @@ export async function suggestTempo(db: Db, playerId: string, spec: DrillSpec) {
   const [row] = await db
     .select()
     .from(tempoClimbs)
-    .where(and(eq(tempoClimbs.playerId, playerId), eq(tempoClimbs.drill, drillShape(spec)), eq(tempoClimbs.key, drillKey(spec))))
+    .where(
+      and(
+        eq(tempoClimbs.playerId, playerId),
+        eq(tempoClimbs.drill, drillShape(spec)),
+        eq(tempoClimbs.key, drillKey(spec)),
+      ),
+    )
     .limit(1);
-  return row ? { tempo: row.tempo, lastTempo: row.lastTempo, lastVerdict: row.lastVerdict, updatedAt: row.updatedAt.toISOString() } : null;
+  return row
+    ? {
+        tempo: row.tempo,
+        lastTempo: row.lastTempo,
+        lastVerdict: row.lastVerdict,
+        updatedAt: row.updatedAt.toISOString(),
+      }
+    : null;
 }

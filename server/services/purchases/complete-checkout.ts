@@ -24,7 +24,12 @@ interface Grant {
  * book. The receipt is e-mailed after the grant is committed.
  * Returns whether this delivery granted access.
  */
-export async function completeCheckout(db: Db, mailer: Mailer, origin: string | null, event: Stripe.Event): Promise<boolean> {
+export async function completeCheckout(
+  db: Db,
+  mailer: Mailer,
+  origin: string | null,
+  event: Stripe.Event,
+): Promise<boolean> {
   const grant = await db.transaction(async (tx): Promise<Grant | null> => {
     const session = event.type === 'checkout.session.completed' ? event.data.object : null;
     const [fresh] = await tx
@@ -50,20 +55,35 @@ export async function completeCheckout(db: Db, mailer: Mailer, origin: string | 
     }
     if (purchase.status !== 'pending') return null;
     if (session.amount_total !== purchase.amountMinor || (session.currency ?? '').toUpperCase() !== purchase.currency) {
-      console.warn(`[payments] session ${session.id} paid ${session.amount_total} ${session.currency}, expected ${purchase.amountMinor} ${purchase.currency}: not granted`);
+      console.warn(
+        `[payments] session ${session.id} paid ${session.amount_total} ${session.currency}, expected ${purchase.amountMinor} ${purchase.currency}: not granted`,
+      );
       return null;
     }
     const [already] = await tx
       .select({ id: purchases.id })
       .from(purchases)
-      .where(and(eq(purchases.bookId, purchase.bookId), eq(purchases.playerId, purchase.playerId), eq(purchases.status, 'paid'), ne(purchases.id, purchase.id)));
+      .where(
+        and(
+          eq(purchases.bookId, purchase.bookId),
+          eq(purchases.playerId, purchase.playerId),
+          eq(purchases.status, 'paid'),
+          ne(purchases.id, purchase.id),
+        ),
+      );
     if (already) {
-      console.warn(`[payments] session ${session.id} paid for a book the player already has (purchase ${already.id}); refund it from the admin page`);
+      console.warn(
+        `[payments] session ${session.id} paid for a book the player already has (purchase ${already.id}); refund it from the admin page`,
+      );
       return null;
     }
-    const paymentIntent = typeof session.payment_intent === 'string' ? session.payment_intent : (session.payment_intent?.id ?? null);
+    const paymentIntent =
+      typeof session.payment_intent === 'string' ? session.payment_intent : (session.payment_intent?.id ?? null);
     const paidAt = new Date();
-    await tx.update(purchases).set({ status: 'paid', paymentIntentId: paymentIntent, paidAt }).where(eq(purchases.id, purchase.id));
+    await tx
+      .update(purchases)
+      .set({ status: 'paid', paymentIntentId: paymentIntent, paidAt })
+      .where(eq(purchases.id, purchase.id));
     const [info] = await tx
       .select({ title: books.title, teacherId: books.teacherId, email: users.email, name: users.name })
       .from(books)

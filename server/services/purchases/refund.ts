@@ -15,7 +15,8 @@ import { getPurchase } from './list';
 export async function refundPurchase(db: Db, env: Env, admin: User, id: string): Promise<AdminPurchase> {
   const [purchase] = await db.select().from(purchases).where(eq(purchases.id, id));
   if (!purchase) throw notFound('That purchase');
-  if (purchase.status !== 'paid' || !purchase.paymentIntentId) throw new AppError('conflict', 'Only a paid purchase can be refunded');
+  if (purchase.status !== 'paid' || !purchase.paymentIntentId)
+    throw new AppError('conflict', 'Only a paid purchase can be refunded');
   let refundId: string;
   try {
     const refund = await paymentsClient(env).refunds.create({ payment_intent: purchase.paymentIntentId });
@@ -37,7 +38,13 @@ export async function refundPurchase(db: Db, env: Env, admin: User, id: string):
       actorId: admin.id,
       targetId: purchase.playerId,
       action: 'purchase.refund',
-      detail: { purchaseId: id, bookId: purchase.bookId, book: book?.title ?? '', amount: formatPrice(purchase.amountMinor, purchase.currency), refundId },
+      detail: {
+        purchaseId: id,
+        bookId: purchase.bookId,
+        book: book?.title ?? '',
+        amount: formatPrice(purchase.amountMinor, purchase.currency),
+        refundId,
+      },
     });
   });
   return (await getPurchase(db, id))!;

@@ -10,7 +10,13 @@ import { loadVisibleBook } from '../books/access';
  * Opens a hosted checkout for a priced book and returns its page's address. A pending purchase
  * row is kept under the session id; only the signed webhook ever marks it paid.
  */
-export async function startCheckout(db: Db, env: Env, buyer: User, bookId: string, origin: string): Promise<{ url: string }> {
+export async function startCheckout(
+  db: Db,
+  env: Env,
+  buyer: User,
+  bookId: string,
+  origin: string,
+): Promise<{ url: string }> {
   const { book, access } = await loadVisibleBook(db, buyer, bookId);
   if (access === 'owner') throw new AppError('bad_request', 'This is your own book');
   if (access === 'free-book') throw new AppError('bad_request', 'This book is free: open any drill in it');
@@ -23,7 +29,11 @@ export async function startCheckout(db: Db, env: Env, buyer: User, bookId: strin
       line_items: [
         {
           quantity: 1,
-          price_data: { currency: book.currency.toLowerCase(), unit_amount: book.priceMinor, product_data: { name: `${book.title} (Sixfold drill book)` } },
+          price_data: {
+            currency: book.currency.toLowerCase(),
+            unit_amount: book.priceMinor,
+            product_data: { name: `${book.title} (Sixfold drill book)` },
+          },
         },
       ],
       success_url: `${back}?checkout=done`,

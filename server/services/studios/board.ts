@@ -21,7 +21,12 @@ export async function getStudioBoard(db: Db, teacher: User, studioId: string): P
     .innerJoin(users, eq(users.id, studioMembers.playerId))
     .where(eq(studioMembers.studioId, studioId))
     .orderBy(asc(users.name));
-  const rows = await db.select().from(assignments).where(eq(assignments.studioId, studioId)).orderBy(desc(assignments.dueAt)).limit(12);
+  const rows = await db
+    .select()
+    .from(assignments)
+    .where(eq(assignments.studioId, studioId))
+    .orderBy(desc(assignments.dueAt))
+    .limit(12);
   const progress = await assignmentProgress(
     db,
     rows.map((r) => r.id),
@@ -40,7 +45,9 @@ export async function getStudioBoard(db: Db, teacher: User, studioId: string): P
     GROUP BY 1`);
   const lastOf = new Map(last.rows.map((r) => [r.player_id, new Date(r.last).toISOString()]));
   return {
-    assignments: rows.map((r) => presentAssignment(r, studio.name, progress.get(r.id) ?? [], { id: teacher.id, seesAll: true })),
+    assignments: rows.map((r) =>
+      presentAssignment(r, studio.name, progress.get(r.id) ?? [], { id: teacher.id, seesAll: true }),
+    ),
     rows: players.map((p) => {
       const trend: (number | null)[] = Array(TREND_WEEKS).fill(null);
       let takesThisWeek = 0;

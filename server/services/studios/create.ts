@@ -6,6 +6,9 @@ import { getStudio } from './get';
 
 /** A new, empty studio taught by the user. */
 export async function createStudio(db: Db, teacher: User, input: CreateStudioInput): Promise<StudioDetail> {
-  const [row] = await db.insert(studios).values({ name: input.name, teacherId: teacher.id }).returning({ id: studios.id });
+  const [row] = await db
+    .insert(studios)
+    .values({ name: input.name, teacherId: teacher.id })
+    .returning({ id: studios.id });
   return getStudio(db, teacher, row.id);
 }

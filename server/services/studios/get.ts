@@ -19,7 +19,11 @@ export async function getStudio(db: Db, user: User, id: string): Promise<StudioD
     .select({ id: users.id, name: users.name, email: users.email })
     .from(studioMembers)
     .innerJoin(users, eq(users.id, studioMembers.playerId))
-    .where(access.role === 'player' ? and(eq(studioMembers.studioId, id), eq(studioMembers.playerId, user.id)) : eq(studioMembers.studioId, id))
+    .where(
+      access.role === 'player'
+        ? and(eq(studioMembers.studioId, id), eq(studioMembers.playerId, user.id))
+        : eq(studioMembers.studioId, id),
+    )
     .orderBy(asc(users.name));
   return { ...studio, players };
 }

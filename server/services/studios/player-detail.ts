@@ -7,10 +7,18 @@ import { listStudioAssignments } from '../assignments/list';
 import { assertStudioPlayer, teacherAccess } from './access';
 
 /** One player of the studio as the teacher reviews them: latest takes, and each assignment's status. */
-export async function getStudioPlayer(db: Db, teacher: User, studioId: string, playerId: string): Promise<StudioPlayerResponse> {
+export async function getStudioPlayer(
+  db: Db,
+  teacher: User,
+  studioId: string,
+  playerId: string,
+): Promise<StudioPlayerResponse> {
   await teacherAccess(db, teacher, studioId);
   await assertStudioPlayer(db, studioId, playerId);
-  const [player] = await db.select({ id: users.id, name: users.name, email: users.email }).from(users).where(eq(users.id, playerId));
+  const [player] = await db
+    .select({ id: users.id, name: users.name, email: users.email })
+    .from(users)
+    .where(eq(users.id, playerId));
   const rows = await db
     .select({
       id: takes.id,

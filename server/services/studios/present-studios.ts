@@ -8,7 +8,13 @@ import { studioMembers, studios, users } from '../../db/schema';
 export async function presentStudios(db: Db, viewer: User, ids: string[]): Promise<Studio[]> {
   if (ids.length === 0) return [];
   const rows = await db
-    .select({ id: studios.id, name: studios.name, teacherId: users.id, teacherName: users.name, teacherEmail: users.email })
+    .select({
+      id: studios.id,
+      name: studios.name,
+      teacherId: users.id,
+      teacherName: users.name,
+      teacherEmail: users.email,
+    })
     .from(studios)
     .innerJoin(users, eq(users.id, studios.teacherId))
     .where(inArray(studios.id, ids))
@@ -35,7 +41,11 @@ export async function presentStudios(db: Db, viewer: User, ids: string[]): Promi
       teacher: { id: r.teacherId, name: r.teacherName, email: r.teacherEmail },
       playerCount: countOf.get(r.id) ?? 0,
       ...(mayList
-        ? { members: members.filter((m) => m.studioId === r.id).map((m) => ({ id: m.id, name: m.name, joinedAt: m.joinedAt.toISOString() })) }
+        ? {
+            members: members
+              .filter((m) => m.studioId === r.id)
+              .map((m) => ({ id: m.id, name: m.name, joinedAt: m.joinedAt.toISOString() })),
+          }
         : {}),
     };
   });

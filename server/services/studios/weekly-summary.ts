@@ -22,7 +22,12 @@ export interface SummaryRun {
   week: string;
 }
 
-async function summaryFor(db: Db, studio: { id: string; name: string; teacherName: string; teacherEmail: string }, week: string, origin: string) {
+async function summaryFor(
+  db: Db,
+  studio: { id: string; name: string; teacherName: string; teacherEmail: string },
+  week: string,
+  origin: string,
+) {
   const players = await db.execute<{ id: string; name: string; takes: number; accuracy: number | null }>(sql`
     SELECT u.id, u.name, count(t.id)::int AS takes, avg(t.accuracy)::float8 AS accuracy
     FROM studio_members m
@@ -61,13 +66,23 @@ async function summaryFor(db: Db, studio: { id: string; name: string; teacherNam
  * at a time (the others return at once), and a row per studio and week remembers what went
  * out, so a later call the same week sends nothing. `force` sends again even so (the command).
  */
-export async function sendWeeklySummaries(db: Db, mailer: Mailer, opts: { origin: string; now?: Date; force?: boolean }): Promise<SummaryRun> {
+export async function sendWeeklySummaries(
+  db: Db,
+  mailer: Mailer,
+  opts: { origin: string; now?: Date; force?: boolean },
+): Promise<SummaryRun> {
   const week = weekOf(opts.now ?? new Date());
   return db.transaction(async (tx) => {
     const lock = await tx.execute<{ ok: boolean }>(sql`SELECT pg_try_advisory_xact_lock(${SUMMARY_LOCK_KEY}) AS ok`);
     if (!lock.rows[0]?.ok) return { locked: true, sent: 0, week };
     const list = await tx
-      .select({ id: studios.id, name: studios.name, teacherName: users.name, teacherEmail: users.email, sent: weeklySummaries.week })
+      .select({
+        id: studios.id,
+        name: studios.name,
+        teacherName: users.name,
+        teacherEmail: users.email,
+        sent: weeklySummaries.week,
+      })
       .from(studios)
       .innerJoin(users, eq(users.id, studios.teacherId))
       .leftJoin(weeklySummaries, and(eq(weeklySummaries.studioId, studios.id), eq(weeklySummaries.week, week)))

@@ -83,7 +83,12 @@ export async function createTake(db: Db, args: CreateTakeArgs): Promise<{ take: 
         FROM jsonb_to_recordset(${JSON.stringify(rows)}::jsonb)
           AS x(idx int, midi int, beat real, measure int, position real, verdict text, offset_ms real)`);
     }
-    await climbTempo(tx, args.playerId, scored, !args.measures && (args.stoppedAtMs === undefined || args.stoppedAtMs === null));
+    await climbTempo(
+      tx,
+      args.playerId,
+      scored,
+      !args.measures && (args.stoppedAtMs === undefined || args.stoppedAtMs === null),
+    );
     return { take: inserted[0], created: true };
   });
 }

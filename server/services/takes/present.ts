@@ -8,7 +8,10 @@ export function presentTake(row: TakeRow) {
     assignmentId: row.assignmentId,
     spec: row.spec,
     options: row.options,
-    measures: row.measureFrom !== null && row.measureTo !== null ? ([row.measureFrom, row.measureTo] as [number, number]) : null,
+    measures:
+      row.measureFrom !== null && row.measureTo !== null
+        ? ([row.measureFrom, row.measureTo] as [number, number])
+        : null,
     stoppedAtMs: row.stoppedAtMs,
     played: row.played,
     score: row.score,

@@ -31,7 +31,8 @@ const clamp = (v: number, lo: number, hi: number) => Math.min(hi, Math.max(lo, v
 /** Keeps the client's options inside the bounds and the tempo at the drill's own. */
 export function boundOptions(options: ScoreOptions, tempo: number): ScoreOptions {
   const bounded: ScoreOptions = { ...options, tempo };
-  if (bounded.hitWindowMs !== undefined) bounded.hitWindowMs = clamp(bounded.hitWindowMs, WINDOW_BOUNDS.hitMin, WINDOW_BOUNDS.hitMax);
+  if (bounded.hitWindowMs !== undefined)
+    bounded.hitWindowMs = clamp(bounded.hitWindowMs, WINDOW_BOUNDS.hitMin, WINDOW_BOUNDS.hitMax);
   if (bounded.matchWindowMs !== undefined) {
     const floor = bounded.hitWindowMs ?? WINDOW_BOUNDS.hitMin;
     bounded.matchWindowMs = clamp(bounded.matchWindowMs, floor, WINDOW_BOUNDS.matchMax);
@@ -61,7 +62,8 @@ export function scoreRawTake(input: {
   const options = boundOptions(input.options, drill.spec.tempo);
   const msPerBeat = 60000 / drill.spec.tempo;
   const stop = input.stoppedAtMs;
-  const expected = stop === undefined || stop === null ? drill.notes : drill.notes.filter((n) => n.beat * msPerBeat <= stop);
+  const expected =
+    stop === undefined || stop === null ? drill.notes : drill.notes.filter((n) => n.beat * msPerBeat <= stop);
   const score = scoreTake(expected, input.played, options);
   return {
     drill,

@@ -11,7 +11,12 @@ import { endSessions } from '../auth/end-sessions';
  * session of the account at once. Each change is written to the audit log in the same
  * transaction. An admin may not demote or switch off their own account (no locking out).
  */
-export async function updateUserByAdmin(db: Db, admin: User, userId: string, input: UpdateAdminUserInput): Promise<AdminUser> {
+export async function updateUserByAdmin(
+  db: Db,
+  admin: User,
+  userId: string,
+  input: UpdateAdminUserInput,
+): Promise<AdminUser> {
   if (userId === admin.id) throw new AppError('bad_request', 'Change your own account from another admin account');
   return db.transaction(async (tx) => {
     const [before] = await tx.select().from(users).where(eq(users.id, userId)).for('update').limit(1);
@@ -19,7 +24,12 @@ export async function updateUserByAdmin(db: Db, admin: User, userId: string, inp
     const changes: Partial<typeof users.$inferInsert> = {};
     if (input.role !== undefined && input.role !== before.role) {
       changes.role = input.role;
-      await tx.insert(auditLog).values({ actorId: admin.id, targetId: userId, action: 'role.change', detail: { from: before.role, to: input.role } });
+      await tx.insert(auditLog).values({
+        actorId: admin.id,
+        targetId: userId,
+        action: 'role.change',
+        detail: { from: before.role, to: input.role },
+      });
     }
     if (input.disabled !== undefined && input.disabled !== before.disabled) {
       changes.disabled = input.disabled;
@@ -31,7 +41,17 @@ export async function updateUserByAdmin(db: Db, admin: User, userId: string, inp
       });
       if (input.disabled) await endSessions(tx, userId);
     }
-    const [after] = Object.keys(changes).length > 0 ? await tx.update(users).set(changes).where(eq(users.id, userId)).returning() : [before];
-    return { id: after.id, email: after.email, name: after.name, role: after.role, disabled: after.disabled, createdAt: after.createdAt.toISOString() };
+    const [after] =
+      Object.keys(changes).length > 0
+        ? await tx.update(users).set(changes).where(eq(users.id, userId)).returning()
+        : [before];
+    return {
+      id: after.id,
+      email: after.email,
+      name: after.name,
+      role: after.role,
+      disabled: after.disabled,
+      createdAt: after.createdAt.toISOString(),
+    };
   });
 }

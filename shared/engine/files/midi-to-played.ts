@@ -93,7 +93,12 @@ function read(bytes: Uint8Array): PlayedNote[] {
     file.tracks.flatMap((t) =>
       t.notes.map((n) => {
         const timeMs = ms(n.ticks);
-        return { midi: n.midi, timeMs, velocity: Math.round(n.velocity * 127), durationMs: ms(n.ticks + n.durationTicks) - timeMs };
+        return {
+          midi: n.midi,
+          timeMs,
+          velocity: Math.round(n.velocity * 127),
+          durationMs: ms(n.ticks + n.durationTicks) - timeMs,
+        };
       }),
     ),
   );
@@ -108,7 +113,10 @@ function read(bytes: Uint8Array): PlayedNote[] {
     Number.isInteger(n.velocity);
   if (!notes.every(whole)) throw new EngineError(DAMAGED);
   if (notes.length === 0) throw new EngineError(NO_NOTES);
-  return notes.map((n, i) => ({ n, i })).sort((x, y) => x.n.timeMs - y.n.timeMs || x.i - y.i).map((x) => x.n);
+  return notes
+    .map((n, i) => ({ n, i }))
+    .sort((x, y) => x.n.timeMs - y.n.timeMs || x.i - y.i)
+    .map((x) => x.n);
 }
 
 /**

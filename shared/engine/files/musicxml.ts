@@ -45,7 +45,9 @@ function lengthXml(d: number): [string, string] {
 /** Splits a length into pieces LENGTHS can name, longest first. */
 function pieces(d: number): number[] {
   const out: number[] = [];
-  const sizes = Object.keys(LENGTHS).map(Number).sort((x, y) => y - x);
+  const sizes = Object.keys(LENGTHS)
+    .map(Number)
+    .sort((x, y) => y - x);
   let left = d;
   while (left > 0) {
     const s = sizes.find((x) => x <= left) ?? left;

@@ -54,7 +54,8 @@ export function countNoteOns(events: Uint8Array): NoteOnCount {
     const first = events[p];
     if (first >= 0xf0) {
       p++;
-      if (first === 0xff) p++; // the meta event's type
+      if (first === 0xff)
+        p++; // the meta event's type
       else if (first !== 0xf0 && first !== 0xf7) break;
       const length = quantity();
       if (length < 0) return { noteOns, overlong: length === OVERLONG };

@@ -69,7 +69,12 @@ export function takeToMidi(take: { drill: Drill; played: PlayedNote[] }): Uint8A
     .filter((n) => n.midi >= 0 && n.midi <= 127)
     .map((n) => {
       const on = Math.max(0, Math.round(n.beat * ppq));
-      return { midi: n.midi, on, off: Math.max(on + 1, Math.round((n.beat + n.duration) * ppq)), velocity: DRILL_VELOCITY };
+      return {
+        midi: n.midi,
+        on,
+        off: Math.max(on + 1, Math.round((n.beat + n.duration) * ppq)),
+        velocity: DRILL_VELOCITY,
+      };
     });
   const takeSpans: Span[] = [];
   for (const p of played) {
@@ -77,7 +82,9 @@ export function takeToMidi(take: { drill: Drill; played: PlayedNote[] }): Uint8A
     if (!Number.isFinite(p.timeMs) || !(midi >= 0 && midi <= 127)) continue;
     const on = Math.max(0, Math.round(p.timeMs * ticksPerMs));
     const length =
-      p.durationMs !== undefined && Number.isFinite(p.durationMs) ? Math.round(p.durationMs * ticksPerMs) : defaultTicks;
+      p.durationMs !== undefined && Number.isFinite(p.durationMs)
+        ? Math.round(p.durationMs * ticksPerMs)
+        : defaultTicks;
     // a note-on with velocity 0 would be read as a note-off (MIDI 1.0), so 1 is the floor
     const velocity = Math.min(127, Math.max(1, Math.round(p.velocity ?? DEFAULT_VELOCITY)));
     takeSpans.push({ midi, on, off: on + Math.max(1, length), velocity });

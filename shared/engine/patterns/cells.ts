@@ -55,7 +55,10 @@ export function runTriadCells(cells: TriadCellDef[], ladders: Ladders, run: Run)
     if (ci === 0 && k > 0) {
       // A cycle that repeats notes already played, or a state already met, never moves on. Presets
       // are checked too: weave on a pair such as Cdim/E comes back to where it began.
-      const cycle = out.slice(cycleStart).map((n) => n.midi).join(',');
+      const cycle = out
+        .slice(cycleStart)
+        .map((n) => n.midi)
+        .join(',');
       const state = `${last}|${prevEntry.a}|${prevEntry.b}|${lastEntryMidi}|${lastEntryPos}`;
       if (seenCycles.has(cycle)) {
         out.length = cycleStart;

@@ -4,14 +4,7 @@ import { pairOf } from '../theory/pairs';
 import type { Drill, DrillNote, DrillSpec, FilledDrillSpec, PatternDef, TriadPair } from '../types';
 import { type Ladders, type RawNote, runCells } from './cells';
 import { type Ladder, ladderOf } from './ladder';
-import {
-  checkDirection,
-  resolveInstrument,
-  resolveMeter,
-  resolvePattern,
-  resolveRange,
-  resolveTempo,
-} from './spec';
+import { checkDirection, resolveInstrument, resolveMeter, resolvePattern, resolveRange, resolveTempo } from './spec';
 import { NOTES_PER_BEAT, measuresFor, placeBeat, tidy } from './timing';
 
 const hexCache = new Map<string, Ladders>();

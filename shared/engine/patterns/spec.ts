@@ -89,6 +89,7 @@ export function resolveMeter(meter: Meter | undefined): Meter {
     m[0] >= 1 &&
     m[0] <= 32 &&
     [1, 2, 4, 8, 16, 32].includes(m[1]);
-  if (!ok) throw new EngineError('A meter is beats per measure (1 to 32) over 1, 2, 4, 8, 16 or 32, such as 4/4 or 7/8.');
+  if (!ok)
+    throw new EngineError('A meter is beats per measure (1 to 32) over 1, 2, 4, 8, 16 or 32, such as 4/4 or 7/8.');
   return [m[0], m[1]];
 }

@@ -100,4 +100,3 @@ export function summarize(results: NoteResult[], extras: number[]): TakeScore {
     spreadMs,
   };
 }
-

@@ -24,7 +24,10 @@ const OTHER_NOTE = ['1', 'b9', '9', '#9', '3', '11', '#11', '5', 'b13', '13', 'b
 
 /** Symbols tonal does not read, written the way it does. */
 function normalise(symbol: string): string {
-  return symbol.trim().replace(/m\(maj7\)|m\(M7\)|-\(maj7\)/, 'mMaj7').replace(/\(([^)]*)\)/g, '$1');
+  return symbol
+    .trim()
+    .replace(/m\(maj7\)|m\(M7\)|-\(maj7\)/, 'mMaj7')
+    .replace(/\(([^)]*)\)/g, '$1');
 }
 
 function functionOf(semitones: number, chordTones: Map<number, string>): string {
@@ -52,7 +55,7 @@ export function pairsForChord(chord: string): ChordFit[] {
   const rootChroma = chromaOf(root);
   const chordTones = new Map<number, string>();
   for (const ivl of parsed.intervals) {
-    const st = ((Interval.semitones(ivl) ?? 0) % 12 + 12) % 12;
+    const st = (((Interval.semitones(ivl) ?? 0) % 12) + 12) % 12;
     if (!chordTones.has(st)) chordTones.set(st, ivl);
   }
   const family = familyOf((st) => chordTones.has(st));
@@ -75,9 +78,7 @@ export function pairsForChord(chord: string): ChordFit[] {
     const held = new Set(notes.map((c) => (c - rootChroma + 12) % 12));
     found.push({ pair, scale, guides: guides.every((g) => held.has(g)), order });
   });
-  found.sort(
-    (x, y) => Number(y.guides) - Number(x.guides) || x.scale - y.scale || x.order - y.order,
-  );
+  found.sort((x, y) => Number(y.guides) - Number(x.guides) || x.scale - y.scale || x.order - y.order);
   return found.map((f, i) => ({
     pair: f.pair,
     scale: scales[f.scale].name,

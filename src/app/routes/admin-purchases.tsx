@@ -5,7 +5,9 @@ export function AdminPurchasesRoute() {
   return (
     <section className="grid gap-4">
       <h1 className="text-title">Purchases</h1>
-      <p className="text-muted">A refund returns the payment and takes the book away from the player; it is written to the audit log.</p>
+      <p className="text-muted">
+        A refund returns the payment and takes the book away from the player; it is written to the audit log.
+      </p>
       <PurchasesTable />
     </section>
   );

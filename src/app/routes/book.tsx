@@ -9,7 +9,8 @@ import { BuyPanel } from '@/features/books/components/buy-panel';
 export function BookRoute() {
   const { id = '' } = useParams();
   const [params] = useSearchParams();
-  const returned = params.get('checkout') === 'done' ? 'done' : params.get('checkout') === 'cancelled' ? 'cancelled' : null;
+  const returned =
+    params.get('checkout') === 'done' ? 'done' : params.get('checkout') === 'cancelled' ? 'cancelled' : null;
   const { user } = useMe();
   const first = useBook(id);
   // Back from checkout: ask again every second until the payment's webhook has granted the book.

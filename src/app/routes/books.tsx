@@ -15,7 +15,10 @@ export function BooksRoute() {
           <h1 id="catalogue" className="text-title">
             Drill books
           </h1>
-          <p className="text-muted">Collections written by teachers, to practise and be scored on in all twelve keys. Every book has one drill free to try.</p>
+          <p className="text-muted">
+            Collections written by teachers, to practise and be scored on in all twelve keys. Every book has one drill
+            free to try.
+          </p>
         </div>
         {isPending ? <p className="text-muted">Loading the books…</p> : null}
         {error ? <p role="alert">{error.message}</p> : null}

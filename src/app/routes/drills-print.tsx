@@ -27,7 +27,10 @@ export function DrillsPrintRoute() {
       {built.cycle ? (
         <PrintCycle cycle={built.cycle} order={order} />
       ) : (
-        <p role="alert" className="rounded-lg border border-ember-500 bg-ember-100 px-3 py-2 font-semibold text-ember-700">
+        <p
+          role="alert"
+          className="rounded-lg border border-ember-500 bg-ember-100 px-3 py-2 font-semibold text-ember-700"
+        >
           {built.error}
         </p>
       )}

@@ -63,8 +63,8 @@ export function DrillsRoute() {
       <header>
         <h1 className="text-title">Drills</h1>
         <p className="mt-1 max-w-prose text-muted">
-          Type a chord to find pairs that fit it, or name two triads yourself; choose a pattern and your instrument, then read, hear and take the drill through
-          the key cycle.
+          Type a chord to find pairs that fit it, or name two triads yourself; choose a pattern and your instrument,
+          then read, hear and take the drill through the key cycle.
         </p>
       </header>
 
@@ -99,7 +99,10 @@ export function DrillsRoute() {
       ) : null}
       {patternSaved ? <FormMessage tone="info">{patternSaved}</FormMessage> : null}
 
-      <section aria-labelledby="notation-heading" className="grid gap-4 rounded-card border border-line bg-raised p-4 sm:p-6">
+      <section
+        aria-labelledby="notation-heading"
+        className="grid gap-4 rounded-card border border-line bg-raised p-4 sm:p-6"
+      >
         <div className="flex flex-wrap items-baseline justify-between gap-2">
           <h2 id="notation-heading" className="text-lead font-bold" data-testid="drill-title">
             {drill ? `Key ${index + 1} of ${cycle.length}: ${pairTitle(drill)}` : 'No drill yet'}
@@ -107,7 +110,11 @@ export function DrillsRoute() {
           <p className="text-caption text-muted">{instruments[draft.instrument].label}, written pitch</p>
         </div>
         {problems.length > 0 ? (
-          <div role="alert" className="rounded-lg border border-ember-500 bg-ember-100 px-3 py-2 text-ember-700" data-testid="drill-problem">
+          <div
+            role="alert"
+            className="rounded-lg border border-ember-500 bg-ember-100 px-3 py-2 text-ember-700"
+            data-testid="drill-problem"
+          >
             <p className="font-semibold">This drill can't be built yet:</p>
             <ul className="list-disc pl-5">
               {problems.map(([field, messages]) => (
@@ -152,7 +159,11 @@ export function DrillsRoute() {
         </div>
       ) : (
         <p className="text-muted">
-          Fix the drill above, or <Link to="/drills" reloadDocument className="underline">start again from D/C over D7</Link>.
+          Fix the drill above, or{' '}
+          <Link to="/drills" reloadDocument className="underline">
+            start again from D/C over D7
+          </Link>
+          .
         </p>
       )}
     </div>

@@ -9,7 +9,9 @@ import { WhatNext } from '@/features/maps/components/what-next';
 function NextStep({ to, title, text }: { to: string; title: string; text: string }) {
   return (
     <Link to={to} className="group block rounded-card border border-line bg-raised p-5 hover:border-brass-500">
-      <span className="block text-lead font-bold group-hover:text-brass-700 dark:group-hover:text-brass-300">{title} →</span>
+      <span className="block text-lead font-bold group-hover:text-brass-700 dark:group-hover:text-brass-300">
+        {title} →
+      </span>
       <span className="mt-1 block text-muted">{text}</span>
     </Link>
   );
@@ -19,13 +21,29 @@ function PlayerHome() {
   return (
     <>
       <div className="grid gap-3 md:grid-cols-2">
-        <NextStep to="/drills" title="Find a pair" text="Type the chord you're soloing over; pick a pair whose six notes fit it and a pattern to drill." />
-        <NextStep to="/practice" title="Practise" text="Plug in your keyboard or wind controller, take the count-in, and play the drill through the key cycle." />
+        <NextStep
+          to="/drills"
+          title="Find a pair"
+          text="Type the chord you're soloing over; pick a pair whose six notes fit it and a pattern to drill."
+        />
+        <NextStep
+          to="/practice"
+          title="Practise"
+          text="Plug in your keyboard or wind controller, take the count-in, and play the drill through the key cycle."
+        />
       </div>
       <h2 className="mt-8 text-lead font-bold">What next</h2>
       <WhatNext />
       <p className="mt-2 text-caption text-muted">
-        From your <Link to="/progress" className="underline">key, range and beat maps</Link> and your <Link to="/history" className="underline">takes</Link>.
+        From your{' '}
+        <Link to="/progress" className="underline">
+          key, range and beat maps
+        </Link>{' '}
+        and your{' '}
+        <Link to="/history" className="underline">
+          takes
+        </Link>
+        .
       </p>
       <h2 className="mt-8 text-lead font-bold">Assignments</h2>
       <MyAssignments />
@@ -39,7 +57,11 @@ function TeacherHome() {
   return (
     <>
       <div className="grid gap-3 md:grid-cols-2">
-        <NextStep to="/studio" title="Open your studio" text="See your players, set this week's assignments, and leave remarks on their takes." />
+        <NextStep
+          to="/studio"
+          title="Open your studio"
+          text="See your players, set this week's assignments, and leave remarks on their takes."
+        />
       </div>
       <h2 className="mt-8 text-lead font-bold">Your studio</h2>
       <StudioSummary empty="You have no studio yet; create one from the studio page and invite your players." />
@@ -50,7 +72,11 @@ function TeacherHome() {
 function AdminHome() {
   return (
     <div className="grid gap-3 md:grid-cols-2">
-      <NextStep to="/admin/users" title="Review accounts" text="Everyone on this Sixfold: players, teachers and admins, and whose account is switched off." />
+      <NextStep
+        to="/admin/users"
+        title="Review accounts"
+        text="Everyone on this Sixfold: players, teachers and admins, and whose account is switched off."
+      />
     </div>
   );
 }
@@ -69,7 +95,9 @@ export function HomeRoute() {
   return (
     <section className="grid gap-6" data-testid={`home-${user.role}`}>
       <header>
-        <p className="text-caption font-bold uppercase tracking-[0.2em] text-brass-600 dark:text-brass-300">{user.role} home</p>
+        <p className="text-caption font-bold uppercase tracking-[0.2em] text-brass-600 dark:text-brass-300">
+          {user.role} home
+        </p>
         <h1 className="mt-1 text-display">Welcome back, {first}.</h1>
         <p className="mt-2 text-lead text-muted">{lead[user.role]}</p>
       </header>

@@ -30,7 +30,9 @@ export function InputCheckRoute() {
     <div className="grid gap-6">
       <header>
         <h1 className="text-title">Input check</h1>
-        <p className="mt-1 text-muted">Play a few notes: each one should appear below with its velocity and the moment it was played.</p>
+        <p className="mt-1 text-muted">
+          Play a few notes: each one should appear below with its velocity and the moment it was played.
+        </p>
       </header>
       <InputPanel input={input} status={status} />
       <div className="rounded-card border border-line bg-raised p-4">
@@ -61,7 +63,14 @@ export function InputCheckRoute() {
             </thead>
             <tbody>
               {events.map((e, i) => (
-                <tr key={`${e.timeStamp}-${i}`} className="border-t border-line" data-midi={e.midi} data-type={e.type} data-time={e.timeStamp} data-source={e.source}>
+                <tr
+                  key={`${e.timeStamp}-${i}`}
+                  className="border-t border-line"
+                  data-midi={e.midi}
+                  data-type={e.type}
+                  data-time={e.timeStamp}
+                  data-source={e.source}
+                >
                   <td className="py-1">{e.type === 'on' ? 'on' : 'off'}</td>
                   <td>{keyLabel(e.midi)}</td>
                   <td>{e.velocity}</td>

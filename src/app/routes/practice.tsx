@@ -27,7 +27,13 @@ import { sendNote } from '@/lib/midi-output';
 import { onQueueChange, type QueueState, saveTake } from '@/lib/take-queue';
 
 /** The free starter drill of the demo studio: C/D over Cmaj7#11. */
-const STARTER: DrillSpec = { pair: ['C', 'D'], pattern: 'stack', direction: 'up-down', chord: 'Cmaj7#11', range: { low: 60, high: 84 } };
+const STARTER: DrillSpec = {
+  pair: ['C', 'D'],
+  pattern: 'stack',
+  direction: 'up-down',
+  chord: 'Cmaj7#11',
+  range: { low: 60, high: 84 },
+};
 
 const sessionStart = Date.now();
 
@@ -37,8 +43,13 @@ export function PracticeRoute() {
   const fromParams = useMemo(() => specFromParams(params), [params]);
   const savedId = params.get('drill');
   const assignmentId = params.get('assignment');
-  const tempoParam = Number(params.get('tempo')) >= 20 && Number(params.get('tempo')) <= 400 ? Number(params.get('tempo')) : null;
-  const saved = useQuery({ queryKey: ['drills', 'saved', savedId], queryFn: () => fetchSavedDrill(savedId!), enabled: !!savedId });
+  const tempoParam =
+    Number(params.get('tempo')) >= 20 && Number(params.get('tempo')) <= 400 ? Number(params.get('tempo')) : null;
+  const saved = useQuery({
+    queryKey: ['drills', 'saved', savedId],
+    queryFn: () => fetchSavedDrill(savedId!),
+    enabled: !!savedId,
+  });
   const settings = useSettings();
   const { input, status } = useNoteInput();
   const setLatency = useSetLatency();
@@ -88,7 +99,10 @@ export function PracticeRoute() {
       const why = err instanceof Error ? err.message : 'This drill cannot be built';
       // Some keys may not fit the range; the drill's own key still can be practised.
       try {
-        return { drills: [generateDrill(spec)], error: `Not every key of the cycle fits this range (${why}); practising this key only.` };
+        return {
+          drills: [generateDrill(spec)],
+          error: `Not every key of the cycle fits this range (${why}); practising this key only.`,
+        };
       } catch {
         return { drills: [], error: why };
       }
@@ -107,7 +121,10 @@ export function PracticeRoute() {
   const [ladder, setLadder] = useState<LadderState>(initialLadder);
   const steps = useMemo(() => (fullDrill ? ladderSteps(fullDrill.measures) : []), [fullDrill]);
   const step = opts?.ladder ? (steps[ladder.step] ?? null) : null;
-  const drill = useMemo(() => (fullDrill && step ? sliceDrill(fullDrill, step[0], step[1]) : fullDrill), [fullDrill, step]);
+  const drill = useMemo(
+    () => (fullDrill && step ? sliceDrill(fullDrill, step[0], step[1]) : fullDrill),
+    [fullDrill, step],
+  );
 
   const [hear, setHear] = useState<HearSettings>({ volumeDb: -10, muted: false, outputId: null });
   const synth = useRef(new PlayedSynth());
@@ -130,7 +147,10 @@ export function PracticeRoute() {
     };
   }, [hear.outputId]);
 
-  const deviceName = status.state === 'ready' && status.selected ? (status.devices.find((d) => d.id === status.selected)?.name ?? 'MIDI device') : 'Computer keyboard';
+  const deviceName =
+    status.state === 'ready' && status.selected
+      ? (status.devices.find((d) => d.id === status.selected)?.name ?? 'MIDI device')
+      : 'Computer keyboard';
   const latencyMs = settings.data?.settings.latency[deviceName] ?? 0;
 
   const options: ScoreOptions | null = useMemo(() => {
@@ -217,11 +237,16 @@ export function PracticeRoute() {
         <div>
           <h1 className="text-title">Practice</h1>
           <p className="text-muted">
-            {drill ? `${drill.spec.pair.join(' / ')} · ${typeof drill.spec.pattern === 'string' ? drill.spec.pattern : drill.spec.pattern.name} · ${drill.spec.direction}` : ''}
+            {drill
+              ? `${drill.spec.pair.join(' / ')} · ${typeof drill.spec.pattern === 'string' ? drill.spec.pattern : drill.spec.pattern.name} · ${drill.spec.direction}`
+              : ''}
             {drill?.spec.chord ? ` · over ${drill.spec.chord}` : ''} · {inst.label}
           </p>
         </div>
-        <Link to={`/drills?spec=${encodeURIComponent(JSON.stringify(spec))}&order=${opts.order}`} className="text-brass-700 underline dark:text-brass-300">
+        <Link
+          to={`/drills?spec=${encodeURIComponent(JSON.stringify(spec))}&order=${opts.order}`}
+          className="text-brass-700 underline dark:text-brass-300"
+        >
           Change the drill
         </Link>
       </header>
@@ -252,9 +277,17 @@ export function PracticeRoute() {
       </nav>
 
       {opts.ladder && step ? (
-        <p data-testid="ladder-step" data-step={ladder.step} data-from={step[0]} data-to={step[1]} data-fade={ladder.fade} className="rounded-lg bg-raised p-3">
-          Ladder step {ladder.step + 1} of {steps.length}: measure{step[0] === step[1] ? ` ${step[0]}` : `s ${step[0]}–${step[1]}`}. Two clean takes in a
-          row (95% or better, nothing missed) to move on. {ladder.streak === 1 ? 'One clean take so far.' : ''}
+        <p
+          data-testid="ladder-step"
+          data-step={ladder.step}
+          data-from={step[0]}
+          data-to={step[1]}
+          data-fade={ladder.fade}
+          className="rounded-lg bg-raised p-3"
+        >
+          Ladder step {ladder.step + 1} of {steps.length}: measure
+          {step[0] === step[1] ? ` ${step[0]}` : `s ${step[0]}–${step[1]}`}. Two clean takes in a row (95% or better,
+          nothing missed) to move on. {ladder.streak === 1 ? 'One clean take so far.' : ''}
         </p>
       ) : null}
 
@@ -262,7 +295,12 @@ export function PracticeRoute() {
         {drill ? <LiveStaff drill={drill} live={take.live} /> : null}
         {drill ? (
           <div className="mt-3">
-            <LiveKeyboard drill={drill} live={take.live} range={inst.range} label={`${inst.label} range with the drill's notes`} />
+            <LiveKeyboard
+              drill={drill}
+              live={take.live}
+              range={inst.range}
+              label={`${inst.label} range with the drill's notes`}
+            />
           </div>
         ) : null}
       </div>
@@ -278,16 +316,28 @@ export function PracticeRoute() {
           </Button>
         )}
         <span role="status" className="text-muted" data-testid="take-phase">
-          {take.phase === 'count-in' ? 'Count-in…' : take.phase === 'playing' ? 'Playing — every note is being marked' : ''}
+          {take.phase === 'count-in'
+            ? 'Count-in…'
+            : take.phase === 'playing'
+              ? 'Playing — every note is being marked'
+              : ''}
         </span>
         {climb.data?.climb && !running ? (
-          <button type="button" className="text-brass-700 underline dark:text-brass-300" onClick={() => setOpts({ ...opts, tempo: climb.data.climb!.tempo })}>
+          <button
+            type="button"
+            className="text-brass-700 underline dark:text-brass-300"
+            onClick={() => setOpts({ ...opts, tempo: climb.data.climb!.tempo })}
+          >
             Suggested tempo: {climb.data.climb.tempo} bpm
           </button>
         ) : null}
         {queue.waiting > 0 ? (
-          <span className="rounded-full bg-brass-100 px-3 py-1 text-caption font-semibold text-ink-900" data-testid="queue-waiting">
-            {queue.waiting} take{queue.waiting === 1 ? '' : 's'} waiting to be saved — kept on this device, sent when the server answers
+          <span
+            className="rounded-full bg-brass-100 px-3 py-1 text-caption font-semibold text-ink-900"
+            data-testid="queue-waiting"
+          >
+            {queue.waiting} take{queue.waiting === 1 ? '' : 's'} waiting to be saved — kept on this device, sent when
+            the server answers
           </span>
         ) : null}
         {queue.refused.map((r) => (
@@ -313,7 +363,11 @@ export function PracticeRoute() {
           onReplay={() => void replayTake(drill, take.finished!.played)}
           climb={
             climb.data?.climb && !step && take.finished.stoppedAtMs === null
-              ? { tempo: climb.data.climb.tempo, verdict: climb.data.climb.lastVerdict, onUse: () => setOpts({ ...opts, tempo: climb.data!.climb!.tempo }) }
+              ? {
+                  tempo: climb.data.climb.tempo,
+                  verdict: climb.data.climb.lastVerdict,
+                  onUse: () => setOpts({ ...opts, tempo: climb.data!.climb!.tempo }),
+                }
               : null
           }
         />

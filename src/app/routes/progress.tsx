@@ -13,7 +13,9 @@ const FILTER_EXAMPLES = { instrument: 'piano', pattern: 'four-three', pair: 'D/C
 export function ProgressRoute() {
   const [params, setParams] = useSearchParams();
   const filters: MapFilters = Object.fromEntries(
-    (['instrument', 'pattern', 'pair', 'from', 'to', 'player'] as const).map((k) => [k, params.get(k) ?? undefined]).filter(([, v]) => v),
+    (['instrument', 'pattern', 'pair', 'from', 'to', 'player'] as const)
+      .map((k) => [k, params.get(k) ?? undefined])
+      .filter(([, v]) => v),
   );
   const set = (k: string, v: string) => {
     const p = new URLSearchParams(params);
@@ -25,7 +27,9 @@ export function ProgressRoute() {
     <section className="grid gap-8">
       <header>
         <h1 className="text-display">Progress</h1>
-        <p className="mt-2 text-muted">Darker cells: more notes not hit. Hover or focus a cell for its numbers; each map also reads as a table.</p>
+        <p className="mt-2 text-muted">
+          Darker cells: more notes not hit. Hover or focus a cell for its numbers; each map also reads as a table.
+        </p>
       </header>
       <form className="flex flex-wrap gap-3" aria-label="Filter the maps" onSubmit={(e) => e.preventDefault()}>
         {(['instrument', 'pattern', 'pair'] as const).map((k) => (
@@ -35,13 +39,19 @@ export function ProgressRoute() {
               defaultValue={params.get(k) ?? ''}
               placeholder={FILTER_EXAMPLES[k]}
               onBlur={(e) => set(k, e.target.value.trim())}
-              className="w-32 rounded-lg border border-line bg-raised px-2 py-1" />
+              className="w-32 rounded-lg border border-line bg-raised px-2 py-1"
+            />
           </label>
         ))}
         {(['from', 'to'] as const).map((k) => (
           <label key={k} className="grid gap-1 text-caption font-semibold capitalize">
             {k}
-            <input type="date" value={params.get(k) ?? ''} onChange={(e) => set(k, e.target.value)} className="rounded-lg border border-line bg-raised px-2 py-1" />
+            <input
+              type="date"
+              value={params.get(k) ?? ''}
+              onChange={(e) => set(k, e.target.value)}
+              className="rounded-lg border border-line bg-raised px-2 py-1"
+            />
           </label>
         ))}
       </form>

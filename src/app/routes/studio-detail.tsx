@@ -14,7 +14,12 @@ export function StudioDetailRoute() {
   const leave = useLeaveStudio();
   const navigate = useNavigate();
   if (isPending) return <p className="text-muted">Loading the studio…</p>;
-  if (error) return <p role="alert" className="text-ember-700">{error.message}</p>;
+  if (error)
+    return (
+      <p role="alert" className="text-ember-700">
+        {error.message}
+      </p>
+    );
   const { studio } = data;
   if (studio.role === 'player') {
     return (
@@ -26,7 +31,11 @@ export function StudioDetailRoute() {
           <Button
             variant="danger"
             onClick={() => {
-              if (window.confirm(`Leave ${studio.name}? Your takes stay yours; ${studio.teacher.name} will no longer see them.`)) {
+              if (
+                window.confirm(
+                  `Leave ${studio.name}? Your takes stay yours; ${studio.teacher.name} will no longer see them.`,
+                )
+              ) {
                 leave.mutate(studio.id, { onSuccess: () => navigate('/studio') });
               }
             }}

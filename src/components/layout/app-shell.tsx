@@ -13,7 +13,10 @@ const navClass = ({ isActive }: { isActive: boolean }) =>
 export function AppShell({ nav = [], aside }: { nav?: NavItem[]; aside?: React.ReactNode }) {
   return (
     <div className="flex min-h-screen flex-col">
-      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:rounded focus:bg-raised focus:px-3 focus:py-2">
+      <a
+        href="#main"
+        className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:rounded focus:bg-raised focus:px-3 focus:py-2"
+      >
         Skip to content
       </a>
       <header className="no-print border-b border-line bg-raised/80 backdrop-blur">

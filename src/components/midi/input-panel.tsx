@@ -5,7 +5,11 @@ const CHANNELS = Array.from({ length: 16 }, (_, i) => i + 1);
 /** Where notes come from: the MIDI device and channel, or why MIDI is not there. */
 export function InputPanel({ input, status }: { input: NoteInput; status: InputStatus }) {
   const ready = status.state === 'ready';
-  const problem = status.state === 'unsupported' || status.state === 'denied' || status.state === 'unavailable' || status.state === 'failed';
+  const problem =
+    status.state === 'unsupported' ||
+    status.state === 'denied' ||
+    status.state === 'unavailable' ||
+    status.state === 'failed';
   return (
     <section aria-labelledby="input-heading" className="rounded-card border border-line bg-raised p-4">
       <h2 id="input-heading" className="text-lead font-bold">
@@ -45,7 +49,12 @@ export function InputPanel({ input, status }: { input: NoteInput; status: InputS
           </label>
         </div>
       ) : null}
-      <p role="status" data-testid="input-status" data-state={status.state} className={`mt-3 text-body ${problem ? 'text-ember-700 dark:text-ember-100' : 'text-muted'}`}>
+      <p
+        role="status"
+        data-testid="input-status"
+        data-state={status.state}
+        className={`mt-3 text-body ${problem ? 'text-ember-700 dark:text-ember-100' : 'text-muted'}`}
+      >
         {status.state === 'idle' || status.state === 'starting' ? 'Looking for MIDI devices…' : status.message}
       </p>
       <p className="mt-2 text-caption text-muted">

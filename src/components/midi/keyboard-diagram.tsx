@@ -28,7 +28,15 @@ interface Props {
  * A keyboard drawn from `low` to `high`: a range diagram when given marks, an instrument when
  * given `onNote` (pointer down plays, up releases).
  */
-export const KeyboardDiagram = memo(function KeyboardDiagram({ low, high, marks, reach, onNote, label, height = 90 }: Props) {
+export const KeyboardDiagram = memo(function KeyboardDiagram({
+  low,
+  high,
+  marks,
+  reach,
+  onNote,
+  label,
+  height = 90,
+}: Props) {
   const whites: number[] = [];
   for (let m = low; m <= high; m++) if (!isBlackKey(m)) whites.push(m);
   const w = 20;
@@ -101,7 +109,13 @@ export const KeyboardDiagram = memo(function KeyboardDiagram({ low, high, marks,
       {whites
         .filter((m) => m % 12 === 0)
         .map((m) => (
-          <text key={`c${m}`} x={(whiteX.get(m) ?? 0) + w / 2} y={height - 6} textAnchor="middle" className="pointer-events-none fill-ink-500 text-[9px]">
+          <text
+            key={`c${m}`}
+            x={(whiteX.get(m) ?? 0) + w / 2}
+            y={height - 6}
+            textAnchor="middle"
+            className="pointer-events-none fill-ink-500 text-[9px]"
+          >
             {keyLabel(m)}
           </text>
         ))}

@@ -40,11 +40,12 @@ export function DrillStaff({ drill, marks, current, faded, label, width: fixedWi
   useLayoutEffect(() => {
     if (fixedWidth || !host.current) return;
     const el = host.current;
-    const read = () => setMeasured((w) => {
-      const next = Math.floor(el.clientWidth);
-      // Redraw only for a real change of width, not a scrollbar's flicker.
-      return Math.abs(next - w) > 24 ? next : w;
-    });
+    const read = () =>
+      setMeasured((w) => {
+        const next = Math.floor(el.clientWidth);
+        // Redraw only for a real change of width, not a scrollbar's flicker.
+        return Math.abs(next - w) > 24 ? next : w;
+      });
     read();
     const ro = new ResizeObserver(read);
     ro.observe(el);
@@ -91,9 +92,16 @@ export function DrillStaff({ drill, marks, current, faded, label, width: fixedWi
   }, [marks, current, version]);
 
   const inst = instruments[drill.spec.instrument];
-  const name = label ?? `${drill.spec.pair.join(' / ')} for ${inst.label}, written pitch, ${drill.notes.length} notes in ${drill.measures} measures`;
+  const name =
+    label ??
+    `${drill.spec.pair.join(' / ')} for ${inst.label}, written pitch, ${drill.notes.length} notes in ${drill.measures} measures`;
   return (
-    <figure className={`sf-staff m-0 min-w-0 ${faded ? 'sf-faded' : ''}`} aria-label={name} data-testid="drill-staff" data-version={version}>
+    <figure
+      className={`sf-staff m-0 min-w-0 ${faded ? 'sf-faded' : ''}`}
+      aria-label={name}
+      data-testid="drill-staff"
+      data-version={version}
+    >
       <div ref={host} className="min-h-24 w-full" style={fixedWidth ? { width: fixedWidth } : undefined} />
       {error ? (
         <p role="alert" className="text-ember-700 dark:text-ember-100">

@@ -7,7 +7,19 @@ import bravuraUrl from '@vexflow-fonts/bravura/bravura.woff2?url';
 import type { Drill, DrillNote } from '@shared/engine';
 import { instruments } from '@shared/engine';
 import { aChromasOf, triadOf } from './triad-of';
-import VexFlow, { Accidental, Annotation, Beam, Font, Formatter, Renderer, Stave, StaveNote, type Tickable, Tuplet, Voice } from 'vexflow/core';
+import VexFlow, {
+  Accidental,
+  Annotation,
+  Beam,
+  Font,
+  Formatter,
+  Renderer,
+  Stave,
+  StaveNote,
+  type Tickable,
+  Tuplet,
+  Voice,
+} from 'vexflow/core';
 
 let fontsReady: Promise<void> | null = null;
 
@@ -115,7 +127,8 @@ export async function renderStaff(host: HTMLElement, drill: Drill, width: number
   for (const s of systems) {
     const total = s.widths.reduce((a, b) => a + b, 0);
     const fill = usable / total;
-    if (total / usable > 0.55 || systems.length === 1) s.widths = s.widths.map((w) => Math.floor(w * Math.min(fill, systems.length === 1 ? 1.6 : fill)));
+    if (total / usable > 0.55 || systems.length === 1)
+      s.widths = s.widths.map((w) => Math.floor(w * Math.min(fill, systems.length === 1 ? 1.6 : fill)));
   }
 
   // Each system gets the room its highest and lowest notes need (ledger lines, stems, brackets).
@@ -173,7 +186,12 @@ export async function renderStaff(host: HTMLElement, drill: Drill, width: number
         const letter = (m?.[1] ?? 'b').toLowerCase();
         const acc = m?.[2] ?? '';
         const octave = m?.[3] ?? '4';
-        const sn = new StaveNote({ keys: [`${letter}${acc}/${octave}`], duration: durationCode(n), clef, autoStem: true });
+        const sn = new StaveNote({
+          keys: [`${letter}${acc}/${octave}`],
+          duration: durationCode(n),
+          clef,
+          autoStem: true,
+        });
         const place = `${letter}${octave}`;
         const alter = ALTER[acc] ?? 0;
         if ((held.get(place) ?? 0) !== alter) sn.addModifier(new Accidental(ACC_TEXT[alter]), 0);
@@ -186,7 +204,7 @@ export async function renderStaff(host: HTMLElement, drill: Drill, width: number
         }
         styled.push({ note: sn, index, triad, written: n.written });
         tickables.push(sn);
-        const inMeasure = n.beat - (mi * mq);
+        const inMeasure = n.beat - mi * mq;
         const g = Math.floor(inMeasure / gq + 1e-6);
         const group = groups.get(g) ?? { notes: [], rests: [], triplet: Math.abs(n.duration - 1 / 3) < 1e-6 };
         group.notes.push(sn);
@@ -198,7 +216,11 @@ export async function renderStaff(host: HTMLElement, drill: Drill, width: number
         let usedQ = last.beat + last.duration - mi * mq;
         const lastGroup = groups.get(Math.floor((last.beat - mi * mq) / gq + 1e-6));
         while (lastGroup && usedQ + 1e-6 < Math.ceil(usedQ / gq - 1e-6) * gq && usedQ + 1e-6 < mq) {
-          const r = new StaveNote({ keys: [clef === 'bass' ? 'd/3' : 'b/4'], duration: `${durationCode(last)}r`, clef });
+          const r = new StaveNote({
+            keys: [clef === 'bass' ? 'd/3' : 'b/4'],
+            duration: `${durationCode(last)}r`,
+            clef,
+          });
           lastGroup.rests.push(r);
           tickables.push(r);
           usedQ += last.duration;
@@ -217,7 +239,15 @@ export async function renderStaff(host: HTMLElement, drill: Drill, width: number
       const beams: Beam[] = [];
       const tuplets: Tuplet[] = [];
       for (const group of groups.values()) {
-        if (group.triplet) tuplets.push(new Tuplet([...group.notes, ...group.rests], { bracketed: true, ratioed: false, numNotes: 3, notesOccupied: 2 }));
+        if (group.triplet)
+          tuplets.push(
+            new Tuplet([...group.notes, ...group.rests], {
+              bracketed: true,
+              ratioed: false,
+              numNotes: 3,
+              notesOccupied: 2,
+            }),
+          );
         if (group.notes.length > 1) beams.push(new Beam(group.notes));
       }
       new Formatter().joinVoices([voice]).formatToStave([voice], stave);

@@ -11,7 +11,10 @@ const tones: Record<Tone, string> = {
 /** A message about a whole form: what went wrong, or that it worked. */
 export function FormMessage({ tone, children }: { tone: Tone; children: ReactNode }) {
   return (
-    <div role={tone === 'error' ? 'alert' : 'status'} className={`rounded-lg border px-3 py-2 text-body font-semibold ${tones[tone]}`}>
+    <div
+      role={tone === 'error' ? 'alert' : 'status'}
+      className={`rounded-lg border px-3 py-2 text-body font-semibold ${tones[tone]}`}
+    >
       {children}
     </div>
   );

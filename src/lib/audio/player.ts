@@ -21,7 +21,10 @@ function makeVoices(Tone: Tone) {
     envelope: { attack: 0.004, decay: 0.08, sustain: 0.45, release: 0.03 },
   }).toDestination();
   lead.volume.value = -8;
-  const click = new Tone.Synth({ oscillator: { type: 'square' }, envelope: { attack: 0.001, decay: 0.02, sustain: 0, release: 0.01 } }).toDestination();
+  const click = new Tone.Synth({
+    oscillator: { type: 'square' },
+    envelope: { attack: 0.001, decay: 0.02, sustain: 0, release: 0.01 },
+  }).toDestination();
   click.volume.value = -16;
   const pad = new Tone.PolySynth(Tone.Synth, {
     oscillator: { type: 'sine' },
@@ -84,7 +87,11 @@ export async function playDrill(
  * Renders the drill without any sound device (Tone.Offline on an OfflineAudioContext) and
  * returns it as WAV bytes: the "audio" download, and how tests hear the preview.
  */
-export async function renderDrillWav(drill: Drill, opts: ScheduleOptions = {}, sampleRate = 22050): Promise<Uint8Array> {
+export async function renderDrillWav(
+  drill: Drill,
+  opts: ScheduleOptions = {},
+  sampleRate = 22050,
+): Promise<Uint8Array> {
   const Tone = await loadTone();
   const { events, end } = scheduleDrill(drill, opts);
   const buffer = await Tone.Offline(

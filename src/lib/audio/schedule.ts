@@ -69,11 +69,23 @@ export function scheduleDrill(drill: Drill, opts: ScheduleOptions = {}): Schedul
   const voicing = opts.pad && chord ? padVoicing(chord) : [];
   if (voicing.length > 0) {
     for (let m = 0; m < drill.measures; m++) {
-      events.push({ kind: 'pad', time: downbeat + m * measureQuarters * secPerQuarter, duration: measureQuarters * secPerQuarter * 0.95, midis: voicing });
+      events.push({
+        kind: 'pad',
+        time: downbeat + m * measureQuarters * secPerQuarter,
+        duration: measureQuarters * secPerQuarter * 0.95,
+        midis: voicing,
+      });
     }
   }
   drill.notes.forEach((n, index) => {
-    events.push({ kind: 'note', time: downbeat + n.beat * secPerQuarter, duration: n.duration * secPerQuarter * 0.85, midi: n.midi, velocity: 96, index });
+    events.push({
+      kind: 'note',
+      time: downbeat + n.beat * secPerQuarter,
+      duration: n.duration * secPerQuarter * 0.85,
+      midi: n.midi,
+      velocity: 96,
+      index,
+    });
   });
   events.sort((x, y) => x.time - y.time);
   return { events, downbeat, end };

@@ -18,7 +18,8 @@ export function useAdminUsers() {
 export function useUpdateAdminUser() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: ({ id, ...input }: UpdateAdminUserInput & { id: string }) => api.patch<AdminUserResponse>(`/api/admin/users/${encodeURIComponent(id)}`, input),
+    mutationFn: ({ id, ...input }: UpdateAdminUserInput & { id: string }) =>
+      api.patch<AdminUserResponse>(`/api/admin/users/${encodeURIComponent(id)}`, input),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: ['admin'] }),
   });
 }

@@ -14,7 +14,12 @@ function describe(e: AuditEntry): string {
 export function AuditTable() {
   const { data, isPending, error } = useAudit();
   if (isPending) return <p className="text-muted">Loading the log…</p>;
-  if (error) return <p role="alert" className="text-ember-700">{error.message}</p>;
+  if (error)
+    return (
+      <p role="alert" className="text-ember-700">
+        {error.message}
+      </p>
+    );
   if (data.entries.length === 0) return <p className="text-muted">Nothing changed yet.</p>;
   return (
     <div className="overflow-x-auto rounded-card border border-line bg-raised">
@@ -22,10 +27,18 @@ export function AuditTable() {
         <caption className="sr-only">Audit log</caption>
         <thead className="border-b border-line text-caption uppercase tracking-wider text-muted">
           <tr>
-            <th scope="col" className="px-4 py-3">When</th>
-            <th scope="col" className="px-4 py-3">Admin</th>
-            <th scope="col" className="px-4 py-3">Account</th>
-            <th scope="col" className="px-4 py-3">Change</th>
+            <th scope="col" className="px-4 py-3">
+              When
+            </th>
+            <th scope="col" className="px-4 py-3">
+              Admin
+            </th>
+            <th scope="col" className="px-4 py-3">
+              Account
+            </th>
+            <th scope="col" className="px-4 py-3">
+              Change
+            </th>
           </tr>
         </thead>
         <tbody>

@@ -12,7 +12,12 @@ export function UsersTable() {
   const update = useUpdateAdminUser();
   const { user: me } = useMe();
   if (isPending) return <p className="text-muted">Loading accounts…</p>;
-  if (error) return <p role="alert" className="text-ember-700">{error.message}</p>;
+  if (error)
+    return (
+      <p role="alert" className="text-ember-700">
+        {error.message}
+      </p>
+    );
   return (
     <div className="grid gap-2">
       {update.error ? (
@@ -20,66 +25,80 @@ export function UsersTable() {
           {update.error.message}
         </p>
       ) : null}
-    <div className="relative overflow-x-auto rounded-card border border-line bg-raised">
-      <table className="w-full text-left text-body">
-        <caption className="sr-only">Accounts</caption>
-        <thead className="border-b border-line text-caption uppercase tracking-wider text-muted">
-          <tr>
-            <th scope="col" className="px-4 py-3">Name</th>
-            <th scope="col" className="px-4 py-3">E-mail</th>
-            <th scope="col" className="px-4 py-3">Role</th>
-            <th scope="col" className="px-4 py-3">Status</th>
-            <th scope="col" className="px-4 py-3">Joined</th>
-            <th scope="col" className="px-4 py-3">
-              <span className="sr-only">Switch</span>
-            </th>
-          </tr>
-        </thead>
-        <tbody>
-          {data.users.map((u) => (
-            <tr key={u.id} className="border-b border-line last:border-0">
-              <td className="px-4 py-3 font-semibold">{u.name}</td>
-              <td className="px-4 py-3">{u.email}</td>
-              <td className="px-4 py-3">
-                {u.id === me?.id ? (
-                  <span className="capitalize">{u.role}</span>
-                ) : (
-                  <select
-                    aria-label={`Role of ${u.name}`}
-                    value={u.role}
-                    disabled={update.isPending}
-                    onChange={(e) => update.mutate({ id: u.id, role: e.target.value as Role })}
-                    className="rounded-lg border border-line bg-raised px-2 py-1 capitalize"
-                  >
-                    {ROLES.map((r) => (
-                      <option key={r} value={r}>
-                        {r}
-                      </option>
-                    ))}
-                  </select>
-                )}
-              </td>
-              <td className="px-4 py-3">
-                {u.disabled ? <span className="text-ember-700 dark:text-ember-100">Switched off</span> : <span className="text-reed-700 dark:text-reed-100">Active</span>}
-              </td>
-              <td className="px-4 py-3 text-muted">{dateFormat.format(new Date(u.createdAt))}</td>
-              <td className="px-4 py-3">
-                {u.id === me?.id ? null : (
-                  <button
-                    type="button"
-                    className="rounded-lg border border-line px-3 py-1 font-semibold hover:border-ink-300"
-                    disabled={update.isPending}
-                    onClick={() => update.mutate({ id: u.id, disabled: !u.disabled })}
-                  >
-                    {u.disabled ? `Switch ${u.name} on` : `Switch ${u.name} off`}
-                  </button>
-                )}
-              </td>
+      <div className="relative overflow-x-auto rounded-card border border-line bg-raised">
+        <table className="w-full text-left text-body">
+          <caption className="sr-only">Accounts</caption>
+          <thead className="border-b border-line text-caption uppercase tracking-wider text-muted">
+            <tr>
+              <th scope="col" className="px-4 py-3">
+                Name
+              </th>
+              <th scope="col" className="px-4 py-3">
+                E-mail
+              </th>
+              <th scope="col" className="px-4 py-3">
+                Role
+              </th>
+              <th scope="col" className="px-4 py-3">
+                Status
+              </th>
+              <th scope="col" className="px-4 py-3">
+                Joined
+              </th>
+              <th scope="col" className="px-4 py-3">
+                <span className="sr-only">Switch</span>
+              </th>
             </tr>
-          ))}
-        </tbody>
-      </table>
-    </div>
+          </thead>
+          <tbody>
+            {data.users.map((u) => (
+              <tr key={u.id} className="border-b border-line last:border-0">
+                <td className="px-4 py-3 font-semibold">{u.name}</td>
+                <td className="px-4 py-3">{u.email}</td>
+                <td className="px-4 py-3">
+                  {u.id === me?.id ? (
+                    <span className="capitalize">{u.role}</span>
+                  ) : (
+                    <select
+                      aria-label={`Role of ${u.name}`}
+                      value={u.role}
+                      disabled={update.isPending}
+                      onChange={(e) => update.mutate({ id: u.id, role: e.target.value as Role })}
+                      className="rounded-lg border border-line bg-raised px-2 py-1 capitalize"
+                    >
+                      {ROLES.map((r) => (
+                        <option key={r} value={r}>
+                          {r}
+                        </option>
+                      ))}
+                    </select>
+                  )}
+                </td>
+                <td className="px-4 py-3">
+                  {u.disabled ? (
+                    <span className="text-ember-700 dark:text-ember-100">Switched off</span>
+                  ) : (
+                    <span className="text-reed-700 dark:text-reed-100">Active</span>
+                  )}
+                </td>
+                <td className="px-4 py-3 text-muted">{dateFormat.format(new Date(u.createdAt))}</td>
+                <td className="px-4 py-3">
+                  {u.id === me?.id ? null : (
+                    <button
+                      type="button"
+                      className="rounded-lg border border-line px-3 py-1 font-semibold hover:border-ink-300"
+                      disabled={update.isPending}
+                      onClick={() => update.mutate({ id: u.id, disabled: !u.disabled })}
+                    >
+                      {u.disabled ? `Switch ${u.name} on` : `Switch ${u.name} off`}
+                    </button>
+                  )}
+                </td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
     </div>
   );
 }

@@ -24,7 +24,14 @@ export function AccountNameForm({ user }: { user: User }) {
     <form onSubmit={submit} noValidate className="grid gap-4" aria-label="Your name">
       {saved ? <FormMessage tone="success">Saved.</FormMessage> : null}
       {formError ? <FormMessage tone="error">{formError}</FormMessage> : null}
-      <TextField label="Name" name="name" autoComplete="name" value={name} errors={fields.name} onChange={(e) => setName(e.target.value)} />
+      <TextField
+        label="Name"
+        name="name"
+        autoComplete="name"
+        value={name}
+        errors={fields.name}
+        onChange={(e) => setName(e.target.value)}
+      />
       <p className="text-caption text-muted">Your e-mail is {user.email}; your teacher and studio see this name.</p>
       <Button type="submit" disabled={update.isPending} className="justify-self-start">
         Save name

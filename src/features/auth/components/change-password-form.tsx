@@ -30,7 +30,9 @@ export function ChangePasswordForm() {
 
   return (
     <form onSubmit={submit} noValidate className="grid gap-4" aria-label="Change password">
-      {saved ? <FormMessage tone="success">Password changed. Other browsers signed in as you were signed out.</FormMessage> : null}
+      {saved ? (
+        <FormMessage tone="success">Password changed. Other browsers signed in as you were signed out.</FormMessage>
+      ) : null}
       {formError ? <FormMessage tone="error">{formError}</FormMessage> : null}
       <TextField
         label="Current password"

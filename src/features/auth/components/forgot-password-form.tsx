@@ -27,7 +27,15 @@ export function ForgotPasswordForm() {
         </FormMessage>
       ) : null}
       {formError ? <FormMessage tone="error">{formError}</FormMessage> : null}
-      <TextField label="E-mail" name="email" type="email" autoComplete="email" value={email} errors={fields.email} onChange={(e) => setEmail(e.target.value)} />
+      <TextField
+        label="E-mail"
+        name="email"
+        type="email"
+        autoComplete="email"
+        value={email}
+        errors={fields.email}
+        onChange={(e) => setEmail(e.target.value)}
+      />
       <Button type="submit" disabled={request.isPending}>
         {request.isPending ? 'Sending…' : 'Send me a link'}
       </Button>

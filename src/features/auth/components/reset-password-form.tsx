@@ -24,7 +24,10 @@ export function ResetPasswordForm({ token }: { token: string }) {
     return (
       <div className="grid gap-4">
         <FormMessage tone="success">Your new password is set. Every other session was signed out.</FormMessage>
-        <Link to="/sign-in" className="rounded-lg bg-ink-800 px-4 py-2 text-center font-semibold text-white dark:bg-brass-300 dark:text-ink-950">
+        <Link
+          to="/sign-in"
+          className="rounded-lg bg-ink-800 px-4 py-2 text-center font-semibold text-white dark:bg-brass-300 dark:text-ink-950"
+        >
           Sign in
         </Link>
       </div>

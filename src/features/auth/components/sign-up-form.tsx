@@ -27,8 +27,23 @@ export function SignUpForm({ onSignedUp }: { onSignedUp: () => void }) {
   return (
     <form onSubmit={submit} noValidate className="grid gap-4" aria-label="Create an account">
       {formError ? <FormMessage tone="error">{formError}</FormMessage> : null}
-      <TextField label="Your name" name="name" autoComplete="name" value={values.name} errors={fields.name} onChange={(e) => setValues({ ...values, name: e.target.value })} />
-      <TextField label="E-mail" name="email" type="email" autoComplete="email" value={values.email} errors={fields.email} onChange={(e) => setValues({ ...values, email: e.target.value })} />
+      <TextField
+        label="Your name"
+        name="name"
+        autoComplete="name"
+        value={values.name}
+        errors={fields.name}
+        onChange={(e) => setValues({ ...values, name: e.target.value })}
+      />
+      <TextField
+        label="E-mail"
+        name="email"
+        type="email"
+        autoComplete="email"
+        value={values.email}
+        errors={fields.email}
+        onChange={(e) => setValues({ ...values, email: e.target.value })}
+      />
       <TextField
         label="Password"
         name="password"
@@ -47,7 +62,14 @@ export function SignUpForm({ onSignedUp }: { onSignedUp: () => void }) {
               key={r.value}
               className={`flex cursor-pointer gap-3 rounded-lg border p-3 ${values.role === r.value ? 'border-brass-500 bg-brass-100/40 dark:bg-ink-700' : 'border-line'}`}
             >
-              <input type="radio" name="role" value={r.value} checked={values.role === r.value} onChange={() => setValues({ ...values, role: r.value })} className="mt-1" />
+              <input
+                type="radio"
+                name="role"
+                value={r.value}
+                checked={values.role === r.value}
+                onChange={() => setValues({ ...values, role: r.value })}
+                className="mt-1"
+              />
               <span>
                 <span className="block font-bold">{r.title}</span>
                 <span className="text-caption text-muted">{r.text}</span>

@@ -20,13 +20,21 @@ export function UserMenu() {
   }
   return (
     <div className="flex items-center gap-2">
-      <Link to="/account" className="rounded-md px-2 py-1 text-right leading-tight hover:bg-surface" title="Account settings">
+      <Link
+        to="/account"
+        className="rounded-md px-2 py-1 text-right leading-tight hover:bg-surface"
+        title="Account settings"
+      >
         <span className="block text-body font-semibold" data-testid="signed-in-name">
           {user.name}
         </span>
         <span className="block text-caption text-muted">{roleLabel[user.role]}</span>
       </Link>
-      <Button variant="quiet" disabled={signOut.isPending} onClick={() => signOut.mutate(undefined, { onSettled: () => navigate('/sign-in') })}>
+      <Button
+        variant="quiet"
+        disabled={signOut.isPending}
+        onClick={() => signOut.mutate(undefined, { onSettled: () => navigate('/sign-in') })}
+      >
         Sign out
       </Button>
     </div>

@@ -18,7 +18,10 @@ import { api } from '@/lib/api-client';
 export const booksKey = ['books'] as const;
 const enc = encodeURIComponent;
 
-export const catalogueQueryOptions = queryOptions({ queryKey: [...booksKey, 'catalogue'], queryFn: () => api.get<BooksResponse>('/api/books') });
+export const catalogueQueryOptions = queryOptions({
+  queryKey: [...booksKey, 'catalogue'],
+  queryFn: () => api.get<BooksResponse>('/api/books'),
+});
 
 /** Published books, with the viewer's access to each. */
 export function useCatalogue() {
@@ -27,10 +30,15 @@ export function useCatalogue() {
 
 /** A teacher's own books, drafts included. */
 export function useMyBooks(enabled = true) {
-  return useQuery({ queryKey: [...booksKey, 'mine'], queryFn: () => api.get<BooksResponse>('/api/books/mine'), enabled });
+  return useQuery({
+    queryKey: [...booksKey, 'mine'],
+    queryFn: () => api.get<BooksResponse>('/api/books/mine'),
+    enabled,
+  });
 }
 
-export const bookQueryOptions = (id: string) => queryOptions({ queryKey: [...booksKey, id], queryFn: () => api.get<BookResponse>(`/api/books/${enc(id)}`) });
+export const bookQueryOptions = (id: string) =>
+  queryOptions({ queryKey: [...booksKey, id], queryFn: () => api.get<BookResponse>(`/api/books/${enc(id)}`) });
 
 /** One book; `pollMs` keeps asking (after checkout, until the payment has come through). */
 export function useBook(id: string, pollMs: number | false = false) {
@@ -42,11 +50,20 @@ export function fetchBookDrill(bookId: string, drillId: string): Promise<BookDri
 }
 
 export function useBookDrill(bookId: string, drillId: string | null) {
-  return useQuery({ queryKey: [...booksKey, bookId, 'drill', drillId], queryFn: () => fetchBookDrill(bookId, drillId!), enabled: !!drillId, retry: false });
+  return useQuery({
+    queryKey: [...booksKey, bookId, 'drill', drillId],
+    queryFn: () => fetchBookDrill(bookId, drillId!),
+    enabled: !!drillId,
+    retry: false,
+  });
 }
 
 export function useBookEdition(id: string) {
-  return useQuery({ queryKey: [...booksKey, id, 'edition'], queryFn: () => api.get<BookEditionResponse>(`/api/books/${enc(id)}/edition`), retry: false });
+  return useQuery({
+    queryKey: [...booksKey, id, 'edition'],
+    queryFn: () => api.get<BookEditionResponse>(`/api/books/${enc(id)}/edition`),
+    retry: false,
+  });
 }
 
 export function useSales() {

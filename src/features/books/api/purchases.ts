@@ -12,7 +12,12 @@ export function usePurchases() {
 export function useRefundPurchase() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (id: string) => api.post<AdminPurchaseResponse>(`/api/admin/purchases/${encodeURIComponent(id)}/refund`),
-    onSuccess: () => Promise.all([queryClient.invalidateQueries({ queryKey: purchasesKey }), queryClient.invalidateQueries({ queryKey: ['admin', 'audit'] })]),
+    mutationFn: (id: string) =>
+      api.post<AdminPurchaseResponse>(`/api/admin/purchases/${encodeURIComponent(id)}/refund`),
+    onSuccess: () =>
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: purchasesKey }),
+        queryClient.invalidateQueries({ queryKey: ['admin', 'audit'] }),
+      ]),
   });
 }

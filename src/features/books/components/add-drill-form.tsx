@@ -25,19 +25,45 @@ export function AddDrillForm({ bookId }: { bookId: string }) {
   if (mine.length === 0) {
     return (
       <p className="text-muted">
-        Save a drill on the <Link to="/drills" className="underline">Drills page</Link> first; then add it here.
+        Save a drill on the{' '}
+        <Link to="/drills" className="underline">
+          Drills page
+        </Link>{' '}
+        first; then add it here.
       </p>
     );
   }
   return (
-    <form onSubmit={submit} className="grid gap-3 rounded-card border border-dashed border-line p-4" aria-label="Add a drill">
+    <form
+      onSubmit={submit}
+      className="grid gap-3 rounded-card border border-dashed border-line p-4"
+      aria-label="Add a drill"
+    >
       <div className="flex flex-wrap gap-3">
-        <SelectField label="Saved drill" value={chosen} onChange={(e) => setDrillId(e.target.value)} options={mine.map((d) => ({ value: d.id, label: d.name }))} className="min-w-64 flex-1" />
-        <SelectField label="Key cycle" value={cycle} onChange={(e) => setCycle(e.target.value as '' | KeyOrder)} options={CYCLE_OPTIONS} className="w-56" />
+        <SelectField
+          label="Saved drill"
+          value={chosen}
+          onChange={(e) => setDrillId(e.target.value)}
+          options={mine.map((d) => ({ value: d.id, label: d.name }))}
+          className="min-w-64 flex-1"
+        />
+        <SelectField
+          label="Key cycle"
+          value={cycle}
+          onChange={(e) => setCycle(e.target.value as '' | KeyOrder)}
+          options={CYCLE_OPTIONS}
+          className="w-56"
+        />
       </div>
       <label className="grid gap-1 font-semibold">
         Teaching note
-        <textarea value={note} onChange={(e) => setNote(e.target.value)} rows={2} maxLength={600} className="rounded-lg border border-line bg-raised px-3 py-2 font-normal" />
+        <textarea
+          value={note}
+          onChange={(e) => setNote(e.target.value)}
+          rows={2}
+          maxLength={600}
+          className="rounded-lg border border-line bg-raised px-3 py-2 font-normal"
+        />
       </label>
       {add.error ? <FormMessage tone="error">{add.error.message}</FormMessage> : null}
       <Button type="submit" disabled={add.isPending || !chosen} className="justify-self-start">

@@ -29,25 +29,53 @@ function DrillRow({ book, drill, index }: { book: Book; drill: BookDrillEntry; i
     <li className="grid gap-2 rounded-card border border-line bg-raised p-4" data-testid="edit-drill">
       <div className="flex flex-wrap items-center gap-2">
         <span className="font-bold text-muted">{index + 1}.</span>
-        <input aria-label={`Title of drill ${index + 1}`} value={title} onChange={(e) => setTitle(e.target.value)} onBlur={() => title !== drill.title && update.mutate({ drillId: drill.id, title })} className="min-w-48 flex-1 rounded-lg border border-line bg-raised px-2 py-1 font-bold" />
+        <input
+          aria-label={`Title of drill ${index + 1}`}
+          value={title}
+          onChange={(e) => setTitle(e.target.value)}
+          onBlur={() => title !== drill.title && update.mutate({ drillId: drill.id, title })}
+          className="min-w-48 flex-1 rounded-lg border border-line bg-raised px-2 py-1 font-bold"
+        />
         <span className="text-caption text-muted">{drill.summary}</span>
       </div>
       <label className="grid gap-1 text-caption font-semibold">
         Teaching note
-        <textarea value={note} rows={2} maxLength={600} onChange={(e) => setNote(e.target.value)} onBlur={() => note !== drill.note && update.mutate({ drillId: drill.id, note })} className="rounded-lg border border-line bg-raised px-2 py-1 text-body font-normal" />
+        <textarea
+          value={note}
+          rows={2}
+          maxLength={600}
+          onChange={(e) => setNote(e.target.value)}
+          onBlur={() => note !== drill.note && update.mutate({ drillId: drill.id, note })}
+          className="rounded-lg border border-line bg-raised px-2 py-1 text-body font-normal"
+        />
       </label>
       <div className="flex flex-wrap items-center gap-2">
-        <select aria-label={`Key cycle of drill ${index + 1}`} value={drill.keyCycle ?? ''} onChange={(e) => update.mutate({ drillId: drill.id, keyCycle: (e.target.value || null) as KeyOrder | null })} className="rounded-lg border border-line bg-raised px-2 py-1">
+        <select
+          aria-label={`Key cycle of drill ${index + 1}`}
+          value={drill.keyCycle ?? ''}
+          onChange={(e) => update.mutate({ drillId: drill.id, keyCycle: (e.target.value || null) as KeyOrder | null })}
+          className="rounded-lg border border-line bg-raised px-2 py-1"
+        >
           {CYCLE_OPTIONS.map((o) => (
             <option key={o.value} value={o.value}>
               {o.label}
             </option>
           ))}
         </select>
-        <Button variant="quiet" onClick={() => move(-1)} disabled={index === 0 || reorder.isPending} aria-label={`Move ${drill.title} up`}>
+        <Button
+          variant="quiet"
+          onClick={() => move(-1)}
+          disabled={index === 0 || reorder.isPending}
+          aria-label={`Move ${drill.title} up`}
+        >
           ↑ Up
         </Button>
-        <Button variant="quiet" onClick={() => move(1)} disabled={index === ids.length - 1 || reorder.isPending} aria-label={`Move ${drill.title} down`}>
+        <Button
+          variant="quiet"
+          onClick={() => move(1)}
+          disabled={index === ids.length - 1 || reorder.isPending}
+          aria-label={`Move ${drill.title} down`}
+        >
           ↓ Down
         </Button>
         {drill.free ? (
@@ -57,7 +85,12 @@ function DrillRow({ book, drill, index }: { book: Book; drill: BookDrillEntry; i
             Make this the free drill
           </Button>
         )}
-        <Button variant="danger" onClick={() => remove.mutate(drill.id)} disabled={remove.isPending} aria-label={`Remove ${drill.title}`}>
+        <Button
+          variant="danger"
+          onClick={() => remove.mutate(drill.id)}
+          disabled={remove.isPending}
+          aria-label={`Remove ${drill.title}`}
+        >
           Remove
         </Button>
       </div>

@@ -8,13 +8,28 @@ import { useCheckout } from '../api/books';
  * Price and the buy button. Buying goes to the hosted checkout page; back from it, the page
  * says so while it waits for the payment to come through (the server hears it by webhook).
  */
-export function BuyPanel({ book, signedIn, returned }: { book: Book; signedIn: boolean; returned: 'done' | 'cancelled' | null }) {
+export function BuyPanel({
+  book,
+  signedIn,
+  returned,
+}: {
+  book: Book;
+  signedIn: boolean;
+  returned: 'done' | 'cancelled' | null;
+}) {
   const checkout = useCheckout(book.id);
   const price = formatPrice(book.priceMinor, book.currency);
-  if (book.access === 'owner') return <FormMessage tone="info">This is your book. Players see it at {price}.</FormMessage>;
+  if (book.access === 'owner')
+    return <FormMessage tone="info">This is your book. Players see it at {price}.</FormMessage>;
   if (book.access === 'free-book') return <FormMessage tone="success">Free: every drill is open to you.</FormMessage>;
   if (book.access === 'bought') {
-    return <FormMessage tone="success">{returned === 'done' ? 'Payment received. The whole book is yours: every drill is open.' : 'You have this book: every drill is open.'}</FormMessage>;
+    return (
+      <FormMessage tone="success">
+        {returned === 'done'
+          ? 'Payment received. The whole book is yours: every drill is open.'
+          : 'You have this book: every drill is open.'}
+      </FormMessage>
+    );
   }
   async function buy() {
     const { url } = await checkout.mutateAsync();
@@ -27,7 +42,9 @@ export function BuyPanel({ book, signedIn, returned }: { book: Book; signedIn: b
           <span aria-live="polite">Waiting for the payment to come through…</span>
         </FormMessage>
       ) : null}
-      {returned === 'cancelled' ? <FormMessage tone="info">Checkout cancelled; nothing was charged.</FormMessage> : null}
+      {returned === 'cancelled' ? (
+        <FormMessage tone="info">Checkout cancelled; nothing was charged.</FormMessage>
+      ) : null}
       {checkout.error ? <FormMessage tone="error">{checkout.error.message}</FormMessage> : null}
       <div className="flex flex-wrap items-center gap-4">
         <p className="text-title" data-testid="book-price">

@@ -27,7 +27,8 @@ export function MyBooks() {
             <div className="grid content-start gap-1">
               <p className="font-bold">{b.title}</p>
               <p className="text-caption text-muted">
-                {b.published ? 'Published' : 'Draft'} · {formatPrice(b.priceMinor, b.currency)} · {b.drills.length} drills
+                {b.published ? 'Published' : 'Draft'} · {formatPrice(b.priceMinor, b.currency)} · {b.drills.length}{' '}
+                drills
               </p>
               <p className="flex flex-wrap gap-3 text-caption font-semibold">
                 <Link to={`/books/${b.id}/edit`} className="underline">

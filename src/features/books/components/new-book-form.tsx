@@ -12,16 +12,32 @@ export function NewBookForm() {
   const navigate = useNavigate();
   async function submit(e: FormEvent) {
     e.preventDefault();
-    const { book } = await create.mutateAsync({ title, description: '', coverColour: 'brass', priceMinor: 0, currency: 'EUR' });
+    const { book } = await create.mutateAsync({
+      title,
+      description: '',
+      coverColour: 'brass',
+      priceMinor: 0,
+      currency: 'EUR',
+    });
     navigate(`/books/${book.id}/edit`);
   }
   return (
     <form onSubmit={submit} className="flex flex-wrap items-end gap-3">
-      <TextField label="New book title" value={title} onChange={(e) => setTitle(e.target.value)} required maxLength={120} className="min-w-64 flex-1" errors={(create.error as { fields?: Record<string, string[]> } | null)?.fields?.title} />
+      <TextField
+        label="New book title"
+        value={title}
+        onChange={(e) => setTitle(e.target.value)}
+        required
+        maxLength={120}
+        className="min-w-64 flex-1"
+        errors={(create.error as { fields?: Record<string, string[]> } | null)?.fields?.title}
+      />
       <Button type="submit" disabled={create.isPending}>
         Start a book
       </Button>
-      {create.error && !(create.error as { fields?: unknown }).fields ? <FormMessage tone="error">{create.error.message}</FormMessage> : null}
+      {create.error && !(create.error as { fields?: unknown }).fields ? (
+        <FormMessage tone="error">{create.error.message}</FormMessage>
+      ) : null}
     </form>
   );
 }

@@ -19,7 +19,15 @@ export interface EditionDrill {
  * The printable edition: the book's title page, then each drill in all twelve keys in written
  * pitch. Staves are drawn one after another under one progress bar, then the browser prints.
  */
-export function PrintEdition({ book, drills, titleOf }: { book: Book; drills: EditionDrill[]; titleOf: (drill: Drill) => string }) {
+export function PrintEdition({
+  book,
+  drills,
+  titleOf,
+}: {
+  book: Book;
+  drills: EditionDrill[];
+  titleOf: (drill: Drill) => string;
+}) {
   const [done, setDone] = useState(0);
   const flat = drills.flatMap((d) => d.cycle.map((drill, k) => ({ owner: d.id, drill, k })));
   const total = flat.length;
@@ -44,7 +52,11 @@ export function PrintEdition({ book, drills, titleOf }: { book: Book; drills: Ed
         <h1 className="text-display">{book.title}</h1>
         <p className="text-lead">{book.teacher.name}</p>
         {book.description ? <p className="mt-2">{book.description}</p> : null}
-        {instrument ? <p className="mt-2 text-caption">Written pitch for {instruments[instrument].label}; every drill in all 12 keys.</p> : null}
+        {instrument ? (
+          <p className="mt-2 text-caption">
+            Written pitch for {instruments[instrument].label}; every drill in all 12 keys.
+          </p>
+        ) : null}
       </header>
       {drills.map((d, n) => (
         <section key={d.id} className="sf-print-drill grid gap-4" aria-label={d.title}>

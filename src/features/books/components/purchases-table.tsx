@@ -21,11 +21,21 @@ export function PurchasesTable() {
           <caption className="sr-only">Purchases</caption>
           <thead className="border-b border-line text-caption uppercase tracking-wider text-muted">
             <tr>
-              <th scope="col" className="px-4 py-3">Paid</th>
-              <th scope="col" className="px-4 py-3">Book</th>
-              <th scope="col" className="px-4 py-3">Player</th>
-              <th scope="col" className="px-4 py-3">Amount</th>
-              <th scope="col" className="px-4 py-3">State</th>
+              <th scope="col" className="px-4 py-3">
+                Paid
+              </th>
+              <th scope="col" className="px-4 py-3">
+                Book
+              </th>
+              <th scope="col" className="px-4 py-3">
+                Player
+              </th>
+              <th scope="col" className="px-4 py-3">
+                Amount
+              </th>
+              <th scope="col" className="px-4 py-3">
+                State
+              </th>
             </tr>
           </thead>
           <tbody>
@@ -41,7 +51,8 @@ export function PurchasesTable() {
                       variant="danger"
                       disabled={refund.isPending}
                       onClick={() => {
-                        if (window.confirm(`Refund ${p.player.name} for “${p.book.title}”? They lose the book.`)) refund.mutate(p.id);
+                        if (window.confirm(`Refund ${p.player.name} for “${p.book.title}”? They lose the book.`))
+                          refund.mutate(p.id);
                       }}
                     >
                       Refund

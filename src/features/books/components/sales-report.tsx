@@ -26,11 +26,21 @@ export function SalesReport() {
           <caption className="sr-only">Sales per book</caption>
           <thead className="border-b border-line text-caption uppercase tracking-wider text-muted">
             <tr>
-              <th scope="col" className="px-4 py-3">Book</th>
-              <th scope="col" className="px-4 py-3">Price</th>
-              <th scope="col" className="px-4 py-3 text-right">Sold</th>
-              <th scope="col" className="px-4 py-3 text-right">Refunded</th>
-              <th scope="col" className="px-4 py-3 text-right">Revenue</th>
+              <th scope="col" className="px-4 py-3">
+                Book
+              </th>
+              <th scope="col" className="px-4 py-3">
+                Price
+              </th>
+              <th scope="col" className="px-4 py-3 text-right">
+                Sold
+              </th>
+              <th scope="col" className="px-4 py-3 text-right">
+                Refunded
+              </th>
+              <th scope="col" className="px-4 py-3 text-right">
+                Revenue
+              </th>
             </tr>
           </thead>
           <tbody>
@@ -64,7 +74,13 @@ export function SalesReport() {
                   <Tooltip />
                   <Legend />
                   {sold.map((b, i) => (
-                    <Bar key={b.id} dataKey={b.id} name={titles.get(b.id)} stackId="sold" fill={BAR_COLOURS[i % BAR_COLOURS.length]} />
+                    <Bar
+                      key={b.id}
+                      dataKey={b.id}
+                      name={titles.get(b.id)}
+                      stackId="sold"
+                      fill={BAR_COLOURS[i % BAR_COLOURS.length]}
+                    />
                   ))}
                 </BarChart>
               </ResponsiveContainer>

@@ -21,5 +21,8 @@ export function saveCustomPattern(input: CreateCustomPatternInput): Promise<Cust
 
 export function useSaveCustomPattern() {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: saveCustomPattern, onSuccess: () => queryClient.invalidateQueries({ queryKey: customPatternsKey }) });
+  return useMutation({
+    mutationFn: saveCustomPattern,
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: customPatternsKey }),
+  });
 }

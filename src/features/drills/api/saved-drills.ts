@@ -21,7 +21,10 @@ export function saveDrill(input: CreateSavedDrillInput): Promise<SavedDrillRespo
 
 export function useSaveDrill() {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: saveDrill, onSuccess: () => queryClient.invalidateQueries({ queryKey: savedDrillsKey }) });
+  return useMutation({
+    mutationFn: saveDrill,
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: savedDrillsKey }),
+  });
 }
 
 export function deleteSavedDrill(id: string): Promise<void> {
@@ -30,5 +33,8 @@ export function deleteSavedDrill(id: string): Promise<void> {
 
 export function useDeleteSavedDrill() {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: deleteSavedDrill, onSuccess: () => queryClient.invalidateQueries({ queryKey: savedDrillsKey }) });
+  return useMutation({
+    mutationFn: deleteSavedDrill,
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: savedDrillsKey }),
+  });
 }

@@ -59,7 +59,11 @@ export function AudioPreview({ drill, onNote }: { drill: Drill; onNote: (index: 
     setState('rendering');
     try {
       const { renderDrillWav } = await player();
-      downloadBytes(await renderDrillWav(drill, { click, pad, countInMeasures: 1 }), `${fileBase(drill)}.wav`, 'audio/wav');
+      downloadBytes(
+        await renderDrillWav(drill, { click, pad, countInMeasures: 1 }),
+        `${fileBase(drill)}.wav`,
+        'audio/wav',
+      );
     } catch (err) {
       console.error(err);
       setError('The audio file could not be made in this browser.');
@@ -81,11 +85,23 @@ export function AudioPreview({ drill, onNote }: { drill: Drill; onNote: (index: 
           </Button>
         )}
         <label htmlFor={clickId} className="flex items-center gap-2 text-body">
-          <input id={clickId} type="checkbox" checked={click} onChange={(e) => setClick(e.target.checked)} disabled={state === 'playing'} />
+          <input
+            id={clickId}
+            type="checkbox"
+            checked={click}
+            onChange={(e) => setClick(e.target.checked)}
+            disabled={state === 'playing'}
+          />
           Click
         </label>
         <label htmlFor={padId} className="flex items-center gap-2 text-body">
-          <input id={padId} type="checkbox" checked={pad} onChange={(e) => setPad(e.target.checked)} disabled={!drill.spec.chord || state === 'playing'} />
+          <input
+            id={padId}
+            type="checkbox"
+            checked={pad}
+            onChange={(e) => setPad(e.target.checked)}
+            disabled={!drill.spec.chord || state === 'playing'}
+          />
           Chord pad{drill.spec.chord ? ` (${drill.spec.chord})` : ' (no chord set)'}
         </label>
         <Button variant="quiet" onClick={renderWav} disabled={state !== 'idle'}>

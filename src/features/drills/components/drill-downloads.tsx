@@ -11,17 +11,34 @@ export function DrillDownloads({ drill, printHref }: { drill: Drill; printHref: 
         Take it with you
       </h2>
       <div className="flex flex-wrap gap-2">
-        <Button variant="quiet" onClick={() => downloadBytes(drillToMidi(drill), `${fileBase(drill)}.mid`, 'audio/midi')}>
+        <Button
+          variant="quiet"
+          onClick={() => downloadBytes(drillToMidi(drill), `${fileBase(drill)}.mid`, 'audio/midi')}
+        >
           MIDI file
         </Button>
-        <Button variant="quiet" onClick={() => downloadBytes(drillToMusicXml(drill), `${fileBase(drill)}.musicxml`, 'application/vnd.recordare.musicxml+xml')}>
+        <Button
+          variant="quiet"
+          onClick={() =>
+            downloadBytes(
+              drillToMusicXml(drill),
+              `${fileBase(drill)}.musicxml`,
+              'application/vnd.recordare.musicxml+xml',
+            )
+          }
+        >
           MusicXML file
         </Button>
-        <Link to={printHref} className="inline-flex items-center rounded-lg bg-ink-800 px-4 py-2 font-semibold text-white hover:bg-ink-700 dark:bg-brass-300 dark:text-ink-950">
+        <Link
+          to={printHref}
+          className="inline-flex items-center rounded-lg bg-ink-800 px-4 py-2 font-semibold text-white hover:bg-ink-700 dark:bg-brass-300 dark:text-ink-950"
+        >
           Printable key cycle (12 keys)
         </Link>
       </div>
-      <p className="text-caption text-muted">MIDI sounds at concert pitch; MusicXML and the printed pages are in written pitch for the instrument.</p>
+      <p className="text-caption text-muted">
+        MIDI sounds at concert pitch; MusicXML and the printed pages are in written pitch for the instrument.
+      </p>
     </section>
   );
 }

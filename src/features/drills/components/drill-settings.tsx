@@ -6,17 +6,26 @@ import { keyLabel } from '@/components/midi/keyboard-diagram';
 import type { Draft } from '../hooks/use-drill-draft';
 import { NEW_TRIAD_PATTERN } from './pattern-form';
 
-const INSTRUMENT_OPTIONS = (Object.keys(instruments) as InstrumentId[]).map((id) => ({ value: id, label: instruments[id].label }));
+const INSTRUMENT_OPTIONS = (Object.keys(instruments) as InstrumentId[]).map((id) => ({
+  value: id,
+  label: instruments[id].label,
+}));
 const METER_OPTIONS = METERS.map(([n, d]) => ({ value: `${n}/${d}`, label: `${n}/${d}` }));
 const pick = (fields: FieldErrors, ...keys: string[]) => {
-  const out = keys.flatMap((k) => Object.entries(fields).filter(([f]) => f === k || f.startsWith(`${k}.`)).flatMap(([, v]) => v));
+  const out = keys.flatMap((k) =>
+    Object.entries(fields)
+      .filter(([f]) => f === k || f.startsWith(`${k}.`))
+      .flatMap(([, v]) => v),
+  );
   return out.length ? out : undefined;
 };
 
 /** JSON with keys in one order (PostgreSQL's jsonb gives them back in its own). */
 function canonical(value: unknown): string {
   return JSON.stringify(value, (_k, v: unknown) =>
-    v && typeof v === 'object' && !Array.isArray(v) ? Object.fromEntries(Object.entries(v).sort(([a], [b]) => a.localeCompare(b))) : v,
+    v && typeof v === 'object' && !Array.isArray(v)
+      ? Object.fromEntries(Object.entries(v).sort(([a], [b]) => a.localeCompare(b)))
+      : v,
   );
 }
 
@@ -53,11 +62,27 @@ export function DrillSettings({
         The drill
       </h2>
       <div className="grid items-start gap-3 sm:grid-cols-2">
-        <TextField className="min-w-0" label="Triad a" value={draft.pair[0]} errors={pick(fields, 'pair.0')} onChange={(e) => update({ pair: [e.target.value, draft.pair[1]] })} />
-        <TextField className="min-w-0" label="Triad b" value={draft.pair[1]} errors={pick(fields, 'pair.1')} onChange={(e) => update({ pair: [draft.pair[0], e.target.value] })} />
+        <TextField
+          className="min-w-0"
+          label="Triad a"
+          value={draft.pair[0]}
+          errors={pick(fields, 'pair.0')}
+          onChange={(e) => update({ pair: [e.target.value, draft.pair[1]] })}
+        />
+        <TextField
+          className="min-w-0"
+          label="Triad b"
+          value={draft.pair[1]}
+          errors={pick(fields, 'pair.1')}
+          onChange={(e) => update({ pair: [draft.pair[0], e.target.value] })}
+        />
       </div>
       {fields.pair ? (
-        <p role="alert" className="text-caption font-semibold text-ember-700 dark:text-ember-100" data-testid="pair-error">
+        <p
+          role="alert"
+          className="text-caption font-semibold text-ember-700 dark:text-ember-100"
+          data-testid="pair-error"
+        >
           {fields.pair.join(' ')}
         </p>
       ) : null}
@@ -69,8 +94,10 @@ export function DrillSettings({
           errors={typeof draft.pattern === 'string' ? pick(fields, 'pattern') : undefined}
           onChange={(e) => {
             const v = e.target.value;
-            if (v === 'custom') update({ pattern: typeof draft.pattern === 'string' ? { ...NEW_TRIAD_PATTERN } : draft.pattern });
-            else if (v.startsWith('saved:')) update({ pattern: savedPatterns.find((p) => `saved:${p.id}` === v)?.def ?? draft.pattern });
+            if (v === 'custom')
+              update({ pattern: typeof draft.pattern === 'string' ? { ...NEW_TRIAD_PATTERN } : draft.pattern });
+            else if (v.startsWith('saved:'))
+              update({ pattern: savedPatterns.find((p) => `saved:${p.id}` === v)?.def ?? draft.pattern });
             else update({ pattern: v as Draft['pattern'] });
           }}
         />
@@ -84,7 +111,12 @@ export function DrillSettings({
           ]}
           onChange={(e) => update({ direction: e.target.value as Draft['direction'] })}
         />
-        <SelectField label="Instrument" value={draft.instrument} options={INSTRUMENT_OPTIONS} onChange={(e) => update({ instrument: e.target.value as InstrumentId })} />
+        <SelectField
+          label="Instrument"
+          value={draft.instrument}
+          options={INSTRUMENT_OPTIONS}
+          onChange={(e) => update({ instrument: e.target.value as InstrumentId })}
+        />
         <TextField
           className="min-w-0"
           label="Lowest note (MIDI, sounding)"
@@ -107,7 +139,16 @@ export function DrillSettings({
           errors={pick(fields, 'range.high')}
           onChange={(e) => setRange({ high: Number(e.target.value) })}
         />
-        <TextField className="min-w-0" label="Tempo (quarter notes per minute)" type="number" min={20} max={400} value={String(draft.tempo)} errors={pick(fields, 'tempo')} onChange={(e) => update({ tempo: Number(e.target.value) })} />
+        <TextField
+          className="min-w-0"
+          label="Tempo (quarter notes per minute)"
+          type="number"
+          min={20}
+          max={400}
+          value={String(draft.tempo)}
+          errors={pick(fields, 'tempo')}
+          onChange={(e) => update({ tempo: Number(e.target.value) })}
+        />
         <SelectField
           label="Meter"
           value={`${draft.meter[0]}/${draft.meter[1]}`}
@@ -125,7 +166,14 @@ export function DrillSettings({
           ]}
           onChange={(e) => update({ order: e.target.value as Draft['order'] })}
         />
-        <TextField className="min-w-0" label="Chord (for the pad)" value={draft.chord} errors={pick(fields, 'chord')} placeholder="none" onChange={(e) => update({ chord: e.target.value })} />
+        <TextField
+          className="min-w-0"
+          label="Chord (for the pad)"
+          value={draft.chord}
+          errors={pick(fields, 'chord')}
+          placeholder="none"
+          onChange={(e) => update({ chord: e.target.value })}
+        />
       </div>
       {fields.start ? (
         <p role="alert" className="text-caption font-semibold text-ember-700 dark:text-ember-100">

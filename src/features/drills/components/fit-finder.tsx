@@ -19,7 +19,13 @@ const SHOWN = 8;
  * The fit finder: a chord symbol in, the pairs whose six notes fit it out, best first, with
  * each note's function against the chord.
  */
-export function FitFinder({ initialChord, onPick }: { initialChord: string; onPick: (fit: ChordFit, chord: string) => void }) {
+export function FitFinder({
+  initialChord,
+  onPick,
+}: {
+  initialChord: string;
+  onPick: (fit: ChordFit, chord: string) => void;
+}) {
   const [text, setText] = useState(initialChord);
   const [asked, setAsked] = useState<string | null>(null);
   const [all, setAll] = useState(false);
@@ -71,7 +77,11 @@ export function FitFinder({ initialChord, onPick }: { initialChord: string; onPi
           </p>
           <ol className="grid gap-2" aria-label={`Pairs for ${found.chord}`}>
             {shown.map((fit) => (
-              <li key={`${fit.pair.a.symbol}/${fit.pair.b.symbol}`} className="flex flex-wrap items-center gap-x-3 gap-y-2 rounded-lg border border-line bg-surface p-3" data-testid="fit">
+              <li
+                key={`${fit.pair.a.symbol}/${fit.pair.b.symbol}`}
+                className="flex flex-wrap items-center gap-x-3 gap-y-2 rounded-lg border border-line bg-surface p-3"
+                data-testid="fit"
+              >
                 <span className="w-6 text-caption font-bold text-muted">{fit.rank}</span>
                 <span className="min-w-24 font-bold">
                   <span className="text-dusk-700 dark:text-dusk-100">{fit.pair.a.symbol}</span> /{' '}
@@ -86,7 +96,11 @@ export function FitFinder({ initialChord, onPick }: { initialChord: string; onPi
                     </span>
                   ))}
                 </span>
-                <Button variant="quiet" onClick={() => onPick(fit, found.chord)} aria-label={`Use ${fit.pair.a.symbol} / ${fit.pair.b.symbol}`}>
+                <Button
+                  variant="quiet"
+                  onClick={() => onPick(fit, found.chord)}
+                  aria-label={`Use ${fit.pair.a.symbol} / ${fit.pair.b.symbol}`}
+                >
                   Use this pair
                 </Button>
               </li>

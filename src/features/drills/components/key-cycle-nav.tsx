@@ -2,11 +2,23 @@ import type { Drill } from '@shared/engine';
 import { Button } from '@/components/ui/button';
 
 /** The 12 keys of the cycle, in the chosen order; one is shown at a time. */
-export function KeyCycleNav({ cycle, index, onChange }: { cycle: Drill[]; index: number; onChange: (i: number) => void }) {
+export function KeyCycleNav({
+  cycle,
+  index,
+  onChange,
+}: {
+  cycle: Drill[];
+  index: number;
+  onChange: (i: number) => void;
+}) {
   if (cycle.length < 2) return null;
   return (
     <nav aria-label="Key cycle" className="flex flex-wrap items-center gap-1">
-      <Button variant="quiet" onClick={() => onChange((index + cycle.length - 1) % cycle.length)} aria-label="Previous key">
+      <Button
+        variant="quiet"
+        onClick={() => onChange((index + cycle.length - 1) % cycle.length)}
+        aria-label="Previous key"
+      >
         ←
       </Button>
       <ol className="flex flex-wrap gap-1">

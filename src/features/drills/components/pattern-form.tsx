@@ -28,7 +28,13 @@ export const NEW_TRIAD_PATTERN: PatternDef = {
   ],
 };
 
-const NEW_SCALE_PATTERN: PatternDef = { name: 'My pattern', subdivision: 'eighth', source: 'scale', degrees: [0, 1, 2, 3], step: 1 };
+const NEW_SCALE_PATTERN: PatternDef = {
+  name: 'My pattern',
+  subdivision: 'eighth',
+  source: 'scale',
+  degrees: [0, 1, 2, 3],
+  step: 1,
+};
 
 /** The first notes of the drill, cell by cell, in written pitch: the pattern's live preview. */
 function firstCells(drill: Drill | undefined): string {
@@ -69,8 +75,18 @@ export function PatternForm({
     <fieldset className="grid gap-3 rounded-lg border border-line p-4">
       <legend className="px-1 font-bold">Custom pattern</legend>
       <div className="grid gap-3 sm:grid-cols-3">
-        <TextField label="Pattern name" value={def.name} errors={err('name')} onChange={(e) => onChange({ ...def, name: e.target.value })} />
-        <SelectField label="Moves in" value={def.subdivision} options={SUBDIVISIONS} onChange={(e) => onChange({ ...def, subdivision: e.target.value as PatternDef['subdivision'] })} />
+        <TextField
+          label="Pattern name"
+          value={def.name}
+          errors={err('name')}
+          onChange={(e) => onChange({ ...def, name: e.target.value })}
+        />
+        <SelectField
+          label="Moves in"
+          value={def.subdivision}
+          options={SUBDIVISIONS}
+          onChange={(e) => onChange({ ...def, subdivision: e.target.value as PatternDef['subdivision'] })}
+        />
         <SelectField
           label="Built from"
           value={def.source}
@@ -78,7 +94,13 @@ export function PatternForm({
             ['triads', 'the two triads, cell by cell'],
             ['scale', 'the six-note scale, by degrees'],
           ])}
-          onChange={(e) => onChange(e.target.value === 'scale' ? { ...NEW_SCALE_PATTERN, name: def.name, subdivision: def.subdivision } : { ...NEW_TRIAD_PATTERN, name: def.name, subdivision: def.subdivision })}
+          onChange={(e) =>
+            onChange(
+              e.target.value === 'scale'
+                ? { ...NEW_SCALE_PATTERN, name: def.name, subdivision: def.subdivision }
+                : { ...NEW_TRIAD_PATTERN, name: def.name, subdivision: def.subdivision },
+            )
+          }
         />
       </div>
       {def.source === 'triads' ? (
@@ -86,13 +108,55 @@ export function PatternForm({
           {def.cells.map((c, i) => (
             <li key={i} className="grid grid-cols-2 items-end gap-2 rounded-lg bg-surface p-2 sm:grid-cols-6">
               <span className="self-center text-caption font-bold text-muted">Cell {i + 1}</span>
-              <SelectField label="Triad" value={c.triad} options={opts([['a', 'a'], ['b', 'b']])} onChange={(e) => setCell(i, { triad: e.target.value as 'a' | 'b' })} />
-              <SelectField label="Notes" value={String(c.notes)} options={opts([['3', '3'], ['4', '4']])} onChange={(e) => setCell(i, { notes: Number(e.target.value) as 3 | 4 })} />
-              <SelectField label="Shape" value={c.shape} options={opts([['line', 'line'], ['leap', 'leap']])} onChange={(e) => setCell(i, { shape: e.target.value as 'line' | 'leap' })} />
-              <SelectField label="Motion" value={c.motion} options={opts([['up', 'up'], ['down', 'down']])} onChange={(e) => setCell(i, { motion: e.target.value as 'up' | 'down' })} />
-              <SelectField label="Enters" value={c.entry} options={ENTRIES} errors={err(`cells.${i}`)} onChange={(e) => setCell(i, { entry: e.target.value as TriadCell['entry'] })} />
+              <SelectField
+                label="Triad"
+                value={c.triad}
+                options={opts([
+                  ['a', 'a'],
+                  ['b', 'b'],
+                ])}
+                onChange={(e) => setCell(i, { triad: e.target.value as 'a' | 'b' })}
+              />
+              <SelectField
+                label="Notes"
+                value={String(c.notes)}
+                options={opts([
+                  ['3', '3'],
+                  ['4', '4'],
+                ])}
+                onChange={(e) => setCell(i, { notes: Number(e.target.value) as 3 | 4 })}
+              />
+              <SelectField
+                label="Shape"
+                value={c.shape}
+                options={opts([
+                  ['line', 'line'],
+                  ['leap', 'leap'],
+                ])}
+                onChange={(e) => setCell(i, { shape: e.target.value as 'line' | 'leap' })}
+              />
+              <SelectField
+                label="Motion"
+                value={c.motion}
+                options={opts([
+                  ['up', 'up'],
+                  ['down', 'down'],
+                ])}
+                onChange={(e) => setCell(i, { motion: e.target.value as 'up' | 'down' })}
+              />
+              <SelectField
+                label="Enters"
+                value={c.entry}
+                options={ENTRIES}
+                errors={err(`cells.${i}`)}
+                onChange={(e) => setCell(i, { entry: e.target.value as TriadCell['entry'] })}
+              />
               {def.cells.length > 1 ? (
-                <Button variant="quiet" className="col-span-2 sm:col-span-6 sm:justify-self-end" onClick={() => onChange({ ...def, cells: def.cells.filter((_, j) => j !== i) })}>
+                <Button
+                  variant="quiet"
+                  className="col-span-2 sm:col-span-6 sm:justify-self-end"
+                  onClick={() => onChange({ ...def, cells: def.cells.filter((_, j) => j !== i) })}
+                >
                   Remove cell {i + 1}
                 </Button>
               ) : null}
@@ -104,7 +168,10 @@ export function PatternForm({
                 variant="quiet"
                 onClick={() => {
                   const last = def.cells[def.cells.length - 1];
-                  onChange({ ...def, cells: [...def.cells, { ...last, triad: last.triad === 'a' ? 'b' : 'a', entry: 'above' }] });
+                  onChange({
+                    ...def,
+                    cells: [...def.cells, { ...last, triad: last.triad === 'a' ? 'b' : 'a', entry: 'above' }],
+                  });
                 }}
               >
                 Add a cell
@@ -127,7 +194,13 @@ export function PatternForm({
               onChange({ ...def, degrees });
             }}
           />
-          <TextField label="Step per cell" type="number" value={String(def.step)} errors={err('step')} onChange={(e) => onChange({ ...def, step: Number(e.target.value) })} />
+          <TextField
+            label="Step per cell"
+            type="number"
+            value={String(def.step)}
+            errors={err('step')}
+            onChange={(e) => onChange({ ...def, step: Number(e.target.value) })}
+          />
         </div>
       )}
       <p className="text-caption text-muted" aria-live="polite">

@@ -6,7 +6,11 @@ import { DrillStaff } from '@/components/notation/drill-staff';
 import { pairTitle } from './written-pair';
 import '@/components/print/print-pages.css';
 
-const ORDER_LABEL: Record<KeyOrder, string> = { chromatic: 'chromatic, up a half step', fourths: 'in fourths', fifths: 'in fifths' };
+const ORDER_LABEL: Record<KeyOrder, string> = {
+  chromatic: 'chromatic, up a half step',
+  fourths: 'in fourths',
+  fifths: 'in fifths',
+};
 const PAGE_WIDTH = 700;
 
 /**
@@ -71,7 +75,12 @@ export function PrintCycle({ cycle, order }: { cycle: Drill[]; order: KeyOrder }
       </header>
       {cycle.map((drill, i) =>
         i <= done ? (
-          <section key={`${drill.spec.pair.join('/')}-${i}`} className="sf-print-key" aria-label={`Key ${i + 1} of ${cycle.length}`} data-testid="print-key">
+          <section
+            key={`${drill.spec.pair.join('/')}-${i}`}
+            className="sf-print-key"
+            aria-label={`Key ${i + 1} of ${cycle.length}`}
+            data-testid="print-key"
+          >
             <h2 className="font-bold">
               {i + 1}. {pairTitle(drill)}
               {drill.spec.chord ? <span className="font-normal text-muted"> over {drill.spec.chord}</span> : null}

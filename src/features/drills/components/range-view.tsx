@@ -18,7 +18,7 @@ export function RangeView({ drill, aChromas }: { drill: Drill; aChromas: Set<num
   const highest = Math.max(...drill.notes.map((n) => n.midi));
   // Show the instrument's whole range with a few keys either side, starting and ending on C.
   const from = Math.max(0, low - (low % 12) - 0);
-  const to = Math.min(127, high + (12 - (high % 12)) % 12);
+  const to = Math.min(127, high + ((12 - (high % 12)) % 12));
   return (
     <figure className="m-0 grid max-w-3xl gap-2">
       <KeyboardDiagram
@@ -31,13 +31,16 @@ export function RangeView({ drill, aChromas }: { drill: Drill; aChromas: Set<num
       />
       <figcaption className="flex flex-wrap gap-4 text-caption text-muted">
         <span>
-          <span className="mr-1 inline-block h-3 w-3 rounded-sm bg-dusk-500 align-middle" /> triad a ({drill.spec.pair[0]})
+          <span className="mr-1 inline-block h-3 w-3 rounded-sm bg-dusk-500 align-middle" /> triad a (
+          {drill.spec.pair[0]})
         </span>
         <span>
-          <span className="mr-1 inline-block h-3 w-3 rounded-sm bg-brass-500 align-middle" /> triad b ({drill.spec.pair[1]})
+          <span className="mr-1 inline-block h-3 w-3 rounded-sm bg-brass-500 align-middle" /> triad b (
+          {drill.spec.pair[1]})
         </span>
         <span>
-          Sounding {keyLabel(lowest)}–{keyLabel(highest)} of {keyLabel(low)}–{keyLabel(high)}; greyed keys are out of reach
+          Sounding {keyLabel(lowest)}–{keyLabel(highest)} of {keyLabel(low)}–{keyLabel(high)}; greyed keys are out of
+          reach
         </span>
       </figcaption>
     </figure>

@@ -63,12 +63,21 @@ export function SavedDrillsPanel({
         Open
       </Button>
       {canPractise ? (
-        <Link to={`/practice?drill=${encodeURIComponent(d.id)}`} className="rounded-lg border border-line px-3 py-2 font-semibold hover:border-ink-300" aria-label={`Practise ${d.name}`}>
+        <Link
+          to={`/practice?drill=${encodeURIComponent(d.id)}`}
+          className="rounded-lg border border-line px-3 py-2 font-semibold hover:border-ink-300"
+          aria-label={`Practise ${d.name}`}
+        >
           Practise
         </Link>
       ) : null}
       {d.mine ? (
-        <Button variant="quiet" onClick={() => remove.mutate(d.id)} aria-label={`Delete ${d.name}`} disabled={remove.isPending}>
+        <Button
+          variant="quiet"
+          onClick={() => remove.mutate(d.id)}
+          aria-label={`Delete ${d.name}`}
+          disabled={remove.isPending}
+        >
           Delete
         </Button>
       ) : null}
@@ -81,13 +90,22 @@ export function SavedDrillsPanel({
         Saved drills
       </h2>
       <form onSubmit={submit} noValidate className="flex flex-wrap items-end gap-2" aria-label="Save this drill">
-        <TextField className="flex-1" label="Name for this drill" value={name} errors={fields.name} onChange={(e) => setName(e.target.value)} placeholder="D/C over D7, slow" />
+        <TextField
+          className="flex-1"
+          label="Name for this drill"
+          value={name}
+          errors={fields.name}
+          onChange={(e) => setName(e.target.value)}
+          placeholder="D/C over D7, slow"
+        />
         <Button type="submit" disabled={save.isPending || !spec}>
           {save.isPending ? 'Saving…' : 'Save drill'}
         </Button>
       </form>
       {formError ? <FormMessage tone="error">{formError}</FormMessage> : null}
-      {Object.keys(fields).some((k) => k.startsWith('spec')) ? <FormMessage tone="error">Fix the drill above before saving it.</FormMessage> : null}
+      {Object.keys(fields).some((k) => k.startsWith('spec')) ? (
+        <FormMessage tone="error">Fix the drill above before saving it.</FormMessage>
+      ) : null}
       {saved ? <FormMessage tone="success">{saved}</FormMessage> : null}
       {list.isError ? <p className="text-caption text-muted">Your saved drills could not be loaded.</p> : null}
       {mine.length ? (

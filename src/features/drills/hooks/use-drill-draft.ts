@@ -74,7 +74,12 @@ export function evaluateDraft(d: Draft): DraftResult {
   const first = generateChecked(parsed.data);
   if (!first.ok) return { spec: parsed.data, fields: first.fields, cycle: [], cycleError: null };
   try {
-    return { spec: parsed.data, fields: {}, cycle: inAllKeys(parsed.data as Parameters<typeof inAllKeys>[0], d.order), cycleError: null };
+    return {
+      spec: parsed.data,
+      fields: {},
+      cycle: inAllKeys(parsed.data as Parameters<typeof inAllKeys>[0], d.order),
+      cycleError: null,
+    };
   } catch (err) {
     if (!(err instanceof EngineError)) throw err;
     return { spec: parsed.data, fields: {}, cycle: [first.drill], cycleError: err.message };

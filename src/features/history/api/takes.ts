@@ -40,7 +40,11 @@ export function fetchTakes(params: TakeListParams): Promise<ListTakesResponse> {
 }
 
 export const takesQueryOptions = (params: TakeListParams) =>
-  queryOptions({ queryKey: [...takesKey, 'list', params], queryFn: () => fetchTakes(params), placeholderData: keepPreviousData });
+  queryOptions({
+    queryKey: [...takesKey, 'list', params],
+    queryFn: () => fetchTakes(params),
+    placeholderData: keepPreviousData,
+  });
 
 /** One page of the history, sorted and filtered on the server. */
 export function useTakes(params: TakeListParams) {
@@ -48,7 +52,10 @@ export function useTakes(params: TakeListParams) {
 }
 
 export const takeQueryOptions = (id: string) =>
-  queryOptions({ queryKey: [...takesKey, 'one', id], queryFn: () => api.get<{ take: TakeDetail }>(`/api/takes/${encodeURIComponent(id)}`) });
+  queryOptions({
+    queryKey: [...takesKey, 'one', id],
+    queryFn: () => api.get<{ take: TakeDetail }>(`/api/takes/${encodeURIComponent(id)}`),
+  });
 
 export function useTake(id: string) {
   return useQuery(takeQueryOptions(id));
@@ -59,7 +66,11 @@ export function useDeleteTake() {
   return useMutation({
     mutationFn: (id: string) => api.delete<void>(`/api/takes/${encodeURIComponent(id)}`),
     // The maps count every take, so they go stale with it.
-    onSuccess: () => Promise.all([queryClient.invalidateQueries({ queryKey: takesKey }), queryClient.invalidateQueries({ queryKey: ['maps'] })]),
+    onSuccess: () =>
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: takesKey }),
+        queryClient.invalidateQueries({ queryKey: ['maps'] }),
+      ]),
   });
 }
 
@@ -91,16 +102,26 @@ export async function importTake({ file, spec, offsetMs, onProgress }: ImportInp
     xhr.upload.onprogress = (e) => {
       if (e.lengthComputable) onProgress?.(e.loaded / e.total);
     };
-    xhr.onerror = () => reject(new ApiError(0, 'offline', 'The server could not be reached; check the connection and try again'));
+    xhr.onerror = () =>
+      reject(new ApiError(0, 'offline', 'The server could not be reached; check the connection and try again'));
     xhr.onload = () => {
-      let body: { take?: TakeDetail; error?: { code?: string; message?: string; fields?: Record<string, string[]> } } = {};
+      let body: { take?: TakeDetail; error?: { code?: string; message?: string; fields?: Record<string, string[]> } } =
+        {};
       try {
         body = JSON.parse(xhr.responseText);
       } catch {
         body = {};
       }
       if (xhr.status === 201 && body.take) resolve({ take: body.take });
-      else reject(new ApiError(xhr.status, body.error?.code ?? 'error', body.error?.message ?? 'The file was not imported', body.error?.fields));
+      else
+        reject(
+          new ApiError(
+            xhr.status,
+            body.error?.code ?? 'error',
+            body.error?.message ?? 'The file was not imported',
+            body.error?.fields,
+          ),
+        );
     };
     xhr.send(form);
   });
@@ -110,6 +131,10 @@ export function useImportTake() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: importTake,
-    onSuccess: () => Promise.all([queryClient.invalidateQueries({ queryKey: takesKey }), queryClient.invalidateQueries({ queryKey: ['maps'] })]),
+    onSuccess: () =>
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: takesKey }),
+        queryClient.invalidateQueries({ queryKey: ['maps'] }),
+      ]),
   });
 }

@@ -7,14 +7,27 @@ import { type TakeListParams, useTakes } from '../api/takes';
 const when = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 
 const columns: ColumnDef<TakeSummary>[] = [
-  { id: 'startedAt', header: 'Date', cell: ({ row }) => <Link to={`/history/${row.original.id}`} className="font-semibold underline-offset-2 hover:underline">{when.format(new Date(row.original.startedAt))}</Link> },
+  {
+    id: 'startedAt',
+    header: 'Date',
+    cell: ({ row }) => (
+      <Link to={`/history/${row.original.id}`} className="font-semibold underline-offset-2 hover:underline">
+        {when.format(new Date(row.original.startedAt))}
+      </Link>
+    ),
+  },
   { id: 'pair', header: 'Pair', accessorKey: 'pair', enableSorting: false },
   { id: 'pattern', header: 'Pattern', accessorKey: 'pattern', enableSorting: false },
   { id: 'key', header: 'Key', accessorKey: 'key' },
   { id: 'instrument', header: 'Instrument', accessorKey: 'instrument', enableSorting: false },
   { id: 'tempo', header: 'Tempo', accessorKey: 'tempo' },
   { id: 'accuracy', header: 'Accuracy', cell: ({ row }) => `${Math.round(row.original.accuracy * 100)}%` },
-  { id: 'meanOffsetMs', header: 'Mean offset', enableSorting: false, cell: ({ row }) => (row.original.meanOffsetMs === null ? '—' : `${Math.round(row.original.meanOffsetMs)} ms`) },
+  {
+    id: 'meanOffsetMs',
+    header: 'Mean offset',
+    enableSorting: false,
+    cell: ({ row }) => (row.original.meanOffsetMs === null ? '—' : `${Math.round(row.original.meanOffsetMs)} ms`),
+  },
 ];
 
 const FILTERS = ['key', 'pattern', 'pair', 'instrument', 'from', 'to'] as const;
@@ -26,7 +39,9 @@ export function HistoryTable() {
   const [params, setParams] = useSearchParams();
   const read = (k: string) => params.get(k) ?? undefined;
   const query: TakeListParams = {
-    sort: (TAKE_SORTS as readonly string[]).includes(read('sort') ?? '') ? (read('sort') as TakeListParams['sort']) : 'startedAt',
+    sort: (TAKE_SORTS as readonly string[]).includes(read('sort') ?? '')
+      ? (read('sort') as TakeListParams['sort'])
+      : 'startedAt',
     dir: read('dir') === 'asc' ? 'asc' : 'desc',
     page: Number(read('page') ?? 1) || 1,
     pageSize: 20,
@@ -36,7 +51,7 @@ export function HistoryTable() {
   const { data, isPending, error, isFetching } = useTakes(query);
   const set = (next: Record<string, string | undefined>) => {
     const p = new URLSearchParams(params);
-    for (const [k, v] of Object.entries(next)) (v ? p.set(k, v) : p.delete(k));
+    for (const [k, v] of Object.entries(next)) v ? p.set(k, v) : p.delete(k);
     setParams(p, { replace: true });
   };
   const sorting: SortingState = [{ id: query.sort ?? 'startedAt', desc: query.dir === 'desc' }];
@@ -60,7 +75,11 @@ export function HistoryTable() {
       <form className="flex flex-wrap items-end gap-3" aria-label="Filter takes" onSubmit={(e) => e.preventDefault()}>
         <label className="grid gap-1 text-caption font-semibold">
           Key
-          <select value={read('key') ?? ''} onChange={(e) => set({ key: e.target.value, page: undefined })} className="rounded-lg border border-line bg-raised px-2 py-1">
+          <select
+            value={read('key') ?? ''}
+            onChange={(e) => set({ key: e.target.value, page: undefined })}
+            className="rounded-lg border border-line bg-raised px-2 py-1"
+          >
             <option value="">any</option>
             {KEYS.map((k) => (
               <option key={k}>{k}</option>
@@ -74,13 +93,19 @@ export function HistoryTable() {
               defaultValue={read(f) ?? ''}
               placeholder={FILTER_EXAMPLES[f]}
               onBlur={(e) => set({ [f]: e.target.value.trim(), page: undefined })}
-              className="w-32 rounded-lg border border-line bg-raised px-2 py-1" />
+              className="w-32 rounded-lg border border-line bg-raised px-2 py-1"
+            />
           </label>
         ))}
         {(['from', 'to'] as const).map((f) => (
           <label key={f} className="grid gap-1 text-caption font-semibold capitalize">
             {f}
-            <input type="date" value={read(f) ?? ''} onChange={(e) => set({ [f]: e.target.value, page: undefined })} className="rounded-lg border border-line bg-raised px-2 py-1" />
+            <input
+              type="date"
+              value={read(f) ?? ''}
+              onChange={(e) => set({ [f]: e.target.value, page: undefined })}
+              className="rounded-lg border border-line bg-raised px-2 py-1"
+            />
           </label>
         ))}
       </form>
@@ -94,10 +119,20 @@ export function HistoryTable() {
                 {hg.headers.map((h) => {
                   const sorted = h.column.getIsSorted();
                   return (
-                    <th key={h.id} scope="col" className="whitespace-nowrap px-3 py-2" aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}>
+                    <th
+                      key={h.id}
+                      scope="col"
+                      className="whitespace-nowrap px-3 py-2"
+                      aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}
+                    >
                       {h.column.getCanSort() ? (
-                        <button type="button" onClick={h.column.getToggleSortingHandler()} className="uppercase tracking-wider hover:text-text">
-                          {flexRender(h.column.columnDef.header, h.getContext())} {sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : ''}
+                        <button
+                          type="button"
+                          onClick={h.column.getToggleSortingHandler()}
+                          className="uppercase tracking-wider hover:text-text"
+                        >
+                          {flexRender(h.column.columnDef.header, h.getContext())}{' '}
+                          {sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : ''}
                         </button>
                       ) : (
                         flexRender(h.column.columnDef.header, h.getContext())
@@ -124,13 +159,23 @@ export function HistoryTable() {
         {data && data.total === 0 ? <p className="p-4 text-muted">No takes match.</p> : null}
       </div>
       <nav className="flex items-center gap-3" aria-label="Pages">
-        <button type="button" disabled={(query.page ?? 1) <= 1} onClick={() => set({ page: String((query.page ?? 1) - 1) })} className="rounded-lg border border-line px-3 py-1 disabled:opacity-50">
+        <button
+          type="button"
+          disabled={(query.page ?? 1) <= 1}
+          onClick={() => set({ page: String((query.page ?? 1) - 1) })}
+          className="rounded-lg border border-line px-3 py-1 disabled:opacity-50"
+        >
           Previous
         </button>
         <span>
           Page {query.page} of {pages} {data ? `(${data.total} takes)` : ''}
         </span>
-        <button type="button" disabled={(query.page ?? 1) >= pages} onClick={() => set({ page: String((query.page ?? 1) + 1) })} className="rounded-lg border border-line px-3 py-1 disabled:opacity-50">
+        <button
+          type="button"
+          disabled={(query.page ?? 1) >= pages}
+          onClick={() => set({ page: String((query.page ?? 1) + 1) })}
+          className="rounded-lg border border-line px-3 py-1 disabled:opacity-50"
+        >
           Next
         </button>
       </nav>

@@ -23,7 +23,12 @@ export function ImportForm() {
         importTake.mutate(
           {
             file,
-            spec: { pair: [String(f.get('a')), String(f.get('b'))], pattern: String(f.get('pattern')) as (typeof PRESET_IDS)[number], direction: 'up', tempo: Number(f.get('tempo')) },
+            spec: {
+              pair: [String(f.get('a')), String(f.get('b'))],
+              pattern: String(f.get('pattern')) as (typeof PRESET_IDS)[number],
+              direction: 'up',
+              tempo: Number(f.get('tempo')),
+            },
             offsetMs: offset === '' ? undefined : Number(offset),
             onProgress: setProgress,
           },
@@ -53,7 +58,14 @@ export function ImportForm() {
       </label>
       <label className="grid gap-1 font-semibold">
         Tempo
-        <input name="tempo" type="number" min={20} max={400} defaultValue={100} className="rounded-lg border border-line bg-raised px-2 py-1" />
+        <input
+          name="tempo"
+          type="number"
+          min={20}
+          max={400}
+          defaultValue={100}
+          className="rounded-lg border border-line bg-raised px-2 py-1"
+        />
       </label>
       <label className="grid gap-1 font-semibold md:col-span-2">
         First downbeat at (ms into the file; empty: on the first note)

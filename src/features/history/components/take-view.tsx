@@ -29,7 +29,11 @@ export function TakeView({ id }: { id: string }) {
   const replay = async () => {
     playback.current?.stop();
     const { playDrill } = await import('@/lib/audio/player');
-    playback.current = await playDrill(drill, { countInMeasures: 0, onNote: setCurrent, onEnd: () => setCurrent(null) });
+    playback.current = await playDrill(drill, {
+      countInMeasures: 0,
+      onNote: setCurrent,
+      onEnd: () => setCurrent(null),
+    });
   };
   return (
     <div className="grid gap-4">
@@ -52,7 +56,12 @@ export function TakeView({ id }: { id: string }) {
         {(['hit', 'early', 'late', 'wrong', 'missed'] as const).map((v) => `${counts[v] ?? 0} ${v}`).join(' · ')}
         {take.stoppedAtMs !== null ? ' · stopped early: later notes not scored' : ''}
       </p>
-      <DrillStaff drill={drill} marks={marks} current={current} label={`The take's drill, ${counts.missed ?? 0} missed and ${counts.wrong ?? 0} wrong notes marked`} />
+      <DrillStaff
+        drill={drill}
+        marks={marks}
+        current={current}
+        label={`The take's drill, ${counts.missed ?? 0} missed and ${counts.wrong ?? 0} wrong notes marked`}
+      />
       <div className="flex flex-wrap gap-2">
         <Button onClick={() => void replay()}>Replay the drill</Button>
         {current !== null ? (
@@ -60,7 +69,11 @@ export function TakeView({ id }: { id: string }) {
             Stop
           </Button>
         ) : null}
-        <a href={takeMidiUrl(take.id)} download className="inline-flex items-center rounded-lg border border-line px-4 py-2 font-semibold hover:border-ink-300">
+        <a
+          href={takeMidiUrl(take.id)}
+          download
+          className="inline-flex items-center rounded-lg border border-line px-4 py-2 font-semibold hover:border-ink-300"
+        >
           Download MIDI
         </a>
         {user?.id === take.playerId ? (
@@ -68,7 +81,8 @@ export function TakeView({ id }: { id: string }) {
             variant="danger"
             disabled={remove.isPending}
             onClick={() => {
-              if (window.confirm('Delete this take? Its notes leave the maps too.')) remove.mutate(take.id, { onSuccess: () => navigate('/history') });
+              if (window.confirm('Delete this take? Its notes leave the maps too.'))
+                remove.mutate(take.id, { onSuccess: () => navigate('/history') });
             }}
           >
             Delete take

@@ -1,6 +1,13 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { MapQuery } from '@shared/schemas/maps';
-import type { BeatMapResponse, CalendarResponse, KeyMapResponse, NextResponse, RangeMapResponse, TimelineResponse } from '@shared/schemas/maps';
+import type {
+  BeatMapResponse,
+  CalendarResponse,
+  KeyMapResponse,
+  NextResponse,
+  RangeMapResponse,
+  TimelineResponse,
+} from '@shared/schemas/maps';
 import { api } from '@/lib/api-client';
 
 export const mapsKey = ['maps'] as const;
@@ -17,12 +24,17 @@ const search = (params: Record<string, string | undefined>) => {
 /** The browser's own time zone: charts count days the way the player lives them. */
 export const localTimeZone = () => Intl.DateTimeFormat().resolvedOptions().timeZone || 'UTC';
 
-const mapQuery = <T,>(name: string, filters: MapFilters) =>
-  queryOptions({ queryKey: [...mapsKey, name, filters], queryFn: () => api.get<T>(`/api/maps/${name}${search(filters)}`) });
+const mapQuery = <T>(name: string, filters: MapFilters) =>
+  queryOptions({
+    queryKey: [...mapsKey, name, filters],
+    queryFn: () => api.get<T>(`/api/maps/${name}${search(filters)}`),
+  });
 
 export const useKeyMap = (f: MapFilters) => useQuery(mapQuery<KeyMapResponse>('keys', f));
 export const useRangeMap = (f: MapFilters) => useQuery(mapQuery<RangeMapResponse>('range', f));
 export const useBeatMap = (f: MapFilters) => useQuery(mapQuery<BeatMapResponse>('beats', f));
-export const useTimeline = (f: MapFilters) => useQuery(mapQuery<TimelineResponse>('timeline', { ...f, tz: localTimeZone() } as MapFilters));
-export const useCalendar = (f: MapFilters) => useQuery(mapQuery<CalendarResponse>('calendar', { ...f, tz: localTimeZone() } as MapFilters));
+export const useTimeline = (f: MapFilters) =>
+  useQuery(mapQuery<TimelineResponse>('timeline', { ...f, tz: localTimeZone() } as MapFilters));
+export const useCalendar = (f: MapFilters) =>
+  useQuery(mapQuery<CalendarResponse>('calendar', { ...f, tz: localTimeZone() } as MapFilters));
 export const useWhatNext = () => useQuery(mapQuery<NextResponse>('next', {}));

@@ -22,7 +22,11 @@ export function BeatMap({ filters }: { filters: MapFilters }) {
       {error ? <p role="alert">{error.message}</p> : null}
       {data && cells.length === 0 ? <p className="text-muted">No notes match these filters yet.</p> : null}
       {cells.length > 0 && tableView ? (
-        <MapTable caption="Beat map: error rate by position in the bar" head={['Meter', 'Position', 'Notes', 'Not hit', 'Rate']} rows={cells.map((c) => [c.meter, positionName(c.position), c.notes, c.errors, pct(c.rate)])} />
+        <MapTable
+          caption="Beat map: error rate by position in the bar"
+          head={['Meter', 'Position', 'Notes', 'Not hit', 'Rate']}
+          rows={cells.map((c) => [c.meter, positionName(c.position), c.notes, c.errors, pct(c.rate)])}
+        />
       ) : null}
       {cells.length > 0 && !tableView
         ? meters.map((m) => (
@@ -35,7 +39,13 @@ export function BeatMap({ filters }: { filters: MapFilters }) {
                     const words = cellWords(`${m}, ${positionName(c.position)}`, c);
                     return (
                       <li key={c.position}>
-                        <button type="button" title={words} aria-label={words} className="flex h-14 w-12 flex-col items-center justify-center rounded text-caption tabular-nums focus:outline-2" style={heatColour(c.rate)}>
+                        <button
+                          type="button"
+                          title={words}
+                          aria-label={words}
+                          className="flex h-14 w-12 flex-col items-center justify-center rounded text-caption tabular-nums focus:outline-2"
+                          style={heatColour(c.rate)}
+                        >
                           <span className="font-bold">{positionName(c.position)}</span>
                           <span>{pct(c.rate)}</span>
                         </button>

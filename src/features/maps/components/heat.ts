@@ -13,10 +13,14 @@ export function heatColour(rate: number): { background: string; color: string } 
   return { background: interpolateCividis(1 - t), color: t > 0.45 ? '#ffffff' : '#111111' };
 }
 
-export const heatStep = (rate: number) => Math.min(HEAT_STEPS - 1, Math.floor((Math.min(1, rate / RATE_CEILING) * HEAT_STEPS)));
+export const heatStep = (rate: number) =>
+  Math.min(HEAT_STEPS - 1, Math.floor(Math.min(1, rate / RATE_CEILING) * HEAT_STEPS));
 
 /** Classes sf-heat-0..7 for SVG fills (the range diagram takes classes, not colours). */
-export const HEAT_CSS = Array.from({ length: HEAT_STEPS }, (_, i) => `.sf-heat-${i}{fill:${interpolateCividis(1 - (i + 0.5) / HEAT_STEPS)}}`).join('\n');
+export const HEAT_CSS = Array.from(
+  { length: HEAT_STEPS },
+  (_, i) => `.sf-heat-${i}{fill:${interpolateCividis(1 - (i + 0.5) / HEAT_STEPS)}}`,
+).join('\n');
 
 export const pct = (rate: number) => `${Math.round(rate * 100)}%`;
 export const cellWords = (what: string, c: { notes: number; errors: number; rate: number }) =>

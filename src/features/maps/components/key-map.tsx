@@ -12,14 +12,19 @@ export function KeyMap({ filters, historyBase = '/history' }: { filters: MapFilt
   const cells = data?.cells ?? [];
   const patterns = [...new Set(cells.map((c) => c.pattern))].sort();
   const at = new Map(cells.map((c) => [`${c.key}|${c.pattern}`, c]));
-  const link = (key: string, pattern: string) => `${historyBase}?${new URLSearchParams({ key, pattern, ...(filters.player ? { player: filters.player } : {}) })}`;
+  const link = (key: string, pattern: string) =>
+    `${historyBase}?${new URLSearchParams({ key, pattern, ...(filters.player ? { player: filters.player } : {}) })}`;
   return (
     <MapFrame title="Key map" tableView={tableView} onToggle={() => setTableView((v) => !v)}>
       {isPending ? <p className="text-muted">Counting…</p> : null}
       {error ? <p role="alert">{error.message}</p> : null}
       {data && cells.length === 0 ? <p className="text-muted">No takes match these filters yet.</p> : null}
       {cells.length > 0 && tableView ? (
-        <MapTable caption="Key map: error rate per key and pattern" head={['Key', 'Pattern', 'Notes', 'Not hit', 'Rate']} rows={cells.map((c) => [c.key, c.pattern, c.notes, c.errors, pct(c.rate)])} />
+        <MapTable
+          caption="Key map: error rate per key and pattern"
+          head={['Key', 'Pattern', 'Notes', 'Not hit', 'Rate']}
+          rows={cells.map((c) => [c.key, c.pattern, c.notes, c.errors, pct(c.rate)])}
+        />
       ) : null}
       {cells.length > 0 && !tableView ? (
         <div className="overflow-x-auto">
@@ -45,11 +50,24 @@ export function KeyMap({ filters, historyBase = '/history' }: { filters: MapFilt
                   </th>
                   {KEYS.map((k) => {
                     const c = at.get(`${k}|${p}`);
-                    if (!c) return <td key={k} className="h-10 w-12 rounded border border-dashed border-line" title={`${k}, ${p}: not played`} />;
+                    if (!c)
+                      return (
+                        <td
+                          key={k}
+                          className="h-10 w-12 rounded border border-dashed border-line"
+                          title={`${k}, ${p}: not played`}
+                        />
+                      );
                     const words = cellWords(`${k}, ${p}`, c);
                     return (
                       <td key={k} className="h-10 w-12 p-0">
-                        <Link to={link(k, p)} title={words} aria-label={`${words}. Open these takes`} className="flex h-10 w-12 items-center justify-center rounded font-semibold tabular-nums focus:outline-2 focus:outline-offset-2" style={heatColour(c.rate)}>
+                        <Link
+                          to={link(k, p)}
+                          title={words}
+                          aria-label={`${words}. Open these takes`}
+                          className="flex h-10 w-12 items-center justify-center rounded font-semibold tabular-nums focus:outline-2 focus:outline-offset-2"
+                          style={heatColour(c.rate)}
+                        >
                           {pct(c.rate)}
                         </Link>
                       </td>

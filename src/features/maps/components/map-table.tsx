@@ -32,12 +32,27 @@ export function MapTable({ caption, head, rows }: { caption: string; head: strin
 }
 
 /** A map with a "table view" switch; the switch is remembered only while the page is open. */
-export function MapFrame({ title, tableView, onToggle, children }: { title: string; tableView: boolean; onToggle: () => void; children: ReactNode }) {
+export function MapFrame({
+  title,
+  tableView,
+  onToggle,
+  children,
+}: {
+  title: string;
+  tableView: boolean;
+  onToggle: () => void;
+  children: ReactNode;
+}) {
   return (
     <section className="grid gap-3" aria-label={title}>
       <div className="flex flex-wrap items-center justify-between gap-2">
         <h2 className="text-lead font-bold">{title}</h2>
-        <button type="button" aria-pressed={tableView} onClick={onToggle} className="rounded-lg border border-line px-3 py-1 text-caption font-semibold hover:border-ink-300">
+        <button
+          type="button"
+          aria-pressed={tableView}
+          onClick={onToggle}
+          className="rounded-lg border border-line px-3 py-1 text-caption font-semibold hover:border-ink-300"
+        >
           {tableView ? 'Show as map' : 'Show as table'}
         </button>
       </div>

@@ -15,13 +15,15 @@ export function PracticeCalendar({ filters }: { filters: MapFilters }) {
   const weekday = (new Date(today).getUTCDay() + 6) % 7; // Monday first
   const first = today - (WEEKS * 7 - 1 - (6 - weekday)) * dayMs;
   const most = Math.max(10, ...data.days.map((d) => d.minutes));
-  const columns = Array.from({ length: WEEKS }, (_, w) => Array.from({ length: 7 }, (_, d) => first + (w * 7 + d) * dayMs));
+  const columns = Array.from({ length: WEEKS }, (_, w) =>
+    Array.from({ length: 7 }, (_, d) => first + (w * 7 + d) * dayMs),
+  );
   return (
     <section className="grid gap-3" aria-label="Practice calendar">
       <h2 className="text-lead font-bold">Practice minutes</h2>
       <p>
-        Streak: <strong data-testid="streak-current">{data.streak.current}</strong> {data.streak.current === 1 ? 'day' : 'days'} · longest{' '}
-        <strong>{data.streak.longest}</strong>
+        Streak: <strong data-testid="streak-current">{data.streak.current}</strong>{' '}
+        {data.streak.current === 1 ? 'day' : 'days'} · longest <strong>{data.streak.longest}</strong>
       </p>
       <figure className="m-0 flex gap-1" aria-label="Minutes per day, weeks as columns, Monday at the top">
         {columns.map((week) => (
@@ -39,7 +41,13 @@ export function PracticeCalendar({ filters }: { filters: MapFilters }) {
                   title={words}
                   aria-label={words}
                   className="block h-4 w-4 rounded-sm border border-line focus:outline-2"
-                  style={{ background: future ? 'transparent' : d ? interpolateCividis(Math.min(1, d.minutes / most)) : undefined }}
+                  style={{
+                    background: future
+                      ? 'transparent'
+                      : d
+                        ? interpolateCividis(Math.min(1, d.minutes / most))
+                        : undefined,
+                  }}
                 />
               );
             })}

@@ -11,12 +11,19 @@ export function ProgressCharts({ filters }: { filters: MapFilters }) {
   const keys = KEYS.filter((k) => points.some((p) => p.key === k));
   const [chosen, setChosen] = useState<string>('');
   const key: string = chosen && (keys as string[]).includes(chosen) ? chosen : (keys[0] ?? '');
-  const series = points.filter((p) => p.key === key).map((p) => ({ day: p.day, accuracy: Math.round(p.accuracy * 100), tempo: p.tempo }));
+  const series = points
+    .filter((p) => p.key === key)
+    .map((p) => ({ day: p.day, accuracy: Math.round(p.accuracy * 100), tempo: p.tempo }));
   return (
     <section className="grid gap-3" aria-label="Accuracy and tempo over time">
       <div className="flex flex-wrap items-center gap-3">
         <h2 className="text-lead font-bold">Accuracy and tempo, key of</h2>
-        <select aria-label="Key" value={key} onChange={(e) => setChosen(e.target.value)} className="rounded-lg border border-line bg-raised px-2 py-1">
+        <select
+          aria-label="Key"
+          value={key}
+          onChange={(e) => setChosen(e.target.value)}
+          className="rounded-lg border border-line bg-raised px-2 py-1"
+        >
           {keys.map((k) => (
             <option key={k}>{k}</option>
           ))}
@@ -33,16 +40,43 @@ export function ProgressCharts({ filters }: { filters: MapFilters }) {
                 <XAxis dataKey="day" tick={{ fontSize: 11, fill: 'currentColor' }} />
                 <YAxis yAxisId="acc" domain={[0, 100]} unit="%" tick={{ fontSize: 11, fill: 'currentColor' }} />
                 <YAxis yAxisId="tempo" orientation="right" tick={{ fontSize: 11, fill: 'currentColor' }} />
-                <Tooltip contentStyle={{ background: 'rgb(var(--sf-raised))', borderColor: 'rgb(var(--sf-line))', color: 'rgb(var(--sf-text))' }} />
+                <Tooltip
+                  contentStyle={{
+                    background: 'rgb(var(--sf-raised))',
+                    borderColor: 'rgb(var(--sf-line))',
+                    color: 'rgb(var(--sf-text))',
+                  }}
+                />
                 <Legend />
-                <Line yAxisId="acc" type="monotone" dataKey="accuracy" name="accuracy (%)" stroke="currentColor" strokeWidth={2} dot={false} />
-                <Line yAxisId="tempo" type="monotone" dataKey="tempo" name="tempo (bpm)" stroke="#c9a227" strokeWidth={2} strokeDasharray="5 3" dot={false} />
+                <Line
+                  yAxisId="acc"
+                  type="monotone"
+                  dataKey="accuracy"
+                  name="accuracy (%)"
+                  stroke="currentColor"
+                  strokeWidth={2}
+                  dot={false}
+                />
+                <Line
+                  yAxisId="tempo"
+                  type="monotone"
+                  dataKey="tempo"
+                  name="tempo (bpm)"
+                  stroke="#c9a227"
+                  strokeWidth={2}
+                  strokeDasharray="5 3"
+                  dot={false}
+                />
               </LineChart>
             </ResponsiveContainer>
           </div>
           <details>
             <summary className="cursor-pointer text-caption text-muted">Figures as a table</summary>
-            <MapTable caption={`Accuracy and tempo per day, key of ${key}`} head={['Day', 'Accuracy', 'Tempo']} rows={series.map((s) => [s.day, `${s.accuracy}%`, s.tempo])} />
+            <MapTable
+              caption={`Accuracy and tempo per day, key of ${key}`}
+              head={['Day', 'Accuracy', 'Tempo']}
+              rows={series.map((s) => [s.day, `${s.accuracy}%`, s.tempo])}
+            />
           </details>
         </>
       ) : (

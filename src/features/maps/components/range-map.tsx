@@ -10,28 +10,47 @@ export function RangeMap({ filters }: { filters: MapFilters }) {
   const { data, error } = useRangeMap(filters);
   const [tableView, setTableView] = useState(false);
   const cells = data?.cells ?? [];
-  const inst = filters.instrument && filters.instrument in instruments ? instruments[filters.instrument as InstrumentId] : null;
+  const inst =
+    filters.instrument && filters.instrument in instruments ? instruments[filters.instrument as InstrumentId] : null;
   const played = cells.map((c) => c.midi);
   const low = Math.min(inst?.range.low ?? 127, ...played);
   const high = Math.max(inst?.range.high ?? 0, ...played);
-  const marks = new Map<number, KeyMark>(cells.map((c) => [c.midi, { className: `sf-heat-${heatStep(c.rate)}`, label: cellWords('', c).slice(2) }]));
+  const marks = new Map<number, KeyMark>(
+    cells.map((c) => [c.midi, { className: `sf-heat-${heatStep(c.rate)}`, label: cellWords('', c).slice(2) }]),
+  );
   return (
     <MapFrame title="Range map" tableView={tableView} onToggle={() => setTableView((v) => !v)}>
       <style>{HEAT_CSS}</style>
       {error ? <p role="alert">{error.message}</p> : null}
       {data && cells.length === 0 ? <p className="text-muted">No notes match these filters yet.</p> : null}
       {cells.length > 0 && tableView ? (
-        <MapTable caption="Range map: error rate per pitch" head={['Pitch', 'MIDI', 'Notes', 'Not hit', 'Rate']} rows={cells.map((c) => [keyLabel(c.midi), c.midi, c.notes, c.errors, pct(c.rate)])} />
+        <MapTable
+          caption="Range map: error rate per pitch"
+          head={['Pitch', 'MIDI', 'Notes', 'Not hit', 'Rate']}
+          rows={cells.map((c) => [keyLabel(c.midi), c.midi, c.notes, c.errors, pct(c.rate)])}
+        />
       ) : null}
       {cells.length > 0 && !tableView ? (
         <div className="grid gap-2" data-testid="range-map">
-          <KeyboardDiagram low={low - (low % 12)} high={high} marks={marks} reach={inst?.range} label={`Range map from ${keyLabel(low)} to ${keyLabel(high)}`} />
+          <KeyboardDiagram
+            low={low - (low % 12)}
+            high={high}
+            marks={marks}
+            reach={inst?.range}
+            label={`Range map from ${keyLabel(low)} to ${keyLabel(high)}`}
+          />
           <ul className="flex flex-wrap gap-1" aria-label="Pitches played">
             {cells.map((c) => {
               const words = cellWords(keyLabel(c.midi), c);
               return (
                 <li key={c.midi}>
-                  <button type="button" title={words} aria-label={words} className="inline-block min-w-10 rounded px-1 py-0.5 text-center text-caption tabular-nums focus:outline-2" style={heatColour(c.rate)}>
+                  <button
+                    type="button"
+                    title={words}
+                    aria-label={words}
+                    className="inline-block min-w-10 rounded px-1 py-0.5 text-center text-caption tabular-nums focus:outline-2"
+                    style={heatColour(c.rate)}
+                  >
                     {keyLabel(c.midi)}
                   </button>
                 </li>

@@ -7,11 +7,14 @@ export function WhatNext() {
   const { data, error } = useWhatNext();
   if (error) return <p role="alert">{error.message}</p>;
   if (!data) return null;
-  if (data.items.length === 0) return <p className="text-muted">Play a few takes; the keys that need work will show up here.</p>;
+  if (data.items.length === 0)
+    return <p className="text-muted">Play a few takes; the keys that need work will show up here.</p>;
   return (
     <ol className="grid gap-2 md:grid-cols-3" data-testid="what-next">
       {data.items.map((item) => {
-        const to = item.spec ? `/practice?${new URLSearchParams({ spec: JSON.stringify(item.spec), order: 'chromatic' })}` : '/practice';
+        const to = item.spec
+          ? `/practice?${new URLSearchParams({ spec: JSON.stringify(item.spec), order: 'chromatic' })}`
+          : '/practice';
         return (
           <li key={`${item.key}-${item.pattern}`}>
             <Link to={to} className="block rounded-card border border-line bg-raised p-4 hover:border-brass-500">

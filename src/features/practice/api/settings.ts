@@ -8,7 +8,11 @@ export function fetchSettings(): Promise<SettingsResponse> {
   return api.get<SettingsResponse>('/api/settings');
 }
 
-export const settingsQueryOptions = queryOptions({ queryKey: settingsKey, queryFn: fetchSettings, staleTime: 5 * 60_000 });
+export const settingsQueryOptions = queryOptions({
+  queryKey: settingsKey,
+  queryFn: fetchSettings,
+  staleTime: 5 * 60_000,
+});
 
 /** The player's practice settings (instrument, written-pitch input, range, tempo, latency). */
 export function useSettings() {

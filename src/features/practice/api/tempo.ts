@@ -3,7 +3,8 @@ import type { DrillSpec } from '@shared/engine';
 import type { SuggestTempoResponse } from '@shared/schemas/settings';
 import { api } from '@/lib/api-client';
 
-export const tempoKey = (spec: DrillSpec) => ['practice', 'tempo', JSON.stringify({ ...spec, tempo: undefined })] as const;
+export const tempoKey = (spec: DrillSpec) =>
+  ['practice', 'tempo', JSON.stringify({ ...spec, tempo: undefined })] as const;
 
 export function fetchSuggestedTempo(spec: DrillSpec): Promise<SuggestTempoResponse> {
   return api.get<SuggestTempoResponse>(`/api/practice/tempo?spec=${encodeURIComponent(JSON.stringify(spec))}`);

@@ -30,10 +30,15 @@ export function CautionBanner({ practisingSince }: { practisingSince: number }) 
           {long
             ? 'Stand up, shake out your hands and rest your ears for a few minutes before the next key.'
             : 'Warm up first, practise in short blocks with breaks, and keep headphones at a moderate volume: long sessions at high volume can harm hearing.'}{' '}
-          Stop if anything hurts — pain, numbness or tingling in hands, arms, jaw or lips is a reason to see a medical professional, not to push on.
+          Stop if anything hurts — pain, numbness or tingling in hands, arms, jaw or lips is a reason to see a medical
+          professional, not to push on.
         </p>
       </div>
-      <button type="button" onClick={() => setDismissed(true)} className="rounded-md border border-ink-900/20 px-3 py-1.5 text-caption font-semibold">
+      <button
+        type="button"
+        onClick={() => setDismissed(true)}
+        className="rounded-md border border-ink-900/20 px-3 py-1.5 text-caption font-semibold"
+      >
         Got it
       </button>
     </aside>

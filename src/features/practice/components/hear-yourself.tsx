@@ -33,7 +33,12 @@ export function HearYourself({ value, onChange }: { value: HearSettings; onChang
           />
         </label>
         <label className="flex items-center gap-2 text-body">
-          <input type="checkbox" checked={value.muted} onChange={(e) => onChange({ ...value, muted: e.target.checked })} className="h-4 w-4 accent-brass-600" />
+          <input
+            type="checkbox"
+            checked={value.muted}
+            onChange={(e) => onChange({ ...value, muted: e.target.checked })}
+            className="h-4 w-4 accent-brass-600"
+          />
           Mute
         </label>
         <label className="flex flex-col text-caption font-semibold">

@@ -9,7 +9,17 @@ const NOW: KeyMark = { className: 'fill-brass-300', label: 'play now' };
 const HELD: KeyMark = { className: 'fill-reed-500', label: 'held' };
 
 /** The instrument's range with the drill's notes, the note due now and the keys held down. */
-export function LiveKeyboard({ drill, live, range, label }: { drill: Drill; live: LiveMarks; range: { low: number; high: number }; label: string }) {
+export function LiveKeyboard({
+  drill,
+  live,
+  range,
+  label,
+}: {
+  drill: Drill;
+  live: LiveMarks;
+  range: { low: number; high: number };
+  label: string;
+}) {
   const { current } = useLiveMarks(live);
   const [held, setHeld] = useState<ReadonlySet<number>>(new Set());
   useEffect(

@@ -39,10 +39,26 @@ function Labelled({ label, children }: { label: string; children: ReactNode }) {
   );
 }
 
-function Check({ label, checked, onChange, disabled }: { label: string; checked: boolean; onChange: (v: boolean) => void; disabled?: boolean }) {
+function Check({
+  label,
+  checked,
+  onChange,
+  disabled,
+}: {
+  label: string;
+  checked: boolean;
+  onChange: (v: boolean) => void;
+  disabled?: boolean;
+}) {
   return (
     <label className="flex items-center gap-2 text-body">
-      <input type="checkbox" className="h-4 w-4 accent-brass-600" checked={checked} disabled={disabled} onChange={(e) => onChange(e.target.checked)} />
+      <input
+        type="checkbox"
+        className="h-4 w-4 accent-brass-600"
+        checked={checked}
+        disabled={disabled}
+        onChange={(e) => onChange(e.target.checked)}
+      />
       {label}
     </label>
   );
@@ -67,7 +83,11 @@ export function PracticeControls({
       <legend className="px-1 text-lead font-bold">Take settings</legend>
       <div className="flex flex-wrap gap-4">
         <Labelled label="Instrument">
-          <select className={field} value={value.instrument} onChange={(e) => set('instrument', e.target.value as InstrumentId)}>
+          <select
+            className={field}
+            value={value.instrument}
+            onChange={(e) => set('instrument', e.target.value as InstrumentId)}
+          >
             {Object.entries(instruments).map(([id, inst]) => (
               <option key={id} value={id}>
                 {inst.label}
@@ -86,7 +106,11 @@ export function PracticeControls({
           />
         </Labelled>
         <Labelled label="Meter">
-          <select className={field} value={value.meter.join('/')} onChange={(e) => set('meter', e.target.value.split('/').map(Number) as Meter)}>
+          <select
+            className={field}
+            value={value.meter.join('/')}
+            onChange={(e) => set('meter', e.target.value.split('/').map(Number) as Meter)}
+          >
             {METERS.map((m) => (
               <option key={m.join('/')} value={m.join('/')}>
                 {m.join('/')}
@@ -120,7 +144,11 @@ export function PracticeControls({
           />
         </Labelled>
         <Labelled label="Scoring">
-          <select className={field} value={value.mode} onChange={(e) => set('mode', e.target.value as 'timed' | 'free')}>
+          <select
+            className={field}
+            value={value.mode}
+            onChange={(e) => set('mode', e.target.value as 'timed' | 'free')}
+          >
             <option value="timed">Timed (against the click)</option>
             <option value="free">Free (notes in order, any time)</option>
           </select>
@@ -137,7 +165,11 @@ export function PracticeControls({
         <Check label="Chord pad" checked={value.pad} onChange={(v) => set('pad', v)} disabled={!hasChord} />
         <Check label="Any octave counts" checked={value.octaveTolerant} onChange={(v) => set('octaveTolerant', v)} />
         <Check
-          label={transposing ? 'My keyboard plays written pitch' : 'My keyboard plays written pitch (this instrument is in concert pitch)'}
+          label={
+            transposing
+              ? 'My keyboard plays written pitch'
+              : 'My keyboard plays written pitch (this instrument is in concert pitch)'
+          }
           checked={value.writtenPitchInput}
           onChange={(v) => set('writtenPitchInput', v)}
           disabled={!transposing}

@@ -47,7 +47,11 @@ export function PracticeDefaults({ settings }: { settings: PlayerSettings }) {
         <div className="flex flex-wrap gap-4">
           <label className="flex flex-col text-caption font-semibold">
             Instrument
-            <select className={field} value={draft.instrument} onChange={(e) => setDraft({ ...draft, instrument: e.target.value as InstrumentId, range: null })}>
+            <select
+              className={field}
+              value={draft.instrument}
+              onChange={(e) => setDraft({ ...draft, instrument: e.target.value as InstrumentId, range: null })}
+            >
               {Object.entries(instruments).map(([id, i]) => (
                 <option key={id} value={id}>
                   {i.label}
@@ -69,7 +73,11 @@ export function PracticeDefaults({ settings }: { settings: PlayerSettings }) {
           </label>
           <label className="flex flex-col text-caption font-semibold">
             Keyboard octave shift
-            <select className={field} value={draft.octaveShift} onChange={(e) => setDraft({ ...draft, octaveShift: Number(e.target.value) })}>
+            <select
+              className={field}
+              value={draft.octaveShift}
+              onChange={(e) => setDraft({ ...draft, octaveShift: Number(e.target.value) })}
+            >
               {[-2, -1, 0, 1, 2].map((o) => (
                 <option key={o} value={o}>
                   {o === 0 ? 'None' : `${o > 0 ? '+' : ''}${o} octave${Math.abs(o) > 1 ? 's' : ''}`}
@@ -90,7 +98,12 @@ export function PracticeDefaults({ settings }: { settings: PlayerSettings }) {
         <fieldset className="flex flex-wrap items-end gap-4">
           <legend className="text-caption font-semibold">My range (drills stay inside it)</legend>
           <label className="flex items-center gap-2 text-body">
-            <input type="checkbox" className="h-4 w-4 accent-brass-600" checked={useRange} onChange={(e) => setUseRange(e.target.checked)} />
+            <input
+              type="checkbox"
+              className="h-4 w-4 accent-brass-600"
+              checked={useRange}
+              onChange={(e) => setUseRange(e.target.checked)}
+            />
             Narrower than the instrument's {keyLabel(inst.range.low)}–{keyLabel(inst.range.high)}
           </label>
           {useRange ? (

@@ -42,7 +42,12 @@ export function TakeResults({
     .filter(({ r }) => r.verdict === 'missed' || r.verdict === 'wrong');
   const pct = Math.round(score.accuracy * 100);
   return (
-    <section aria-labelledby="results-heading" data-testid="take-results" data-accuracy={score.accuracy} className="rounded-card border border-line bg-raised p-5">
+    <section
+      aria-labelledby="results-heading"
+      data-testid="take-results"
+      data-accuracy={score.accuracy}
+      className="rounded-card border border-line bg-raised p-5"
+    >
       <h2 id="results-heading" className="text-lead font-bold">
         {take.stoppedAtMs !== null ? 'Take stopped — saved up to where you stopped' : 'Take done'}
       </h2>
@@ -64,7 +69,8 @@ export function TakeResults({
         <div>
           <dt className="text-caption text-muted">Notes</dt>
           <dd className="text-caption">
-            {counts.hit} hit · {counts.early} early · {counts.late} late · {counts.wrong} wrong · {counts.missed} missed · {score.extras.length} extra
+            {counts.hit} hit · {counts.early} early · {counts.late} late · {counts.wrong} wrong · {counts.missed} missed
+            · {score.extras.length} extra
           </dd>
         </div>
       </dl>
@@ -73,8 +79,16 @@ export function TakeResults({
           <h3 className="text-caption font-bold uppercase tracking-wide text-muted">What slipped</h3>
           <ul className="mt-1 flex flex-wrap gap-2" data-testid="slipped">
             {slipped.map(({ r, n, i }) => (
-              <li key={i} data-index={i} data-verdict={r.verdict} className="rounded-full border border-ember-500/50 px-2.5 py-0.5 text-caption">
-                m{n.measure} · {n.written} {r.verdict === 'missed' ? 'missed' : `wrong (played ${r.playedIndex !== null ? keyLabel(take.played[r.playedIndex].midi) : '?'})`}
+              <li
+                key={i}
+                data-index={i}
+                data-verdict={r.verdict}
+                className="rounded-full border border-ember-500/50 px-2.5 py-0.5 text-caption"
+              >
+                m{n.measure} · {n.written}{' '}
+                {r.verdict === 'missed'
+                  ? 'missed'
+                  : `wrong (played ${r.playedIndex !== null ? keyLabel(take.played[r.playedIndex].midi) : '?'})`}
               </li>
             ))}
           </ul>
@@ -82,9 +96,17 @@ export function TakeResults({
       ) : null}
       {climb ? (
         <p className="mt-4 rounded-lg bg-surface p-3" data-testid="tempo-climb" data-tempo={climb.tempo}>
-          {climb.verdict === 'up' ? 'Clean take: ' : climb.verdict === 'down' ? 'Take it down a notch: ' : 'Stay here until it is clean: '}
+          {climb.verdict === 'up'
+            ? 'Clean take: '
+            : climb.verdict === 'down'
+              ? 'Take it down a notch: '
+              : 'Stay here until it is clean: '}
           next tempo <strong>{climb.tempo} bpm</strong>.{' '}
-          <button type="button" onClick={climb.onUse} className="font-semibold text-brass-700 underline dark:text-brass-300">
+          <button
+            type="button"
+            onClick={climb.onUse}
+            className="font-semibold text-brass-700 underline dark:text-brass-300"
+          >
             Use {climb.tempo} bpm
           </button>
         </p>
@@ -101,7 +123,9 @@ export function TakeResults({
         </Button>
         <Button
           variant="quiet"
-          onClick={() => download(takeToMidi({ drill, played: take.played }), `sixfold-take-${drill.spec.pair.join('-')}.mid`)}
+          onClick={() =>
+            download(takeToMidi({ drill, played: take.played }), `sixfold-take-${drill.spec.pair.join('-')}.mid`)
+          }
         >
           Download MIDI
         </Button>

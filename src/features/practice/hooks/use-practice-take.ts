@@ -93,7 +93,13 @@ export function usePracticeTake(onFinished: (take: FinishedTake, session: TakeSe
       live.reset();
       setFinished(null);
       setPhase(setup.countInMeasures > 0 ? 'count-in' : 'playing');
-      startBacking(drill, { originPerf: s.origin, countInMeasures: setup.countInMeasures, click: setup.click, pad: setup.pad, volumeDb: setup.volumeDb })
+      startBacking(drill, {
+        originPerf: s.origin,
+        countInMeasures: setup.countInMeasures,
+        click: setup.click,
+        pad: setup.pad,
+        volumeDb: setup.volumeDb,
+      })
         .then((b) => {
           if (session.current === s) backing.current = b;
           else b.stop();

@@ -37,10 +37,20 @@ export async function startBacking(
 ): Promise<{ stop(): void }> {
   const Tone = await loadTone();
   await Tone.start();
-  const { events, downbeat } = scheduleDrill(drill, { click: opts.click !== 'off', pad: opts.pad, countInMeasures: opts.countInMeasures });
-  const clickSynth = new Tone.Synth({ oscillator: { type: 'square' }, envelope: { attack: 0.001, decay: 0.02, sustain: 0, release: 0.01 } }).toDestination();
+  const { events, downbeat } = scheduleDrill(drill, {
+    click: opts.click !== 'off',
+    pad: opts.pad,
+    countInMeasures: opts.countInMeasures,
+  });
+  const clickSynth = new Tone.Synth({
+    oscillator: { type: 'square' },
+    envelope: { attack: 0.001, decay: 0.02, sustain: 0, release: 0.01 },
+  }).toDestination();
   clickSynth.volume.value = opts.volumeDb - 12;
-  const pad = new Tone.PolySynth(Tone.Synth, { oscillator: { type: 'sine' }, envelope: { attack: 0.1, decay: 0.3, sustain: 0.6, release: 0.4 } }).toDestination();
+  const pad = new Tone.PolySynth(Tone.Synth, {
+    oscillator: { type: 'sine' },
+    envelope: { attack: 0.1, decay: 0.3, sustain: 0.6, release: 0.4 },
+  }).toDestination();
   pad.volume.value = opts.volumeDb - 20;
   const zero = audioTimeFor(Tone, opts.originPerf) - downbeat;
   const [beats] = drill.spec.meter;
@@ -76,7 +86,10 @@ export async function startBacking(
 export async function playClicks(perfTimes: number[], volumeDb: number): Promise<void> {
   const Tone = await loadTone();
   await Tone.start();
-  const synth = new Tone.Synth({ oscillator: { type: 'square' }, envelope: { attack: 0.001, decay: 0.03, sustain: 0, release: 0.01 } }).toDestination();
+  const synth = new Tone.Synth({
+    oscillator: { type: 'square' },
+    envelope: { attack: 0.001, decay: 0.03, sustain: 0, release: 0.01 },
+  }).toDestination();
   synth.volume.value = volumeDb - 10;
   for (const t of perfTimes) synth.triggerAttackRelease(1500, 0.03, audioTimeFor(Tone, t));
   setTimeout(() => synth.dispose(), Math.max(0, perfTimes.at(-1)! - performance.now()) + 1000);

@@ -1,7 +1,11 @@
 import type { Drill, PlayedNote } from '@shared/engine';
 
 /** Plays the take back: what was played (lead) over the drill as written (soft), from the downbeat. */
-export async function replayTake(drill: Drill, played: PlayedNote[], onTime?: (ms: number) => void): Promise<{ stop(): void }> {
+export async function replayTake(
+  drill: Drill,
+  played: PlayedNote[],
+  onTime?: (ms: number) => void,
+): Promise<{ stop(): void }> {
   const Tone = await import('tone');
   await Tone.start();
   const hz = (m: number) => 440 * 2 ** ((m - 69) / 12);

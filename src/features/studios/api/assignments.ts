@@ -8,13 +8,18 @@ export const myAssignmentsKey = ['assignments', 'mine'] as const;
 
 /** A player's assignments across their studios, with their own status. */
 export function useMyAssignments(enabled = true) {
-  return useQuery({ queryKey: myAssignmentsKey, queryFn: () => api.get<AssignmentsResponse>('/api/assignments'), enabled });
+  return useQuery({
+    queryKey: myAssignmentsKey,
+    queryFn: () => api.get<AssignmentsResponse>('/api/assignments'),
+    enabled,
+  });
 }
 
 export function useCreateAssignment(studioId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (input: CreateAssignmentInput) => api.post<AssignmentResponse>(`/api/studios/${encodeURIComponent(studioId)}/assignments`, input),
+    mutationFn: (input: CreateAssignmentInput) =>
+      api.post<AssignmentResponse>(`/api/studios/${encodeURIComponent(studioId)}/assignments`, input),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: [...studiosKey, studioId] }),
   });
 }
@@ -33,7 +38,10 @@ export function useTeacherDrills() {
 }
 
 /** The practice page, opened on the assignment's drill in one of its keys. */
-export function practiceLink(a: { id: string; savedDrillId: string | null; targetTempo: number }, key?: string): string | null {
+export function practiceLink(
+  a: { id: string; savedDrillId: string | null; targetTempo: number },
+  key?: string,
+): string | null {
   if (!a.savedDrillId) return null;
   const q = new URLSearchParams({ drill: a.savedDrillId, assignment: a.id, tempo: String(a.targetTempo) });
   if (key) q.set('key', key);

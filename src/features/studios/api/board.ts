@@ -4,7 +4,10 @@ import { api } from '@/lib/api-client';
 import { studiosKey } from './studios';
 
 export const boardQueryOptions = (studioId: string) =>
-  queryOptions({ queryKey: [...studiosKey, studioId, 'board'], queryFn: () => api.get<BoardResponse>(`/api/studios/${encodeURIComponent(studioId)}/board`) });
+  queryOptions({
+    queryKey: [...studiosKey, studioId, 'board'],
+    queryFn: () => api.get<BoardResponse>(`/api/studios/${encodeURIComponent(studioId)}/board`),
+  });
 
 /** The studio table: players x assignments (the teacher's). */
 export function useBoard(studioId: string) {
@@ -14,6 +17,9 @@ export function useBoard(studioId: string) {
 export function useStudioPlayer(studioId: string, playerId: string) {
   return useQuery({
     queryKey: [...studiosKey, studioId, 'players', playerId],
-    queryFn: () => api.get<StudioPlayerResponse>(`/api/studios/${encodeURIComponent(studioId)}/players/${encodeURIComponent(playerId)}`),
+    queryFn: () =>
+      api.get<StudioPlayerResponse>(
+        `/api/studios/${encodeURIComponent(studioId)}/players/${encodeURIComponent(playerId)}`,
+      ),
   });
 }

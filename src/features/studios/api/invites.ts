@@ -1,32 +1,49 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { UserResponse } from '@shared/schemas/auth';
-import type { CreateInviteInput, InvitePreviewResponse, InviteResponse, InvitesResponse, InviteSignUpInput } from '@shared/schemas/studios';
+import type {
+  CreateInviteInput,
+  InvitePreviewResponse,
+  InviteResponse,
+  InvitesResponse,
+  InviteSignUpInput,
+} from '@shared/schemas/studios';
 import { api, resetCsrfToken } from '@/lib/api-client';
 import { studiosKey } from './studios';
 
 const invitesKey = (studioId: string) => [...studiosKey, studioId, 'invites'] as const;
 
 export function useInvites(studioId: string) {
-  return useQuery({ queryKey: invitesKey(studioId), queryFn: () => api.get<InvitesResponse>(`/api/studios/${encodeURIComponent(studioId)}/invites`) });
+  return useQuery({
+    queryKey: invitesKey(studioId),
+    queryFn: () => api.get<InvitesResponse>(`/api/studios/${encodeURIComponent(studioId)}/invites`),
+  });
 }
 
 export function useCreateInvite(studioId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (input: CreateInviteInput) => api.post<InviteResponse>(`/api/studios/${encodeURIComponent(studioId)}/invites`, input),
+    mutationFn: (input: CreateInviteInput) =>
+      api.post<InviteResponse>(`/api/studios/${encodeURIComponent(studioId)}/invites`, input),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: invitesKey(studioId) }),
   });
 }
 
 /** What an invite link is for (no sign-in needed). */
 export function useInvitePreview(token: string) {
-  return useQuery({ queryKey: ['invite', token], queryFn: () => api.get<InvitePreviewResponse>(`/api/invites/${encodeURIComponent(token)}`), enabled: token.length > 0 });
+  return useQuery({
+    queryKey: ['invite', token],
+    queryFn: () => api.get<InvitePreviewResponse>(`/api/invites/${encodeURIComponent(token)}`),
+    enabled: token.length > 0,
+  });
 }
 
 export function useAcceptInvite(token: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: () => api.post<{ studio: { studioId: string; studioName: string } }>(`/api/invites/${encodeURIComponent(token)}/accept`),
+    mutationFn: () =>
+      api.post<{ studio: { studioId: string; studioName: string } }>(
+        `/api/invites/${encodeURIComponent(token)}/accept`,
+      ),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: studiosKey }),
   });
 }
@@ -37,7 +54,8 @@ export function useAcceptInvite(token: string) {
  */
 export function useInviteSignUp(token: string, studioId: string) {
   return useMutation({
-    mutationFn: (input: InviteSignUpInput) => api.post<UserResponse>(`/api/invites/${encodeURIComponent(token)}/sign-up`, input),
+    mutationFn: (input: InviteSignUpInput) =>
+      api.post<UserResponse>(`/api/invites/${encodeURIComponent(token)}/sign-up`, input),
     onSuccess: () => {
       resetCsrfToken();
       window.location.assign(`/studio/${encodeURIComponent(studioId)}`);

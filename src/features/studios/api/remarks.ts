@@ -1,17 +1,26 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { CreateRemarkInput, NotificationsResponse, RemarkResponse, RemarksResponse } from '@shared/schemas/remarks';
+import type {
+  CreateRemarkInput,
+  NotificationsResponse,
+  RemarkResponse,
+  RemarksResponse,
+} from '@shared/schemas/remarks';
 import { api } from '@/lib/api-client';
 
 const remarksKey = (takeId: string) => ['takes', takeId, 'remarks'] as const;
 
 export function useRemarks(takeId: string) {
-  return useQuery({ queryKey: remarksKey(takeId), queryFn: () => api.get<RemarksResponse>(`/api/takes/${encodeURIComponent(takeId)}/remarks`) });
+  return useQuery({
+    queryKey: remarksKey(takeId),
+    queryFn: () => api.get<RemarksResponse>(`/api/takes/${encodeURIComponent(takeId)}/remarks`),
+  });
 }
 
 export function useCreateRemark(takeId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (input: CreateRemarkInput) => api.post<RemarkResponse>(`/api/takes/${encodeURIComponent(takeId)}/remarks`, input),
+    mutationFn: (input: CreateRemarkInput) =>
+      api.post<RemarkResponse>(`/api/takes/${encodeURIComponent(takeId)}/remarks`, input),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: remarksKey(takeId) }),
   });
 }
@@ -19,7 +28,11 @@ export function useCreateRemark(takeId: string) {
 export const notificationsKey = ['notifications'] as const;
 
 export function useNotifications() {
-  return useQuery({ queryKey: notificationsKey, queryFn: () => api.get<NotificationsResponse>('/api/notifications'), refetchInterval: 60_000 });
+  return useQuery({
+    queryKey: notificationsKey,
+    queryFn: () => api.get<NotificationsResponse>('/api/notifications'),
+    refetchInterval: 60_000,
+  });
 }
 
 export function useMarkNotificationsRead() {

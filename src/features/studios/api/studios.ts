@@ -16,7 +16,10 @@ export function useStudios() {
 }
 
 export const studioQueryOptions = (id: string) =>
-  queryOptions({ queryKey: [...studiosKey, id], queryFn: () => api.get<StudioResponse>(`/api/studios/${encodeURIComponent(id)}`) });
+  queryOptions({
+    queryKey: [...studiosKey, id],
+    queryFn: () => api.get<StudioResponse>(`/api/studios/${encodeURIComponent(id)}`),
+  });
 
 export function useStudio(id: string) {
   return useQuery(studioQueryOptions(id));

@@ -21,5 +21,8 @@ export interface ReviewTake {
 }
 
 export function useTake(id: string) {
-  return useQuery({ queryKey: ['takes', id], queryFn: () => api.get<{ take: ReviewTake }>(`/api/takes/${encodeURIComponent(id)}`) });
+  return useQuery({
+    queryKey: ['takes', id],
+    queryFn: () => api.get<{ take: ReviewTake }>(`/api/takes/${encodeURIComponent(id)}`),
+  });
 }

@@ -53,20 +53,54 @@ export function AssignmentForm({ studioId }: { studioId: string }) {
   if (mine.length === 0) {
     return (
       <p className="text-muted">
-        Save a drill first on the <Link to="/drills" className="underline">drills page</Link>; then set it here.
+        Save a drill first on the{' '}
+        <Link to="/drills" className="underline">
+          drills page
+        </Link>
+        ; then set it here.
       </p>
     );
   }
   return (
     <form onSubmit={onSubmit} className="grid gap-3 md:grid-cols-3" noValidate aria-label="New assignment">
-      <SelectField label="Saved drill" value={chosen} onChange={(e) => setDrillId(e.target.value)} options={mine.map((d) => ({ value: d.id, label: d.name }))} errors={f.savedDrillId} />
-      <SelectField label="Keys" value={keys} onChange={(e) => setKeys(e.target.value)} options={KEYS} errors={f.keyOrder} />
+      <SelectField
+        label="Saved drill"
+        value={chosen}
+        onChange={(e) => setDrillId(e.target.value)}
+        options={mine.map((d) => ({ value: d.id, label: d.name }))}
+        errors={f.savedDrillId}
+      />
+      <SelectField
+        label="Keys"
+        value={keys}
+        onChange={(e) => setKeys(e.target.value)}
+        options={KEYS}
+        errors={f.keyOrder}
+      />
       <TextField label="Due" type="date" value={due} onChange={(e) => setDue(e.target.value)} errors={f.dueAt} />
-      <TextField label="Target tempo (bpm)" type="number" min={20} max={400} value={tempo} onChange={(e) => setTempo(e.target.value)} errors={f.targetTempo} />
-      <TextField label="Target accuracy (%)" type="number" min={5} max={100} value={accuracy} onChange={(e) => setAccuracy(e.target.value)} errors={f.targetAccuracy} />
+      <TextField
+        label="Target tempo (bpm)"
+        type="number"
+        min={20}
+        max={400}
+        value={tempo}
+        onChange={(e) => setTempo(e.target.value)}
+        errors={f.targetTempo}
+      />
+      <TextField
+        label="Target accuracy (%)"
+        type="number"
+        min={5}
+        max={100}
+        value={accuracy}
+        onChange={(e) => setAccuracy(e.target.value)}
+        errors={f.targetAccuracy}
+      />
       <TextField label="Note to the players" value={note} onChange={(e) => setNote(e.target.value)} errors={f.note} />
       <div className="md:col-span-3 flex items-center gap-3">
-        <Button type="submit" disabled={create.isPending}>Set the assignment</Button>
+        <Button type="submit" disabled={create.isPending}>
+          Set the assignment
+        </Button>
         {done ? <FormMessage tone="success">Set: {done}</FormMessage> : null}
         {err && !err.fields ? <FormMessage tone="error">{err.message}</FormMessage> : null}
       </div>

@@ -28,14 +28,25 @@ export function InviteForm({ studioId }: { studioId: string }) {
   return (
     <div className="grid gap-3">
       <form onSubmit={onSubmit} className="flex flex-wrap items-end gap-3" noValidate aria-label="Invite a player">
-        <TextField label="Player's e-mail" type="email" value={email} onChange={(e) => setEmail(e.target.value)} errors={err?.fields?.email} />
-        <Button type="submit" disabled={invite.isPending}>Send invite</Button>
+        <TextField
+          label="Player's e-mail"
+          type="email"
+          value={email}
+          onChange={(e) => setEmail(e.target.value)}
+          errors={err?.fields?.email}
+        />
+        <Button type="submit" disabled={invite.isPending}>
+          Send invite
+        </Button>
       </form>
-      {sentTo ? <FormMessage tone="success">Invite sent to {sentTo}. The link works once, for 7 days.</FormMessage> : null}
+      {sentTo ? (
+        <FormMessage tone="success">Invite sent to {sentTo}. The link works once, for 7 days.</FormMessage>
+      ) : null}
       {err && !err.fields ? <FormMessage tone="error">{err.message}</FormMessage> : null}
       {pending.data && pending.data.invites.length > 0 ? (
         <p className="text-caption text-muted">
-          Waiting: {pending.data.invites.map((i) => `${i.email} (until ${dueFormat.format(new Date(i.expiresAt))})`).join(', ')}
+          Waiting:{' '}
+          {pending.data.invites.map((i) => `${i.email} (until ${dueFormat.format(new Date(i.expiresAt))})`).join(', ')}
         </p>
       ) : null}
     </div>

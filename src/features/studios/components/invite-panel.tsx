@@ -11,14 +11,21 @@ import { useAcceptInvite, useInvitePreview, useInviteSignUp } from '../api/invit
  * The page an invite link opens: whose studio it is; a signed-in player joins with one button,
  * an address without an account signs up here (and joins).
  */
-export function InvitePanel({ token, signedInAs }: { token: string; signedInAs: { name: string; role: string } | null }) {
+export function InvitePanel({
+  token,
+  signedInAs,
+}: {
+  token: string;
+  signedInAs: { name: string; role: string } | null;
+}) {
   const preview = useInvitePreview(token);
   const accept = useAcceptInvite(token);
   const signUp = useInviteSignUp(token, preview.data?.invite.studio.id ?? '');
   const [name, setName] = useState('');
   const [password, setPassword] = useState('');
 
-  if (!token) return <FormMessage tone="error">This link is missing its token; open it from the e-mail again.</FormMessage>;
+  if (!token)
+    return <FormMessage tone="error">This link is missing its token; open it from the e-mail again.</FormMessage>;
   if (preview.isPending) return <p className="text-muted">Reading the invite…</p>;
   if (preview.error) return <FormMessage tone="error">{preview.error.message}</FormMessage>;
   const { invite } = preview.data;
@@ -33,29 +40,57 @@ export function InvitePanel({ token, signedInAs }: { token: string; signedInAs: 
     <Card className="grid max-w-xl gap-4">
       <h1 className="text-title">Join {invite.studio.name}</h1>
       <p className="text-muted">
-        {invite.teacher.name} invites {invite.email} to their studio on Sixfold: the drills they set show up on your home page, and they can leave remarks on your takes.
+        {invite.teacher.name} invites {invite.email} to their studio on Sixfold: the drills they set show up on your
+        home page, and they can leave remarks on your takes.
       </p>
       {joined ? (
         <FormMessage tone="success">
-          You're in. <Link to={`/studio/${joined}`} className="underline">Open the studio</Link>
+          You're in.{' '}
+          <Link to={`/studio/${joined}`} className="underline">
+            Open the studio
+          </Link>
         </FormMessage>
       ) : signedInAs ? (
         <div className="grid gap-2">
           <p>Signed in as {signedInAs.name}.</p>
-          <Button onClick={() => accept.mutate()} disabled={accept.isPending}>Join the studio</Button>
+          <Button onClick={() => accept.mutate()} disabled={accept.isPending}>
+            Join the studio
+          </Button>
           {accept.error ? <FormMessage tone="error">{accept.error.message}</FormMessage> : null}
         </div>
       ) : invite.accountExists ? (
         <p>
-          An account uses {invite.email}: <Link to={`/sign-in?next=${next}`} className="underline">sign in</Link> and come back to this link to join.
+          An account uses {invite.email}:{' '}
+          <Link to={`/sign-in?next=${next}`} className="underline">
+            sign in
+          </Link>{' '}
+          and come back to this link to join.
         </p>
       ) : (
         <form onSubmit={onSignUp} className="grid gap-3" noValidate aria-label="Sign up and join">
           <TextField label="E-mail" value={invite.email} readOnly />
-          <TextField label="Your name" value={name} onChange={(e) => setName(e.target.value)} errors={fields.name} autoComplete="name" />
-          <TextField label="Choose a password" type="password" value={password} onChange={(e) => setPassword(e.target.value)} errors={fields.password} autoComplete="new-password" hint="At least 8 characters" />
-          <Button type="submit" disabled={signUp.isPending}>Sign up and join</Button>
-          {signUp.error && !(signUp.error instanceof ApiError && signUp.error.fields) ? <FormMessage tone="error">{signUp.error.message}</FormMessage> : null}
+          <TextField
+            label="Your name"
+            value={name}
+            onChange={(e) => setName(e.target.value)}
+            errors={fields.name}
+            autoComplete="name"
+          />
+          <TextField
+            label="Choose a password"
+            type="password"
+            value={password}
+            onChange={(e) => setPassword(e.target.value)}
+            errors={fields.password}
+            autoComplete="new-password"
+            hint="At least 8 characters"
+          />
+          <Button type="submit" disabled={signUp.isPending}>
+            Sign up and join
+          </Button>
+          {signUp.error && !(signUp.error instanceof ApiError && signUp.error.fields) ? (
+            <FormMessage tone="error">{signUp.error.message}</FormMessage>
+          ) : null}
         </form>
       )}
     </Card>

@@ -6,7 +6,12 @@ import { dueFormat, pct, StatusBadge } from './status-badge';
 export function MyAssignments() {
   const { data, isPending, error } = useMyAssignments();
   if (isPending) return <p className="text-muted">Looking up your assignments…</p>;
-  if (error) return <p role="alert" className="text-ember-700">{error.message}</p>;
+  if (error)
+    return (
+      <p role="alert" className="text-ember-700">
+        {error.message}
+      </p>
+    );
   const order = { overdue: 0, open: 1, met: 2 } as const;
   const list = [...data.assignments].sort((a, b) => order[a.status ?? 'open'] - order[b.status ?? 'open']);
   if (list.length === 0) return <p className="text-muted">No assignments right now.</p>;
@@ -22,13 +27,16 @@ export function MyAssignments() {
                 {a.title} <StatusBadge status={a.status ?? 'open'} />
               </p>
               <p className="text-caption text-muted">
-                {a.studioName} · due {dueFormat.format(new Date(a.dueAt))} · {a.targetTempo} bpm at {pct(a.targetAccuracy)} ·{' '}
-                {a.keysMet.length}/{a.keys.length} {a.keys.length === 1 ? 'key' : 'keys'}
+                {a.studioName} · due {dueFormat.format(new Date(a.dueAt))} · {a.targetTempo} bpm at{' '}
+                {pct(a.targetAccuracy)} · {a.keysMet.length}/{a.keys.length} {a.keys.length === 1 ? 'key' : 'keys'}
               </p>
               {a.note ? <p className="mt-1 text-body">{a.note}</p> : null}
             </div>
             {href && a.status !== 'met' ? (
-              <Link to={href} className="rounded-lg bg-ink-800 px-4 py-2 font-semibold text-white hover:bg-ink-700 dark:bg-brass-300 dark:text-ink-950">
+              <Link
+                to={href}
+                className="rounded-lg bg-ink-800 px-4 py-2 font-semibold text-white hover:bg-ink-700 dark:bg-brass-300 dark:text-ink-950"
+              >
                 Start {next}
               </Link>
             ) : null}

@@ -13,7 +13,10 @@ export function NotificationList() {
     <section aria-labelledby="news-heading" className="grid gap-2" data-testid="notifications">
       <div className="flex items-center gap-3">
         <h2 id="news-heading" className="text-lead font-bold">
-          News {data.unread > 0 ? <span className="rounded-full bg-ember-700 px-2 text-caption text-white">{data.unread} new</span> : null}
+          News{' '}
+          {data.unread > 0 ? (
+            <span className="rounded-full bg-ember-700 px-2 text-caption text-white">{data.unread} new</span>
+          ) : null}
         </h2>
         {data.unread > 0 ? (
           <Button variant="quiet" onClick={() => markRead.mutate()} disabled={markRead.isPending}>

@@ -8,7 +8,12 @@ const when = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle
 export function PlayerReview({ studioId, playerId }: { studioId: string; playerId: string }) {
   const { data, isPending, error } = useStudioPlayer(studioId, playerId);
   if (isPending) return <p className="text-muted">Loading…</p>;
-  if (error) return <p role="alert" className="text-ember-700">{error.message}</p>;
+  if (error)
+    return (
+      <p role="alert" className="text-ember-700">
+        {error.message}
+      </p>
+    );
   const q = `player=${encodeURIComponent(playerId)}`;
   return (
     <div className="grid gap-6">
@@ -16,8 +21,12 @@ export function PlayerReview({ studioId, playerId }: { studioId: string; playerI
         <h1 className="text-title">{data.player.name}</h1>
         <p className="text-muted">{data.player.email}</p>
         <nav aria-label="Their views" className="mt-2 flex gap-4">
-          <Link className="underline" to={`/history?${q}`}>History</Link>
-          <Link className="underline" to={`/progress?${q}`}>Maps and charts</Link>
+          <Link className="underline" to={`/history?${q}`}>
+            History
+          </Link>
+          <Link className="underline" to={`/progress?${q}`}>
+            Maps and charts
+          </Link>
         </nav>
       </header>
       <section className="grid gap-2">
@@ -26,7 +35,8 @@ export function PlayerReview({ studioId, playerId }: { studioId: string; playerI
         <ul className="grid gap-1">
           {data.assignments.map((a) => (
             <li key={a.id}>
-              {a.status ? <StatusBadge status={a.status} /> : null} {a.title} · due {dueFormat.format(new Date(a.dueAt))} · {a.keysMet.length}/{a.keys.length} keys
+              {a.status ? <StatusBadge status={a.status} /> : null} {a.title} · due{' '}
+              {dueFormat.format(new Date(a.dueAt))} · {a.keysMet.length}/{a.keys.length} keys
             </li>
           ))}
         </ul>
@@ -48,9 +58,13 @@ export function PlayerReview({ studioId, playerId }: { studioId: string; playerI
             {data.takes.map((t) => (
               <tr key={t.id} className="border-t border-line">
                 <td className="py-1">
-                  <Link className="underline" to={`/takes/${t.id}`}>{when.format(new Date(t.startedAt))}</Link>
+                  <Link className="underline" to={`/takes/${t.id}`}>
+                    {when.format(new Date(t.startedAt))}
+                  </Link>
                 </td>
-                <td>{t.pair} · {t.pattern} · {t.key}</td>
+                <td>
+                  {t.pair} · {t.pattern} · {t.key}
+                </td>
                 <td>{t.tempo}</td>
                 <td>{pct(t.accuracy)}</td>
                 <td>{t.remarkCount || ''}</td>

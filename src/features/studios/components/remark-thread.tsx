@@ -23,25 +23,50 @@ function Reply({ takeId, parentId }: { takeId: string; parentId: string }) {
     <form onSubmit={onSubmit} className="mt-2 flex flex-wrap items-end gap-2" aria-label="Answer">
       <label className="grid flex-1 gap-1 text-caption font-semibold">
         Your answer
-        <textarea value={body} onChange={(e) => setBody(e.target.value)} rows={2} className="rounded-lg border border-line bg-raised px-3 py-2 text-body font-normal" />
+        <textarea
+          value={body}
+          onChange={(e) => setBody(e.target.value)}
+          rows={2}
+          className="rounded-lg border border-line bg-raised px-3 py-2 text-body font-normal"
+        />
       </label>
-      <Button type="submit" variant="quiet" disabled={create.isPending || !body.trim()}>Send answer</Button>
+      <Button type="submit" variant="quiet" disabled={create.isPending || !body.trim()}>
+        Send answer
+      </Button>
       {create.error ? <FormMessage tone="error">{create.error.message}</FormMessage> : null}
     </form>
   );
 }
 
 /** The remarks on a take, each with its answers; the player may answer. */
-export function RemarkThread({ takeId, remarks, notes, canAnswer }: { takeId: string; remarks: Remark[]; notes: DrillNote[]; canAnswer: boolean }) {
+export function RemarkThread({
+  takeId,
+  remarks,
+  notes,
+  canAnswer,
+}: {
+  takeId: string;
+  remarks: Remark[];
+  notes: DrillNote[];
+  canAnswer: boolean;
+}) {
   const top = remarks.filter((r) => !r.parentId);
   if (top.length === 0) return <p className="text-muted">No remarks on this take yet.</p>;
   return (
     <ol className="grid gap-3" data-testid="remarks">
       {top.map((r) => (
-        <li key={r.id} className="rounded-card border border-line bg-raised p-4" data-note-index={r.noteIndex ?? undefined}>
+        <li
+          key={r.id}
+          className="rounded-card border border-line bg-raised p-4"
+          data-note-index={r.noteIndex ?? undefined}
+        >
           <p className="text-caption text-muted">
             {r.author.name} · {when.format(new Date(r.createdAt))}
-            {r.noteIndex !== null ? <span className="ml-2 font-semibold text-dusk-700 dark:text-dusk-100">pinned to {noteLabel(notes, r.noteIndex)}</span> : null}
+            {r.noteIndex !== null ? (
+              <span className="ml-2 font-semibold text-dusk-700 dark:text-dusk-100">
+                pinned to {noteLabel(notes, r.noteIndex)}
+              </span>
+            ) : null}
           </p>
           <p className="mt-1 whitespace-pre-wrap">{r.body}</p>
           <ul className="mt-2 grid gap-2 border-l-2 border-line pl-3">
@@ -49,7 +74,9 @@ export function RemarkThread({ takeId, remarks, notes, canAnswer }: { takeId: st
               .filter((a) => a.parentId === r.id)
               .map((a) => (
                 <li key={a.id}>
-                  <p className="text-caption text-muted">{a.author.name} · {when.format(new Date(a.createdAt))}</p>
+                  <p className="text-caption text-muted">
+                    {a.author.name} · {when.format(new Date(a.createdAt))}
+                  </p>
                   <p className="whitespace-pre-wrap">{a.body}</p>
                 </li>
               ))}

@@ -9,7 +9,11 @@ const look: Record<AssignmentStatus, { text: string; cls: string }> = {
 /** An assignment's status in a word, told by text as well as colour. */
 export function StatusBadge({ status }: { status: AssignmentStatus }) {
   const { text, cls } = look[status];
-  return <span className={`inline-block rounded-full border px-2 py-0.5 text-caption font-bold ${cls}`} data-status={status}>{text}</span>;
+  return (
+    <span className={`inline-block rounded-full border px-2 py-0.5 text-caption font-bold ${cls}`} data-status={status}>
+      {text}
+    </span>
+  );
 }
 
 export const dueFormat = new Intl.DateTimeFormat(undefined, { weekday: 'short', day: 'numeric', month: 'short' });

@@ -19,15 +19,24 @@ export function StudioList({ canCreate }: { canCreate: boolean }) {
   return (
     <div className="grid gap-4">
       {isPending ? <p className="text-muted">Looking up your studios…</p> : null}
-      {error ? <p role="alert" className="text-ember-700">{error.message}</p> : null}
+      {error ? (
+        <p role="alert" className="text-ember-700">
+          {error.message}
+        </p>
+      ) : null}
       {data && data.studios.length === 0 ? <p className="text-muted">No studios yet.</p> : null}
       <ul className="grid gap-3 md:grid-cols-2">
         {data?.studios.map((s) => (
           <li key={s.id}>
-            <Link to={`/studio/${s.id}`} className="block rounded-card border border-line bg-raised p-4 hover:border-brass-500">
+            <Link
+              to={`/studio/${s.id}`}
+              className="block rounded-card border border-line bg-raised p-4 hover:border-brass-500"
+            >
               <span className="block text-lead font-bold">{s.name}</span>
               <span className="text-caption text-muted">
-                {s.role === 'player' ? `Teacher: ${s.teacher.name}` : `${s.playerCount} ${s.playerCount === 1 ? 'player' : 'players'}`}
+                {s.role === 'player'
+                  ? `Teacher: ${s.teacher.name}`
+                  : `${s.playerCount} ${s.playerCount === 1 ? 'player' : 'players'}`}
               </span>
             </Link>
           </li>
@@ -36,8 +45,16 @@ export function StudioList({ canCreate }: { canCreate: boolean }) {
       {canCreate ? (
         <Card className="p-4">
           <form onSubmit={onSubmit} className="flex flex-wrap items-end gap-3" noValidate>
-            <TextField label="New studio" value={name} onChange={(e) => setName(e.target.value)} errors={fieldErrors} placeholder="Tuesday combo" />
-            <Button type="submit" disabled={create.isPending}>Start the studio</Button>
+            <TextField
+              label="New studio"
+              value={name}
+              onChange={(e) => setName(e.target.value)}
+              errors={fieldErrors}
+              placeholder="Tuesday combo"
+            />
+            <Button type="submit" disabled={create.isPending}>
+              Start the studio
+            </Button>
           </form>
         </Card>
       ) : null}

@@ -5,7 +5,12 @@ import { useStudios } from '../api/studios';
 export function StudioSummary({ empty }: { empty: string }) {
   const { data, isPending, error } = useStudios();
   if (isPending) return <p className="text-muted">Looking up your studio…</p>;
-  if (error) return <p role="alert" className="text-ember-700">{error.message}</p>;
+  if (error)
+    return (
+      <p role="alert" className="text-ember-700">
+        {error.message}
+      </p>
+    );
   if (data.studios.length === 0) return <p className="text-muted">{empty}</p>;
   return (
     <div className="grid gap-3">
@@ -15,7 +20,9 @@ export function StudioSummary({ empty }: { empty: string }) {
           <p className="text-caption text-muted">
             Teacher: {s.teacher.name} · {s.playerCount} {s.playerCount === 1 ? 'player' : 'players'}
           </p>
-          {s.members && s.members.length > 0 ? <p className="mt-2 text-body">{s.members.map((m) => m.name).join(', ')}</p> : null}
+          {s.members && s.members.length > 0 ? (
+            <p className="mt-2 text-body">{s.members.map((m) => m.name).join(', ')}</p>
+          ) : null}
         </Card>
       ))}
     </div>

@@ -39,15 +39,30 @@ function RemarkForm({ take, drill }: { take: ReviewTake; drill: Drill }) {
   const fields = create.error instanceof ApiError ? (create.error.fields ?? {}) : {};
   return (
     <form onSubmit={onSubmit} className="grid gap-3" aria-label="Leave a remark">
-      <SelectField label="Pin to a note" value={pin} onChange={(e) => setPin(e.target.value)} options={options} errors={fields.noteIndex} />
+      <SelectField
+        label="Pin to a note"
+        value={pin}
+        onChange={(e) => setPin(e.target.value)}
+        options={options}
+        errors={fields.noteIndex}
+      />
       <label className="grid gap-1 font-semibold">
         Remark
-        <textarea value={body} onChange={(e) => setBody(e.target.value)} rows={3} className="rounded-lg border border-line bg-raised px-3 py-2 font-normal" />
+        <textarea
+          value={body}
+          onChange={(e) => setBody(e.target.value)}
+          rows={3}
+          className="rounded-lg border border-line bg-raised px-3 py-2 font-normal"
+        />
       </label>
       <div>
-        <Button type="submit" disabled={create.isPending || !body.trim()}>Leave the remark</Button>
+        <Button type="submit" disabled={create.isPending || !body.trim()}>
+          Leave the remark
+        </Button>
       </div>
-      {create.error && !(create.error instanceof ApiError && create.error.fields) ? <FormMessage tone="error">{create.error.message}</FormMessage> : null}
+      {create.error && !(create.error instanceof ApiError && create.error.fields) ? (
+        <FormMessage tone="error">{create.error.message}</FormMessage>
+      ) : null}
       {fields.body ? <FormMessage tone="error">{fields.body.join(' ')}</FormMessage> : null}
     </form>
   );
@@ -90,18 +105,34 @@ export function TakeReview({ takeId, viewerId }: { takeId: string; viewerId: str
             .join(', ')}
         </p>
       </header>
-      {drill ? <DrillStaff drill={drill} marks={marks} label={`The take's drill with each note's verdict; pinned notes are ringed`} /> : <FormMessage tone="error">This take's drill could not be rebuilt.</FormMessage>}
+      {drill ? (
+        <DrillStaff
+          drill={drill}
+          marks={marks}
+          label={`The take's drill with each note's verdict; pinned notes are ringed`}
+        />
+      ) : (
+        <FormMessage tone="error">This take's drill could not be rebuilt.</FormMessage>
+      )}
       <div className="flex flex-wrap gap-3">
         <Button variant="quiet" onClick={() => (replay.playing ? replay.stop() : void replay.play())} disabled={!drill}>
           {replay.playing ? 'Stop' : 'Replay over the drill'}
         </Button>
-        <a href={`/api/takes/${take.id}/midi`} download className="inline-flex items-center rounded-lg border border-line bg-raised px-4 py-2 font-semibold hover:border-ink-300">
+        <a
+          href={`/api/takes/${take.id}/midi`}
+          download
+          className="inline-flex items-center rounded-lg border border-line bg-raised px-4 py-2 font-semibold hover:border-ink-300"
+        >
           Download MIDI
         </a>
       </div>
       <section className="grid gap-3" aria-labelledby="remarks-heading">
-        <h2 id="remarks-heading" className="text-lead font-bold">Remarks</h2>
-        {remarks.data && drill ? <RemarkThread takeId={take.id} remarks={remarks.data.remarks} notes={drill.notes} canAnswer={mine} /> : null}
+        <h2 id="remarks-heading" className="text-lead font-bold">
+          Remarks
+        </h2>
+        {remarks.data && drill ? (
+          <RemarkThread takeId={take.id} remarks={remarks.data.remarks} notes={drill.notes} canAnswer={mine} />
+        ) : null}
         {!mine && drill ? <RemarkForm take={take} drill={drill} /> : null}
       </section>
     </div>

@@ -26,8 +26,15 @@ export function useTakeReplay(drill: Drill | null, played: PlayedNote[]) {
     take.volume.value = -8;
     const t0 = Tone.now() + 0.2;
     const spb = 60 / drill.spec.tempo;
-    for (const n of drill.notes) written.triggerAttackRelease(hz(n.midi), n.duration * spb * 0.8, t0 + n.beat * spb, 0.5);
-    for (const p of played) take.triggerAttackRelease(hz(p.midi), Math.max(0.08, (p.durationMs ?? 150) / 1000), t0 + Math.max(0, p.timeMs) / 1000, (p.velocity ?? 90) / 127);
+    for (const n of drill.notes)
+      written.triggerAttackRelease(hz(n.midi), n.duration * spb * 0.8, t0 + n.beat * spb, 0.5);
+    for (const p of played)
+      take.triggerAttackRelease(
+        hz(p.midi),
+        Math.max(0.08, (p.durationMs ?? 150) / 1000),
+        t0 + Math.max(0, p.timeMs) / 1000,
+        (p.velocity ?? 90) / 127,
+      );
     const endMs = ((drill.notes.at(-1)?.beat ?? 0) + 2) * spb * 1000;
     const timer = setTimeout(() => stop(), endMs);
     stopRef.current = () => {
