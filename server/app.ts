@@ -39,7 +39,8 @@ export interface AppDeps {
 
 export type AppContext = AppDeps & { mailer: Mailer };
 
-const clientDir = fileURLToPath(new URL('../dist/client', import.meta.url));
+// CLIENT_DIR lets a second work tree or test run serve a build of its own.
+const clientDir = process.env.CLIENT_DIR ?? fileURLToPath(new URL('../dist/client', import.meta.url));
 
 /** The Express app: API under /api, the built client for everything else. */
 export function createApp(deps: AppDeps) {
