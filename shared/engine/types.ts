@@ -191,3 +191,43 @@ export interface LiveScorer {
   tick(nowMs: number): ScoreUpdate[];
   finish(): TakeScore;
 }
+
+/** A clef a part is printed in; 'treble-8vb' reads an octave lower than written (guitar). */
+export type Clef = 'treble' | 'bass' | 'treble-8vb';
+
+/** One note or rest as printed: the one notation model the screen, print and MusicXML share. */
+export interface NotatedEvent {
+  kind: 'note' | 'rest';
+  /** index into Notation.staves */
+  staff: number;
+  /** quarter notes from the measure's start */
+  start: number;
+  /** quarter notes (a triplet eighth is 1/3) */
+  duration: number;
+  /** index into drill.notes, for notes */
+  noteIndex?: number;
+  /** the written name with octave as the note sounds for the reader, before any ottava: drill.notes[noteIndex].written */
+  written?: string;
+  /** the sign printed, null when none is printed */
+  accidental: '#' | 'b' | 'n' | null;
+  /** 8: under an 8va line (printed an octave lower than written); -8: under an 8vb line */
+  ottava: 0 | 8 | -8;
+  /** id of its beam group, unique in the measure */
+  beam?: number;
+  /** id of its tuplet (3 in the time of 2), unique in the measure */
+  tuplet?: number;
+}
+
+export interface NotatedMeasure {
+  /** 1-based, as drill.notes' measures */
+  number: number;
+  /** the chord symbol over the measure's start, when the drill has changes */
+  chord?: string;
+  events: NotatedEvent[];
+}
+
+export interface Notation {
+  /** one staff, or ['treble', 'bass'] for piano's grand staff */
+  staves: Clef[];
+  measures: NotatedMeasure[];
+}
