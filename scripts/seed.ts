@@ -1,4 +1,4 @@
-// `npm run db:seed`: the demo world (team brief SCENARIO.md) into DATABASE_URL or the project database.
+// `npm run db:seed`: the demo world (docs/demo-scenario.md) into DATABASE_URL or the project database.
 import { createDb } from '../server/db/client';
 import { runMigrations } from '../server/db/migrate';
 import { seedDemo } from '../server/db/seed';

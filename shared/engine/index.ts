@@ -1,5 +1,5 @@
 /**
- * Sixfold's drill engine: the public contract of the team brief's ENGINE.md.
+ * Sixfold's drill engine: its public contract is shared/engine/README.md.
  * Pure and browser-safe: no DOM, no node:* modules, no network.
  */
 export * from './types';

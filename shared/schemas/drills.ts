@@ -62,7 +62,7 @@ export const PatternId = z.enum(PRESET_IDS as [EnginePatternId, ...EnginePattern
 const INSTRUMENT_IDS = Object.keys(instruments) as [InstrumentId, ...InstrumentId[]];
 export const InstrumentIdSchema = z.enum(INSTRUMENT_IDS, { error: 'Sixfold has no such instrument' });
 
-/** The meters ENGINE.md allows. */
+/** The meters the engine writes drills in. */
 export const METERS = [
   [4, 4],
   [3, 4],

@@ -45,7 +45,7 @@ describe('tempo climb', () => {
   });
 
   it('uses the scorer default hit window', () => {
-    // ENGINE.md: hitWindowMs = min(90, max(35, beat ms / 8)); at 120 bpm a beat is 500 ms.
+    // The scorer's default: hitWindowMs = min(90, max(35, beat ms / 8)); at 120 bpm a beat is 500 ms.
     expect(defaultHitWindowMs(120)).toBe(62.5);
     expect(defaultHitWindowMs(40)).toBe(90);
     expect(defaultHitWindowMs(300)).toBe(35);

@@ -6,7 +6,7 @@ import { bookDrills, books, savedDrills, users } from '../schema';
 export const DEMO_BOOK_TITLE = 'Pairs for the Tuesday combo';
 
 /**
- * The drills of Mara's book (SCENARIO.md), in order: the free starter first. No instrument is
+ * The drills of Mara's book (docs/demo-scenario.md), in order: the free starter first. No instrument is
  * set, so each player practises and prints them for their own.
  */
 const DRILLS: {

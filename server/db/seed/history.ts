@@ -32,7 +32,7 @@ export function prngUuid(rand: () => number): string {
   return `${s.slice(0, 8)}-${s.slice(8, 12)}-${s.slice(12, 16)}-${s.slice(16, 20)}-${s.slice(20)}`;
 }
 
-/** How one demo player plays a drill note: the weaknesses of the team brief's SCENARIO.md. */
+/** How one demo player plays a drill note: the weaknesses of docs/demo-scenario.md. */
 interface Habits {
   instrument: InstrumentId;
   range: { low: number; high: number };

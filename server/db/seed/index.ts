@@ -10,7 +10,7 @@ import { seedDemoBooks } from './books';
 export const DEMO_PASSWORD = 'sixfold-demo';
 export const DEMO_STUDIO = 'Harbour Lane Music Collective';
 
-/** The demo accounts of the team brief's SCENARIO.md. */
+/** The demo accounts (docs/demo-scenario.md). */
 export const DEMO_ACCOUNTS = [
   { email: 'admin@sixfold.test', name: 'Desk', role: 'admin' },
   { email: 'teacher@sixfold.test', name: 'Mara Quill', role: 'teacher' },
@@ -32,7 +32,7 @@ async function ensureAccount(db: Db, account: (typeof DEMO_ACCOUNTS)[number]): P
 }
 
 /**
- * Seeds the invented demo world (team brief SCENARIO.md) into an empty database.
+ * Seeds the invented demo world (docs/demo-scenario.md) into an empty database.
  * Each part checks for itself, so a rerun adds nothing twice.
  */
 export async function seedDemo(db: Db): Promise<void> {

@@ -2,7 +2,7 @@ import type { Db } from '../client';
 import { playerSettings } from '../schema/player-settings';
 
 /**
- * The demo players' practice settings (SCENARIO.md): Theo on an 88-key piano, Ines reading alto
+ * The demo players' practice settings (docs/demo-scenario.md): Theo on an 88-key piano, Ines reading alto
  * parts on a keyboard in written pitch, Sam on a wind controller. Set once; a player's own later
  * changes are kept.
  */

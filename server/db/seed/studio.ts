@@ -5,7 +5,7 @@ import { assignmentKeys } from '../../services/assignments/keys';
 import type { Db } from '../client';
 import { assignments, notifications, remarks, savedDrills, studios, takes, users } from '../schema';
 
-/** The week's assignments of SCENARIO.md, on saved drills of the teacher's. */
+/** The week's assignments of the demo week (docs/demo-scenario.md), on saved drills of the teacher's. */
 const WEEK: {
   drill: string;
   spec: DrillSpec;
