@@ -1,5 +1,5 @@
 /**
- * Types of the engine's public contract (../shared/ENGINE.md in the team brief).
+ * Types of the engine's public contract (shared/engine/README.md).
  * Names and shapes here are a contract: outside checks call them exactly like this.
  */
 
