@@ -3,6 +3,7 @@ import type { ComponentType } from 'react';
 import { createBrowserRouter, RouterProvider, type RouteObject } from 'react-router-dom';
 import { RequireRole, VisitorsOnly } from './guards';
 import { RootLayout } from './root-layout';
+import { RouteError } from './route-error';
 import { ForgotPasswordRoute } from './routes/forgot-password';
 import { HomeRoute } from './routes/home';
 import { IndexRoute } from './routes/index';
@@ -42,59 +43,66 @@ function page<M extends Record<string, unknown>>(
 const router = createBrowserRouter([
   {
     element: <RootLayout />,
+    errorElement: <RouteError />,
+    // Pages' errors show inside the app shell, so the navigation stays.
     children: [
-      { path: '/', element: <IndexRoute /> },
       {
-        path: '/sign-in',
-        element: (
-          <VisitorsOnly>
-            <SignInRoute />
-          </VisitorsOnly>
-        ),
+        errorElement: <RouteError />,
+        children: [
+          { path: '/', element: <IndexRoute /> },
+          {
+            path: '/sign-in',
+            element: (
+              <VisitorsOnly>
+                <SignInRoute />
+              </VisitorsOnly>
+            ),
+          },
+          {
+            path: '/sign-up',
+            element: (
+              <VisitorsOnly>
+                <SignUpRoute />
+              </VisitorsOnly>
+            ),
+          },
+          { path: '/forgot-password', element: <ForgotPasswordRoute /> },
+          { path: '/reset-password', element: <ResetPasswordRoute /> },
+          {
+            path: '/home',
+            element: (
+              <RequireRole>
+                <HomeRoute />
+              </RequireRole>
+            ),
+          },
+          page('/input', () => import('./routes/input-check'), 'InputCheckRoute', 'public'),
+          page('/practice', () => import('./routes/practice'), 'PracticeRoute', ['player']),
+          page('/account', () => import('./routes/account'), 'AccountRoute', 'signed-in'),
+          page('/drills', () => import('./routes/drills'), 'DrillsRoute', 'signed-in'),
+          page('/drills/print', () => import('./routes/drills-print'), 'DrillsPrintRoute', 'signed-in'),
+          page('/admin/users', () => import('./routes/admin-users'), 'AdminUsersRoute', ['admin']),
+          page('/admin/audit', () => import('./routes/admin-audit'), 'AdminAuditRoute', ['admin']),
+          page('/admin/purchases', () => import('./routes/admin-purchases'), 'AdminPurchasesRoute', ['admin']),
+          page('/studio', () => import('./routes/studio-list'), 'StudioListRoute', 'signed-in'),
+          page('/studio/:id', () => import('./routes/studio-detail'), 'StudioDetailRoute', 'signed-in'),
+          page('/studio/:id/players/:playerId', () => import('./routes/studio-player'), 'StudioPlayerRoute', [
+            'teacher',
+            'admin',
+          ]),
+          page('/takes/:id', () => import('./routes/take'), 'TakeRoute', 'signed-in'),
+          page('/history', () => import('./routes/history'), 'HistoryRoute', ['player', 'teacher']),
+          page('/history/:id', () => import('./routes/history-take'), 'HistoryTakeRoute', ['player', 'teacher']),
+          page('/progress', () => import('./routes/progress'), 'ProgressRoute', ['player', 'teacher']),
+          page('/invite', () => import('./routes/invite'), 'InviteRoute', 'public'),
+          page('/books', () => import('./routes/books'), 'BooksRoute', 'public'),
+          page('/books/sales', () => import('./routes/book-sales'), 'BookSalesRoute', ['teacher']),
+          page('/books/:id', () => import('./routes/book'), 'BookRoute', 'public'),
+          page('/books/:id/edit', () => import('./routes/book-edit'), 'BookEditRoute', ['teacher']),
+          page('/books/:id/print', () => import('./routes/book-print'), 'BookPrintRoute', 'public'),
+          { path: '*', element: <NotFoundRoute /> },
+        ],
       },
-      {
-        path: '/sign-up',
-        element: (
-          <VisitorsOnly>
-            <SignUpRoute />
-          </VisitorsOnly>
-        ),
-      },
-      { path: '/forgot-password', element: <ForgotPasswordRoute /> },
-      { path: '/reset-password', element: <ResetPasswordRoute /> },
-      {
-        path: '/home',
-        element: (
-          <RequireRole>
-            <HomeRoute />
-          </RequireRole>
-        ),
-      },
-      page('/input', () => import('./routes/input-check'), 'InputCheckRoute', 'public'),
-      page('/practice', () => import('./routes/practice'), 'PracticeRoute', ['player']),
-      page('/account', () => import('./routes/account'), 'AccountRoute', 'signed-in'),
-      page('/drills', () => import('./routes/drills'), 'DrillsRoute', 'signed-in'),
-      page('/drills/print', () => import('./routes/drills-print'), 'DrillsPrintRoute', 'signed-in'),
-      page('/admin/users', () => import('./routes/admin-users'), 'AdminUsersRoute', ['admin']),
-      page('/admin/audit', () => import('./routes/admin-audit'), 'AdminAuditRoute', ['admin']),
-      page('/admin/purchases', () => import('./routes/admin-purchases'), 'AdminPurchasesRoute', ['admin']),
-      page('/studio', () => import('./routes/studio-list'), 'StudioListRoute', 'signed-in'),
-      page('/studio/:id', () => import('./routes/studio-detail'), 'StudioDetailRoute', 'signed-in'),
-      page('/studio/:id/players/:playerId', () => import('./routes/studio-player'), 'StudioPlayerRoute', [
-        'teacher',
-        'admin',
-      ]),
-      page('/takes/:id', () => import('./routes/take'), 'TakeRoute', 'signed-in'),
-      page('/history', () => import('./routes/history'), 'HistoryRoute', ['player', 'teacher']),
-      page('/history/:id', () => import('./routes/history-take'), 'HistoryTakeRoute', ['player', 'teacher']),
-      page('/progress', () => import('./routes/progress'), 'ProgressRoute', ['player', 'teacher']),
-      page('/invite', () => import('./routes/invite'), 'InviteRoute', 'public'),
-      page('/books', () => import('./routes/books'), 'BooksRoute', 'public'),
-      page('/books/sales', () => import('./routes/book-sales'), 'BookSalesRoute', ['teacher']),
-      page('/books/:id', () => import('./routes/book'), 'BookRoute', 'public'),
-      page('/books/:id/edit', () => import('./routes/book-edit'), 'BookEditRoute', ['teacher']),
-      page('/books/:id/print', () => import('./routes/book-print'), 'BookPrintRoute', 'public'),
-      { path: '*', element: <NotFoundRoute /> },
     ],
   },
 ]);
