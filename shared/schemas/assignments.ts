@@ -28,7 +28,7 @@ export type CreateAssignmentInput = z.input<typeof CreateAssignmentInput>;
 export const PlayerProgress = z.object({
   playerId: z.string(),
   status: AssignmentStatus,
-  /** keys with a take at the targets, made after the assignment was set */
+  /** keys with a whole take of the same drill at the targets (any button), made after the assignment was set */
   keysMet: z.array(z.string()),
 });
 export type PlayerProgress = z.infer<typeof PlayerProgress>;

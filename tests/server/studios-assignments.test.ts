@@ -1,8 +1,8 @@
 import { eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { assignments, takes } from '../../server/db/schema';
+import { assignments, studioMembers, takes } from '../../server/db/schema';
 import { type Client, createStudio, createUser, signedIn, type TestUser } from '../helpers/factories';
-import { createSavedDrill, cycleSpecs, inDays, postTake, STUDIO_SPEC } from '../helpers/studio-fixtures';
+import { createSavedDrill, cycleSpecs, inDays, postTake, STUDIO_SPEC, takeBody } from '../helpers/studio-fixtures';
 import { createTestApp } from '../helpers/test-server';
 
 const ctx = createTestApp();
@@ -36,6 +36,13 @@ async function assign(body: Record<string, unknown> = {}) {
   });
   if (res.status !== 201) throw new Error(`${res.status} ${JSON.stringify(res.body)}`);
   return res.body.assignment as { id: string; keys: string[]; spec: typeof STUDIO_SPEC };
+}
+
+/** A player who joins the studio now, with no takes yet. */
+async function newMember() {
+  const other = await createUser(ctx.db, { role: 'player' });
+  await ctx.db.insert(studioMembers).values({ studioId, playerId: other.id });
+  return signedIn(ctx.app, other);
 }
 
 async function statusOf(c: Client, id: string) {
@@ -99,7 +106,7 @@ describe('setting assignments', () => {
   });
 });
 
-describe('"met": every key has a take from the assignment at the targets, made after it was set', () => {
+describe('"met": every key has a take of the same drill at the targets, made after it was set', () => {
   it('one key: a slow or sloppy take does not meet it, a take at the targets does', async () => {
     const a = await assign();
     expect((await statusOf(p, a.id)).status).toBe('open');
@@ -107,9 +114,6 @@ describe('"met": every key has a take from the assignment at the targets, made a
     expect((await statusOf(p, a.id)).status).toBe('open');
     const sloppy = await postTake(p, STUDIO_SPEC, { assignmentId: a.id, miss: 6 });
     expect(sloppy.accuracy).toBeLessThan(0.9);
-    expect((await statusOf(p, a.id)).status).toBe('open');
-    // a clean take not made from the assignment does not count either
-    await postTake(p, STUDIO_SPEC);
     expect((await statusOf(p, a.id)).status).toBe('open');
     await postTake(p, { ...STUDIO_SPEC, tempo: 104 }, { assignmentId: a.id });
     expect((await statusOf(p, a.id)).status).toBe('met');
@@ -119,6 +123,37 @@ describe('"met": every key has a take from the assignment at the targets, made a
     expect(teacherView.players?.find((x) => x.playerId === player.id)?.status).toBe('met');
     expect(teacherView.players?.find((x) => x.playerId !== player.id)?.status).toBe('open');
     expect((await statusOf(p2, a.id)).status).toBe('open');
+  });
+
+  it('counts a take of the same drill whatever started it; another drill, a ladder step or a slower take does not', async () => {
+    const a = await assign();
+    const p2 = await newMember();
+    // another pattern on the same pair, in the same key, at the targets
+    await postTake(p2, { ...STUDIO_SPEC, pattern: 'weave' });
+    // another direction
+    await postTake(p2, { ...STUDIO_SPEC, direction: 'down' });
+    // another pair in the same key (a minor triad first)
+    await postTake(p2, { ...STUDIO_SPEC, pair: ['Dm', 'C'] });
+    // slower than the target, and a ladder step of the drill (its first measure only)
+    await postTake(p2, { ...STUDIO_SPEC, tempo: 96 });
+    const step = await p2.post('/api/takes', { ...takeBody(STUDIO_SPEC), measures: [1, 1] });
+    expect(step.status).toBe(201);
+    expect((await statusOf(p2, a.id)).status).toBe('open');
+    expect((await statusOf(p2, a.id)).keysMet).toEqual([]);
+    // the same drill from the drills page (no assignment), at the target tempo: it counts
+    await postTake(p2, STUDIO_SPEC);
+    expect((await statusOf(p2, a.id)).status).toBe('met');
+    expect((await statusOf(p2, a.id)).keysMet).toEqual(['D']);
+  });
+
+  it('a key cycle counts takes of the drill moved to each key, from any button, and faster ones', async () => {
+    const a = await assign({ keyOrder: 'chromatic' });
+    const specs = cycleSpecs(a.spec, 'chromatic');
+    const o = await newMember();
+    for (const [i, spec] of specs.entries())
+      await postTake(o, { ...spec, tempo: 100 + i }, i % 2 ? { assignmentId: a.id } : {});
+    expect((await statusOf(o, a.id)).keysMet).toHaveLength(12);
+    expect((await statusOf(o, a.id)).status).toBe('met');
   });
 
   it('a take made before the assignment was set does not count', async () => {

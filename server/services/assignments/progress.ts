@@ -1,12 +1,32 @@
 import { sql } from 'drizzle-orm';
+import { drillShape } from '../../../shared/practice/drill-identity';
+import type { DrillSpec } from '../../../shared/schemas/drills';
 import type { AssignmentStatus, PlayerProgress } from '../../../shared/schemas/assignments';
 import type { Db } from '../../db/client';
 
+/** The shape of a stored take's drill from its columns (pair "D/C", pattern name, direction, instrument). */
+function takeShape(t: { pair: string; pattern: string; direction: string; instrument: string }): string | null {
+  const [a, b] = t.pair.split('/');
+  if (!a || !b) return null;
+  try {
+    return drillShape({
+      pair: [a, b],
+      pattern: t.pattern as DrillSpec['pattern'],
+      direction: t.direction as DrillSpec['direction'],
+      instrument: t.instrument as DrillSpec['instrument'],
+    });
+  } catch {
+    return null;
+  }
+}
+
 /**
- * Each player's progress with each assignment, computed in SQL. An assignment is met when
- * every key it names has a take made from it (its assignmentId) at or above the target tempo
- * and accuracy, made after the assignment was set; past its due date and not met, it is
- * overdue; else open. Players are the studio's current members (or `playerId` alone).
+ * Each player's progress with each assignment. A key counts when the player has a take of the
+ * same drill (its pattern, direction, instrument and the shape of its pair, moved to that key)
+ * played whole, at the target tempo or faster and at the target accuracy or better, made after
+ * the assignment was set: whatever button started it. The assignment is met when every key it
+ * names counts; past its due date and not met, it is overdue; else open. Players are the
+ * studio's current members (or `playerId` alone).
  */
 export async function assignmentProgress(
   db: Db,
@@ -19,30 +39,56 @@ export async function assignmentProgress(
     assignmentIds.map((id) => sql`${id}::uuid`),
     sql`, `,
   );
+  // Candidates by key, targets and time in SQL; the same-drill test in TypeScript, where the
+  // pair's shape is known. DISTINCT keeps one row per kind of take, not one per take.
   const result = await db.execute<{
     assignment_id: string;
     player_id: string;
-    keys_met: string[];
-    met: boolean;
+    spec: DrillSpec;
+    keys: string[];
     past_due: boolean;
+    key: string | null;
+    pattern: string | null;
+    pair: string | null;
+    direction: string | null;
+    instrument: string | null;
   }>(sql`
-    SELECT a.id AS assignment_id, m.player_id,
-           coalesce(array_agg(DISTINCT t.key) FILTER (WHERE t.key IS NOT NULL), '{}'::text[]) AS keys_met,
-           a.keys <@ coalesce(array_agg(DISTINCT t.key) FILTER (WHERE t.key IS NOT NULL), '{}'::text[]) AS met,
-           a.due_at < now() AS past_due
+    SELECT DISTINCT a.id AS assignment_id, m.player_id, a.spec, a.keys, a.due_at < now() AS past_due,
+           t.key, t.pattern, t.pair, coalesce(t.spec->>'direction', 'up') AS direction, t.instrument
     FROM assignments a
     JOIN studio_members m ON m.studio_id = a.studio_id
-    LEFT JOIN takes t ON t.assignment_id = a.id
-                     AND t.player_id = m.player_id
+    LEFT JOIN takes t ON t.player_id = m.player_id
                      AND t.key = ANY (a.keys)
                      AND t.tempo >= a.target_tempo
                      AND t.accuracy >= a.target_accuracy
+                     AND t.measure_from IS NULL
                      AND t.created_at > a.created_at
-    WHERE a.id IN (${ids}) ${playerId ? sql`AND m.player_id = ${playerId}::uuid` : sql``}
-    GROUP BY a.id, m.player_id`);
+    WHERE a.id IN (${ids}) ${playerId ? sql`AND m.player_id = ${playerId}::uuid` : sql``}`);
+  const shapes = new Map<string, string>();
+  const rows = new Map<
+    string,
+    { assignmentId: string; playerId: string; keys: string[]; pastDue: boolean; met: Set<string> }
+  >();
   for (const r of result.rows) {
-    const status: AssignmentStatus = r.met ? 'met' : r.past_due ? 'overdue' : 'open';
-    byAssignment.get(r.assignment_id)?.push({ playerId: r.player_id, status, keysMet: [...r.keys_met].sort() });
+    const id = `${r.assignment_id}|${r.player_id}`;
+    let row = rows.get(id);
+    if (!row) {
+      row = { assignmentId: r.assignment_id, playerId: r.player_id, keys: r.keys, pastDue: r.past_due, met: new Set() };
+      rows.set(id, row);
+    }
+    if (!r.key || !r.pair || !r.pattern || !r.instrument || !r.direction) continue;
+    let want = shapes.get(r.assignment_id);
+    if (want === undefined) {
+      want = drillShape({ ...r.spec, pattern: r.spec.pattern as DrillSpec['pattern'] });
+      shapes.set(r.assignment_id, want);
+    }
+    const shape = takeShape({ pair: r.pair, pattern: r.pattern, direction: r.direction, instrument: r.instrument });
+    if (shape === want) row.met.add(r.key);
+  }
+  for (const row of rows.values()) {
+    const met = row.keys.every((k) => row.met.has(k));
+    const status: AssignmentStatus = met ? 'met' : row.pastDue ? 'overdue' : 'open';
+    byAssignment.get(row.assignmentId)?.push({ playerId: row.playerId, status, keysMet: [...row.met].sort() });
   }
   return byAssignment;
 }
