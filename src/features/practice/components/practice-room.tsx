@@ -1,0 +1,277 @@
+import { type DrillSpec, instruments, type ScoreOptions } from '@shared/engine';
+import type { PlayerSettings } from '@shared/schemas/settings';
+import { useEffect, useMemo, useRef, useState } from 'react';
+import { Link } from 'react-router-dom';
+import { InputPanel } from '@/components/midi/input-panel';
+import { Button } from '@/components/ui/button';
+import { useNoteInput } from '@/hooks/use-note-input';
+import { useSetLatency } from '../api/settings';
+import { useSuggestedTempo } from '../api/tempo';
+import { useDrillCycle } from '../hooks/use-drill-cycle';
+import { useLadder } from '../hooks/use-ladder';
+import { usePracticeTake } from '../hooks/use-practice-take';
+import { useSoundRouting } from '../hooks/use-sound-routing';
+import { useTakeQueue } from '../hooks/use-take-queue';
+import { replayTake } from '../lib/replay';
+import { CautionBanner } from './caution-banner';
+import { HearYourself } from './hear-yourself';
+import { KeyButtons } from './key-buttons';
+import { LatencyCalibration } from './latency-calibration';
+import { LiveKeyboard } from './live-keyboard';
+import { LiveStaff } from './live-staff';
+import { type PracticeOptions, PracticeControls } from './practice-controls';
+import { PracticeDefaults } from './practice-defaults';
+import { TakeResults } from './take-results';
+import '../practice.css';
+
+const sessionStart = Date.now();
+
+export interface PracticeRoomProps {
+  /** the drill as opened (its own tempo, meter and instrument when it has them) */
+  baseSpec: DrillSpec;
+  settings: PlayerSettings;
+  initialOptions: PracticeOptions;
+  assignmentId: string | null;
+  /** a key of the cycle to open on */
+  wantedKey: string | null;
+}
+
+/** The practice room: the drill in its keys, the take that is running, and what it heard. */
+export function PracticeRoom({ baseSpec, settings, initialOptions, assignmentId, wantedKey }: PracticeRoomProps) {
+  const [opts, setOpts] = useState<PracticeOptions>(initialOptions);
+  const { input, status } = useNoteInput();
+  const setLatency = useSetLatency();
+  const sound = useSoundRouting();
+  const { queue, save } = useTakeQueue();
+
+  const spec: DrillSpec = useMemo(
+    () => ({
+      ...baseSpec,
+      instrument: opts.instrument,
+      tempo: opts.tempo,
+      meter: opts.meter,
+      range: baseSpec.range ?? settings.range ?? undefined,
+    }),
+    [baseSpec, opts.instrument, opts.tempo, opts.meter, settings.range],
+  );
+  const { cycle, keyIndex, setKeyIndex, nextKey, fullDrill } = useDrillCycle(spec, opts.order, wantedKey);
+  const ladder = useLadder(fullDrill, opts.ladder);
+  const { drill, step } = ladder;
+
+  const deviceName =
+    status.state === 'ready' && status.selected
+      ? (status.devices.find((d) => d.id === status.selected)?.name ?? 'MIDI device')
+      : 'Computer keyboard';
+  const latencyMs = settings.latency[deviceName] ?? 0;
+
+  const options: ScoreOptions | null = useMemo(() => {
+    if (!drill) return null;
+    const octave = settings.octaveShift * 12;
+    const transposition = opts.writtenPitchInput ? instruments[opts.instrument].transposition : 0;
+    return {
+      tempo: drill.spec.tempo,
+      mode: opts.mode,
+      octaveTolerant: opts.octaveTolerant,
+      swing: opts.swing,
+      inputTransposition: transposition + octave,
+    };
+  }, [opts, drill, settings.octaveShift]);
+
+  const autoStart = useRef(false);
+  const take = usePracticeTake((finished, session) => {
+    if (!fullDrill || !options) return;
+    void save({
+      fullDrill,
+      take: finished,
+      options,
+      originPerf: session.origin,
+      measures: step ? [step[0], step[1]] : null,
+      assignmentId,
+    });
+    if (opts.ladder) ladder.afterTake(finished);
+    if (finished.stoppedAtMs === null && (opts.loop || opts.runOn)) {
+      autoStart.current = true;
+      if (!opts.loop && opts.runOn) setKeyIndex((i) => (i + 1) % 12);
+    }
+  });
+
+  const begin = () => {
+    if (!drill || !options) return;
+    void sound.synth.ensure();
+    take.start({
+      drill,
+      options,
+      countInMeasures: opts.countIn,
+      click: opts.click,
+      pad: opts.pad && !!drill.spec.chord,
+      latencyMs,
+      volumeDb: sound.hear.volumeDb,
+    });
+  };
+  const beginRef = useRef(begin);
+  beginRef.current = begin;
+  // Loop and run-on: the next take starts as soon as the next drill is in place.
+  // biome-ignore lint/correctness/useExhaustiveDependencies: runs when the drill or the take's phase changes
+  useEffect(() => {
+    if (autoStart.current && take.phase === 'done') {
+      autoStart.current = false;
+      const t = setTimeout(() => beginRef.current(), 400);
+      return () => clearTimeout(t);
+    }
+  }, [drill, take.phase]);
+
+  const climb = useSuggestedTempo(fullDrill?.spec ?? null);
+  const running = take.phase === 'count-in' || take.phase === 'playing';
+  const inst = instruments[opts.instrument];
+  const fade = opts.ladder ? ladder.ladder.fade : 0;
+
+  return (
+    <div className="grid gap-6" data-testid="practice" data-phase={take.phase} data-origin={take.origin ?? ''}>
+      <CautionBanner practisingSince={sessionStart} />
+      <header className="flex flex-wrap items-end justify-between gap-3">
+        <div>
+          <h1 className="text-title">Practice</h1>
+          <p className="text-muted">
+            {drill
+              ? `${drill.spec.pair.join(' / ')} · ${typeof drill.spec.pattern === 'string' ? drill.spec.pattern : drill.spec.pattern.name} · ${drill.spec.direction}`
+              : ''}
+            {drill?.spec.chord ? ` · over ${drill.spec.chord}` : ''} · {inst.label}
+          </p>
+        </div>
+        <Link
+          to={`/drills?spec=${encodeURIComponent(JSON.stringify(spec))}&order=${opts.order}`}
+          className="text-brass-700 underline dark:text-brass-300"
+        >
+          Change the drill
+        </Link>
+      </header>
+
+      {cycle.error ? (
+        <p role="alert" className="rounded-card border border-ember-500 p-4 text-ember-700 dark:text-ember-100">
+          {cycle.error}
+        </p>
+      ) : null}
+
+      <KeyButtons
+        drills={cycle.drills}
+        current={keyIndex}
+        disabled={running}
+        onPick={(i) => {
+          setKeyIndex(i);
+          ladder.restart();
+          take.reset();
+        }}
+      />
+
+      {opts.ladder && step ? (
+        <p
+          data-testid="ladder-step"
+          data-step={ladder.ladder.step}
+          data-from={step[0]}
+          data-to={step[1]}
+          data-fade={ladder.ladder.fade}
+          className="rounded-lg bg-raised p-3"
+        >
+          Ladder step {ladder.ladder.step + 1} of {ladder.steps.length}: measure
+          {step[0] === step[1] ? ` ${step[0]}` : `s ${step[0]}–${step[1]}`}. Two clean takes in a row (95% or better,
+          nothing missed) to move on. {ladder.ladder.streak === 1 ? 'One clean take so far.' : ''}
+        </p>
+      ) : null}
+
+      <div className={`rounded-card border border-line bg-raised p-4 sf-fade-${fade}`}>
+        {drill ? <LiveStaff drill={drill} live={take.live} /> : null}
+        {drill ? (
+          <div className="mt-3">
+            <LiveKeyboard
+              drill={drill}
+              live={take.live}
+              range={inst.range}
+              label={`${inst.label} range with the drill's notes`}
+            />
+          </div>
+        ) : null}
+      </div>
+
+      <div className="flex flex-wrap items-center gap-3">
+        {running ? (
+          <Button variant="danger" onClick={take.stop}>
+            Stop (keeps what you played)
+          </Button>
+        ) : (
+          <Button onClick={begin} disabled={!drill}>
+            {take.phase === 'done' ? 'Start another take' : 'Start the take'}
+          </Button>
+        )}
+        <span role="status" className="text-muted" data-testid="take-phase">
+          {take.phase === 'count-in'
+            ? 'Count-in…'
+            : take.phase === 'playing'
+              ? 'Playing — every note is being marked'
+              : ''}
+        </span>
+        {climb.data?.climb && !running ? (
+          <button
+            type="button"
+            className="text-brass-700 underline dark:text-brass-300"
+            onClick={() => setOpts({ ...opts, tempo: climb.data.climb!.tempo })}
+          >
+            Suggested tempo: {climb.data.climb.tempo} bpm
+          </button>
+        ) : null}
+        {queue.waiting > 0 ? (
+          <span
+            className="rounded-full bg-brass-100 px-3 py-1 text-caption font-semibold text-ink-900"
+            data-testid="queue-waiting"
+          >
+            {queue.waiting} take{queue.waiting === 1 ? '' : 's'} waiting to be saved — kept on this device, sent when
+            the server answers
+          </span>
+        ) : null}
+        {queue.refused.map((r) => (
+          <span key={r.id} role="alert" className="text-ember-700">
+            A take was refused by the server: {r.message}
+          </span>
+        ))}
+      </div>
+
+      {take.finished && drill ? (
+        <TakeResults
+          drill={drill}
+          take={take.finished}
+          onAgain={begin}
+          onNextKey={
+            opts.ladder
+              ? null
+              : () => {
+                  nextKey();
+                  take.reset();
+                }
+          }
+          onReplay={() => void replayTake(drill, take.finished!.played)}
+          climb={
+            climb.data?.climb && !step && take.finished.stoppedAtMs === null
+              ? {
+                  tempo: climb.data.climb.tempo,
+                  verdict: climb.data.climb.lastVerdict,
+                  onUse: () => setOpts({ ...opts, tempo: climb.data!.climb!.tempo }),
+                }
+              : null
+          }
+        />
+      ) : null}
+
+      <PracticeControls value={opts} onChange={setOpts} disabled={running} hasChord={!!spec.chord} />
+      <div className="grid gap-4 md:grid-cols-2">
+        <InputPanel input={input} status={status} />
+        <HearYourself value={sound.hear} onChange={sound.setHear} />
+      </div>
+      <PracticeDefaults settings={settings} />
+      <LatencyCalibration
+        device={deviceName}
+        current={settings.latency[deviceName]}
+        volumeDb={sound.hear.volumeDb}
+        onMeasured={(offsetMs) => setLatency.mutate({ device: deviceName, offsetMs })}
+      />
+    </div>
+  );
+}

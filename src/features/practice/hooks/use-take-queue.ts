@@ -1,0 +1,46 @@
+import type { Drill, ScoreOptions } from '@shared/engine';
+import { useQueryClient } from '@tanstack/react-query';
+import { useCallback, useEffect, useState } from 'react';
+import { onQueueChange, type QueueState, saveTake } from '@/lib/take-queue';
+import { tempoKey } from '../api/tempo';
+import type { FinishedTake } from '../lib/take-session';
+
+export interface TakeToSave {
+  /** the whole drill the take belongs to (a ladder step or a loop is a passage of it) */
+  fullDrill: Drill;
+  take: FinishedTake;
+  options: ScoreOptions;
+  /** the take session's performance.now() origin, turned into the take's wall-clock start */
+  originPerf: number;
+  measures: [number, number] | null;
+  assignmentId: string | null;
+}
+
+/**
+ * The takes waiting on this device to reach the server, and the one way the practice room
+ * saves a take: into the device's queue first, then the tempo climb is asked again.
+ */
+export function useTakeQueue() {
+  const queryClient = useQueryClient();
+  const [queue, setQueue] = useState<QueueState>({ waiting: 0, refused: [] });
+  useEffect(() => onQueueChange(setQueue), []);
+
+  const save = useCallback(
+    ({ fullDrill, take, options, originPerf, measures, assignmentId }: TakeToSave) => {
+      const startedAt = new Date(Date.now() - (performance.now() - originPerf)).toISOString();
+      return saveTake({
+        id: crypto.randomUUID(),
+        spec: fullDrill.spec,
+        played: take.played,
+        options,
+        startedAt,
+        measures,
+        stoppedAtMs: take.stoppedAtMs,
+        assignmentId,
+      }).then(() => queryClient.invalidateQueries({ queryKey: tempoKey(fullDrill.spec) }));
+    },
+    [queryClient],
+  );
+
+  return { queue, save };
+}
