@@ -2,10 +2,8 @@ import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import express from 'express';
-import type pg from 'pg';
-import type { Db } from './db/client';
-import type { Env } from './env';
-import { type Mailer, mailerFromEnv } from './mail/mailer';
+import type { AppContext, AppDeps } from './context';
+import { mailerFromEnv } from './mail/mailer';
 import { loadUser } from './middleware/auth';
 import { requireCsrf } from './middleware/csrf';
 import { errorHandler, notFoundApi } from './middleware/error-handler';
@@ -29,15 +27,7 @@ import { practiceRouter } from './routes/practice';
 import { settingsRouter } from './routes/settings';
 import { takesRouter } from './routes/takes';
 
-export interface AppDeps {
-  db: Db;
-  pool: pg.Pool;
-  env: Env;
-  /** defaults to SMTP as the environment says */
-  mailer?: Mailer;
-}
-
-export type AppContext = AppDeps & { mailer: Mailer };
+export type { AppContext, AppDeps } from './context';
 
 // CLIENT_DIR lets a second work tree or test run serve a build of its own.
 const clientDir = process.env.CLIENT_DIR ?? fileURLToPath(new URL('../dist/client', import.meta.url));

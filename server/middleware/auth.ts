@@ -1,4 +1,4 @@
-import type { RequestHandler } from 'express';
+import type { Request, RequestHandler } from 'express';
 import type { Role, User } from '../../shared/schemas/auth';
 import type { Db } from '../db/client';
 import { forbidden, unauthenticated } from '../errors';
@@ -30,9 +30,18 @@ export function loadUser(db: Db): RequestHandler {
 }
 
 /** Signed out -> 401. */
-export const requireUser: RequestHandler = (req, _res, next) => {
+export const signedIn: RequestHandler = (req, _res, next) => {
   next(req.user ? undefined : unauthenticated());
 };
+
+/**
+ * The signed-in user of a request behind `signedIn` or `requireRole`; a 401 if there is none
+ * (so a route mounted without its guard fails closed, never with a TypeError).
+ */
+export function requireUser(req: Request): User {
+  if (!req.user) throw unauthenticated();
+  return req.user;
+}
 
 /** Signed out -> 401; a role that may never use the route -> 403. */
 export function requireRole(...roles: Role[]): RequestHandler {

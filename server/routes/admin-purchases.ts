@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import { PurchaseParams } from '../../shared/schemas/books';
-import type { AppContext } from '../app';
-import { requireRole } from '../middleware/auth';
+import type { AppContext } from '../context';
+import { requireRole, requireUser } from '../middleware/auth';
 import { parseParams } from '../middleware/validate';
 import { listPurchases } from '../services/purchases/list';
 import { refundPurchase } from '../services/purchases/refund';
@@ -15,7 +15,7 @@ export function adminPurchasesRouter({ db, env }: AppContext) {
   });
   router.post('/:id/refund', async (req, res) => {
     const { id } = parseParams(PurchaseParams, req);
-    res.json({ purchase: await refundPurchase(db, env, req.user!, id) });
+    res.json({ purchase: await refundPurchase(db, env, requireUser(req), id) });
   });
   return router;
 }

@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import { AdminUserParams, UpdateAdminUserInput } from '../../shared/schemas/admin';
-import type { AppDeps } from '../app';
-import { requireRole } from '../middleware/auth';
+import type { AppDeps } from '../context';
+import { requireRole, requireUser } from '../middleware/auth';
 import { parseBody, parseParams } from '../middleware/validate';
 import { listUsers } from '../services/users/list';
 import { listAudit } from '../services/users/list-audit';
@@ -16,7 +16,7 @@ export function adminRouter({ db }: AppDeps) {
   router.patch('/users/:id', async (req, res) => {
     const { id } = parseParams(AdminUserParams, req);
     const input = parseBody(UpdateAdminUserInput, req);
-    res.json({ user: await updateUserByAdmin(db, req.user!, id, input) });
+    res.json({ user: await updateUserByAdmin(db, requireUser(req), id, input) });
   });
   router.get('/audit', async (_req, res) => {
     res.json({ entries: await listAudit(db) });

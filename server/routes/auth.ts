@@ -7,8 +7,8 @@ import {
   SignUpInput,
   UpdateAccountInput,
 } from '../../shared/schemas/auth';
-import type { AppContext } from '../app';
-import { requireUser } from '../middleware/auth';
+import type { AppContext } from '../context';
+import { requireUser, signedIn } from '../middleware/auth';
 import { csrfTokenFor } from '../middleware/csrf';
 import { destroySession, regenerateSession, SESSION_COOKIE, saveSession } from '../middleware/session';
 import { parseBody } from '../middleware/validate';
@@ -47,7 +47,7 @@ export function authRouter(deps: AppContext) {
     res.json({ user: req.user ?? null });
   });
 
-  router.get('/me', requireUser, (req, res) => {
+  router.get('/me', signedIn, (req, res) => {
     res.json({ user: req.user });
   });
 
@@ -65,20 +65,20 @@ export function authRouter(deps: AppContext) {
     res.json({ user });
   });
 
-  router.post('/sign-out', requireUser, async (req, res) => {
+  router.post('/sign-out', signedIn, async (req, res) => {
     await destroySession(req);
     res.clearCookie(SESSION_COOKIE, { path: '/', httpOnly: true, sameSite: 'lax' });
     res.json({ ok: true });
   });
 
-  router.patch('/me', requireUser, async (req, res) => {
+  router.patch('/me', signedIn, async (req, res) => {
     const input = parseBody(UpdateAccountInput, req);
-    res.json({ user: await updateAccount(db, req.user!.id, input) });
+    res.json({ user: await updateAccount(db, requireUser(req).id, input) });
   });
 
-  router.post('/password', requireUser, async (req, res) => {
+  router.post('/password', signedIn, async (req, res) => {
     const input = parseBody(ChangePasswordInput, req);
-    await changePassword(db, req.user!.id, input, req.sessionID);
+    await changePassword(db, requireUser(req).id, input, req.sessionID);
     res.json({ ok: true });
   });
 

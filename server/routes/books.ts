@@ -8,10 +8,10 @@ import {
   UpdateBookDrillInput,
   UpdateBookInput,
 } from '../../shared/schemas/books';
-import type { AppContext } from '../app';
+import type { AppContext } from '../context';
 import { AppError } from '../errors';
 import { linkOrigin } from '../mail/link-origin';
-import { requireRole, requireUser } from '../middleware/auth';
+import { requireRole, signedIn, requireUser } from '../middleware/auth';
 import { parseBody, parseParams } from '../middleware/validate';
 import { addBookDrill } from '../services/books/add-drill';
 import { createBook } from '../services/books/create';
@@ -40,13 +40,13 @@ export function booksRouter({ db, env }: AppContext) {
     res.json({ books: await listPublishedBooks(db, req.user) });
   });
   router.get('/mine', teacher, async (req, res) => {
-    res.json({ books: await listTeacherBooks(db, req.user!) });
+    res.json({ books: await listTeacherBooks(db, requireUser(req)) });
   });
   router.get('/sales', teacher, async (req, res) => {
-    res.json(await bookSales(db, req.user!));
+    res.json(await bookSales(db, requireUser(req)));
   });
   router.post('/', teacher, async (req, res) => {
-    res.status(201).json({ book: await createBook(db, req.user!, parseBody(CreateBookInput, req)) });
+    res.status(201).json({ book: await createBook(db, requireUser(req), parseBody(CreateBookInput, req)) });
   });
 
   router.get('/:id', async (req, res) => {
@@ -60,33 +60,33 @@ export function booksRouter({ db, env }: AppContext) {
     res.json({ drill: await getBookDrill(db, req.user, id, drillId) });
   });
 
-  router.post('/:id/checkout', requireUser, async (req, res) => {
+  router.post('/:id/checkout', signedIn, async (req, res) => {
     const { id } = parseParams(BookParams, req);
     const origin = linkOrigin(req, env);
     if (!origin) throw new AppError('unavailable', 'Checkout needs PUBLIC_URL set on the server');
-    res.json(await startCheckout(db, env, req.user!, id, origin));
+    res.json(await startCheckout(db, env, requireUser(req), id, origin));
   });
 
   // The teacher's own book: the ownership check comes first, so an outsider learns nothing from a 400.
   router.patch('/:id', teacher, async (req, res) => {
     const { id } = parseParams(BookParams, req);
-    res.json({ book: await updateBook(db, req.user!, id, parseBody(UpdateBookInput, req)) });
+    res.json({ book: await updateBook(db, requireUser(req), id, parseBody(UpdateBookInput, req)) });
   });
   router.post('/:id/drills', teacher, async (req, res) => {
     const { id } = parseParams(BookParams, req);
-    res.status(201).json({ book: await addBookDrill(db, req.user!, id, parseBody(AddBookDrillInput, req)) });
+    res.status(201).json({ book: await addBookDrill(db, requireUser(req), id, parseBody(AddBookDrillInput, req)) });
   });
   router.put('/:id/order', teacher, async (req, res) => {
     const { id } = parseParams(BookParams, req);
-    res.json({ book: await reorderBook(db, req.user!, id, parseBody(ReorderBookInput, req)) });
+    res.json({ book: await reorderBook(db, requireUser(req), id, parseBody(ReorderBookInput, req)) });
   });
   router.patch('/:id/drills/:drillId', teacher, async (req, res) => {
     const { id, drillId } = parseParams(BookDrillParams, req);
-    res.json({ book: await updateBookDrill(db, req.user!, id, drillId, parseBody(UpdateBookDrillInput, req)) });
+    res.json({ book: await updateBookDrill(db, requireUser(req), id, drillId, parseBody(UpdateBookDrillInput, req)) });
   });
   router.delete('/:id/drills/:drillId', teacher, async (req, res) => {
     const { id, drillId } = parseParams(BookDrillParams, req);
-    res.json({ book: await removeBookDrill(db, req.user!, id, drillId) });
+    res.json({ book: await removeBookDrill(db, requireUser(req), id, drillId) });
   });
   return router;
 }

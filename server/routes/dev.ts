@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { OutboxQuery } from '../../shared/schemas/dev';
-import type { AppDeps } from '../app';
+import type { AppDeps } from '../context';
 import { requireRole } from '../middleware/auth';
 import { parseQuery } from '../middleware/validate';
 import { listOutbox } from '../services/dev/list-outbox';

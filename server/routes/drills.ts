@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import { CreateSavedDrillInput, IdParams, PreviewQuery, UpdateSavedDrillInput } from '../../shared/schemas/drills';
-import type { AppDeps } from '../app';
-import { requireUser } from '../middleware/auth';
+import type { AppDeps } from '../context';
+import { signedIn, requireUser } from '../middleware/auth';
 import { parseBody, parseParams, parseQuery } from '../middleware/validate';
 import { createSavedDrill } from '../services/drills/create';
 import { deleteSavedDrill } from '../services/drills/delete';
@@ -16,22 +16,24 @@ export function drillsRouter({ db }: AppDeps) {
   router.get('/preview', (req, res) => {
     res.json({ drill: previewDrill(parseQuery(PreviewQuery, req)) });
   });
-  router.use(requireUser);
+  router.use(signedIn);
   router.get('/', async (req, res) => {
-    res.json({ drills: await listSavedDrills(db, req.user!) });
+    res.json({ drills: await listSavedDrills(db, requireUser(req)) });
   });
   router.post('/', async (req, res) => {
-    res.status(201).json({ drill: await createSavedDrill(db, req.user!, parseBody(CreateSavedDrillInput, req)) });
+    res
+      .status(201)
+      .json({ drill: await createSavedDrill(db, requireUser(req), parseBody(CreateSavedDrillInput, req)) });
   });
   router.get('/:id', async (req, res) => {
-    res.json({ drill: await getSavedDrill(db, req.user!, parseParams(IdParams, req).id) });
+    res.json({ drill: await getSavedDrill(db, requireUser(req), parseParams(IdParams, req).id) });
   });
   router.patch('/:id', async (req, res) => {
     const { id } = parseParams(IdParams, req);
-    res.json({ drill: await updateSavedDrill(db, req.user!, id, parseBody(UpdateSavedDrillInput, req)) });
+    res.json({ drill: await updateSavedDrill(db, requireUser(req), id, parseBody(UpdateSavedDrillInput, req)) });
   });
   router.delete('/:id', async (req, res) => {
-    await deleteSavedDrill(db, req.user!, parseParams(IdParams, req).id);
+    await deleteSavedDrill(db, requireUser(req), parseParams(IdParams, req).id);
     res.status(204).end();
   });
   return router;

@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import type { AppDeps } from '../app';
+import type { AppDeps } from '../context';
 import { checkDatabase } from '../services/health/check-database';
 
 export function healthRouter({ pool }: AppDeps) {

@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import { InviteSignUpInput, InviteTokenParams } from '../../shared/schemas/studios';
-import type { AppContext } from '../app';
-import { requireUser } from '../middleware/auth';
+import type { AppContext } from '../context';
+import { signedIn, requireUser } from '../middleware/auth';
 import { csrfTokenFor } from '../middleware/csrf';
 import { regenerateSession, saveSession } from '../middleware/session';
 import { parseBody, parseParams } from '../middleware/validate';
@@ -18,9 +18,9 @@ export function invitesRouter({ db }: AppContext) {
     res.json({ invite: await previewInvite(db, token) });
   });
 
-  router.post('/:token/accept', requireUser, async (req, res) => {
+  router.post('/:token/accept', signedIn, async (req, res) => {
     const { token } = parseParams(InviteTokenParams, req);
-    res.json({ studio: await acceptInvite(db, req.user!, token) });
+    res.json({ studio: await acceptInvite(db, requireUser(req), token) });
   });
 
   router.post('/:token/sign-up', async (req, res) => {

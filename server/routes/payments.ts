@@ -1,5 +1,5 @@
 import type { RequestHandler } from 'express';
-import type { AppContext } from '../app';
+import type { AppContext } from '../context';
 import { AppError } from '../errors';
 import { linkOrigin } from '../mail/link-origin';
 import { verifyWebhook } from '../payments/client';

@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import { SuggestTempoQuery } from '../../shared/schemas/settings';
-import type { AppContext } from '../app';
-import { requireRole } from '../middleware/auth';
+import type { AppContext } from '../context';
+import { requireRole, requireUser } from '../middleware/auth';
 import { parseQuery } from '../middleware/validate';
 import { specFromQuery } from '../services/drills/spec-from-query';
 import { suggestTempo } from '../services/practice/suggest-tempo';
@@ -11,7 +11,7 @@ export function practiceRouter({ db }: AppContext) {
   /** GET /api/practice/tempo?spec=<DrillSpec JSON> -> { climb: { tempo, lastTempo, lastVerdict } | null } */
   router.get('/tempo', requireRole('player'), async (req, res) => {
     const { spec } = parseQuery(SuggestTempoQuery, req);
-    res.json({ climb: await suggestTempo(db, req.user!.id, specFromQuery(spec, 'spec')) });
+    res.json({ climb: await suggestTempo(db, requireUser(req).id, specFromQuery(spec, 'spec')) });
   });
   return router;
 }

@@ -1,8 +1,8 @@
 import { Router } from 'express';
 import { CreateRemarkInput, TakeRemarksParams } from '../../shared/schemas/remarks';
-import type { AppContext } from '../app';
+import type { AppContext } from '../context';
 import { linkOrigin } from '../mail/link-origin';
-import { requireUser } from '../middleware/auth';
+import { signedIn, requireUser } from '../middleware/auth';
 import { parseBody, parseParams } from '../middleware/validate';
 import { createRemark } from '../services/remarks/create';
 import { listRemarks } from '../services/remarks/list';
@@ -11,15 +11,18 @@ import { listRemarks } from '../services/remarks/list';
 export function remarksRouter(deps: AppContext) {
   const { db, env } = deps;
   const router = Router({ mergeParams: true });
-  router.use(requireUser);
+  router.use(signedIn);
   router.get('/', async (req, res) => {
     const { takeId } = parseParams(TakeRemarksParams, req);
-    res.json({ remarks: await listRemarks(db, req.user!, takeId) });
+    res.json({ remarks: await listRemarks(db, requireUser(req), takeId) });
   });
   router.post('/', async (req, res) => {
     const { takeId } = parseParams(TakeRemarksParams, req);
     const input = parseBody(CreateRemarkInput, req);
-    const remark = await createRemark(db, deps.mailer, req.user!, takeId, { ...input, origin: linkOrigin(req, env) });
+    const remark = await createRemark(db, deps.mailer, requireUser(req), takeId, {
+      ...input,
+      origin: linkOrigin(req, env),
+    });
     res.status(201).json({ remark });
   });
   return router;

@@ -1,9 +1,9 @@
 import { Router } from 'express';
 import { CreateAssignmentInput } from '../../shared/schemas/assignments';
 import { CreateInviteInput, CreateStudioInput, StudioParams, StudioPlayerParams } from '../../shared/schemas/studios';
-import type { AppContext } from '../app';
+import type { AppContext } from '../context';
 import { linkOrigin } from '../mail/link-origin';
-import { requireRole, requireUser } from '../middleware/auth';
+import { requireRole, signedIn, requireUser } from '../middleware/auth';
 import { parseBody, parseParams } from '../middleware/validate';
 import { createAssignment } from '../services/assignments/create';
 import { listStudioAssignments } from '../services/assignments/list';
@@ -25,61 +25,64 @@ import { getStudioPlayer } from '../services/studios/player-detail';
 export function studiosRouter(deps: AppContext) {
   const { db, env } = deps;
   const router = Router();
-  router.use(requireUser);
+  router.use(signedIn);
 
   router.get('/', async (req, res) => {
-    res.json({ studios: await listStudios(db, req.user!) });
+    res.json({ studios: await listStudios(db, requireUser(req)) });
   });
 
   router.post('/', requireRole('teacher'), async (req, res) => {
     const input = parseBody(CreateStudioInput, req);
-    res.status(201).json({ studio: await createStudio(db, req.user!, input) });
+    res.status(201).json({ studio: await createStudio(db, requireUser(req), input) });
   });
 
   router.get('/:id', async (req, res) => {
     const { id } = parseParams(StudioParams, req);
-    res.json({ studio: await getStudio(db, req.user!, id) });
+    res.json({ studio: await getStudio(db, requireUser(req), id) });
   });
 
   router.get('/:id/board', async (req, res) => {
     const { id } = parseParams(StudioParams, req);
-    res.json(await getStudioBoard(db, req.user!, id));
+    res.json(await getStudioBoard(db, requireUser(req), id));
   });
 
   router.get('/:id/players/:playerId', async (req, res) => {
     const { id, playerId } = parseParams(StudioPlayerParams, req);
-    res.json(await getStudioPlayer(db, req.user!, id, playerId));
+    res.json(await getStudioPlayer(db, requireUser(req), id, playerId));
   });
 
   router.delete('/:id/membership', async (req, res) => {
     const { id } = parseParams(StudioParams, req);
-    await leaveStudio(db, req.user!, id);
+    await leaveStudio(db, requireUser(req), id);
     res.status(204).end();
   });
 
   router.get('/:id/invites', async (req, res) => {
     const { id } = parseParams(StudioParams, req);
-    res.json({ invites: await listInvites(db, req.user!, id) });
+    res.json({ invites: await listInvites(db, requireUser(req), id) });
   });
 
   router.post('/:id/invites', async (req, res) => {
     const { id } = parseParams(StudioParams, req);
-    await teacherAccess(db, req.user!, id);
+    await teacherAccess(db, requireUser(req), id);
     const input = parseBody(CreateInviteInput, req);
-    const invite = await createInvite(db, deps.mailer, req.user!, id, { ...input, origin: linkOrigin(req, env) });
+    const invite = await createInvite(db, deps.mailer, requireUser(req), id, {
+      ...input,
+      origin: linkOrigin(req, env),
+    });
     res.status(201).json({ invite });
   });
 
   router.get('/:id/assignments', async (req, res) => {
     const { id } = parseParams(StudioParams, req);
-    res.json({ assignments: await listStudioAssignments(db, req.user!, id) });
+    res.json({ assignments: await listStudioAssignments(db, requireUser(req), id) });
   });
 
   router.post('/:id/assignments', async (req, res) => {
     const { id } = parseParams(StudioParams, req);
-    await teacherAccess(db, req.user!, id);
+    await teacherAccess(db, requireUser(req), id);
     const input = parseBody(CreateAssignmentInput, req);
-    res.status(201).json({ assignment: await createAssignment(db, req.user!, id, input) });
+    res.status(201).json({ assignment: await createAssignment(db, requireUser(req), id, input) });
   });
 
   return router;

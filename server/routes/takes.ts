@@ -2,8 +2,8 @@ import { type RequestHandler, Router } from 'express';
 import multer from 'multer';
 import { ImportTakeFields, ListTakesQuery, MAX_IMPORT_BYTES } from '../../shared/schemas/history';
 import { CreateTakeInput, TakeIdParams } from '../../shared/schemas/takes';
-import type { AppContext } from '../app';
-import { requireRole, requireUser } from '../middleware/auth';
+import type { AppContext } from '../context';
+import { requireRole, signedIn, requireUser } from '../middleware/auth';
 import { parseBody, parseParams, parseQuery } from '../middleware/validate';
 import { createTake } from '../services/takes/create';
 import { deleteTake } from '../services/takes/delete';
@@ -22,16 +22,16 @@ export function takesRouter({ db }: AppContext) {
     const input = parseBody(CreateTakeInput, req);
     const { take, created } = await createTake(db, {
       ...input,
-      playerId: req.user!.id,
+      playerId: requireUser(req).id,
       startedAt: new Date(input.startedAt),
       measures: input.measures ?? null,
     });
     res.status(created ? 201 : 200).json({ take: presentTake(take) });
   });
 
-  router.get('/', requireUser, async (req, res) => {
+  router.get('/', signedIn, async (req, res) => {
     const query = parseQuery(ListTakesQuery, req);
-    const playerId = await subjectPlayerId(db, req.user!, query.player);
+    const playerId = await subjectPlayerId(db, requireUser(req), query.player);
     res.json(await listTakes(db, playerId, query));
   });
 
@@ -40,21 +40,21 @@ export function takesRouter({ db }: AppContext) {
       throw new AppError('bad_request', 'Attach the MIDI file as "file"', { file: ['Attach a MIDI file'] });
     const fields = parseBody(ImportTakeFields, req);
     const { take } = await importTake(db, {
-      playerId: req.user!.id,
+      playerId: requireUser(req).id,
       bytes: new Uint8Array(req.file.buffer),
       ...fields,
     });
     res.status(201).json({ take: presentTake(take) });
   });
 
-  router.get('/:id', requireUser, async (req, res) => {
+  router.get('/:id', signedIn, async (req, res) => {
     const { id } = parseParams(TakeIdParams, req);
-    res.json({ take: presentTake(await getTake(db, req.user!, id)) });
+    res.json({ take: presentTake(await getTake(db, requireUser(req), id)) });
   });
 
-  router.get('/:id/midi', requireUser, async (req, res) => {
+  router.get('/:id/midi', signedIn, async (req, res) => {
     const { id } = parseParams(TakeIdParams, req);
-    const take = await getTake(db, req.user!, id);
+    const take = await getTake(db, requireUser(req), id);
     res
       .type('audio/midi')
       .attachment(takeFileName(take))
@@ -63,7 +63,7 @@ export function takesRouter({ db }: AppContext) {
 
   router.delete('/:id', requireRole('player'), async (req, res) => {
     const { id } = parseParams(TakeIdParams, req);
-    await deleteTake(db, req.user!.id, id);
+    await deleteTake(db, requireUser(req).id, id);
     res.status(204).end();
   });
 
