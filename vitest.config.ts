@@ -1,6 +1,9 @@
 import { fileURLToPath } from 'node:url';
 import { defineConfig } from 'vitest/config';
 
+/** Tests that need neither the database nor a browser: the engine, the listener, client rules. */
+const unitTests = ['tests/engine/**/*.test.ts', 'tests/client/**/*.test.ts', 'tests/audio/**/*.test.ts'];
+
 export default defineConfig({
   resolve: {
     alias: {
@@ -9,14 +12,39 @@ export default defineConfig({
     },
   },
   test: {
-    include: ['tests/**/*.test.ts', 'tests/**/*.test.tsx'],
     environment: 'node',
-    globalSetup: ['tests/helpers/global-setup.ts'],
     setupFiles: ['tests/helpers/fast-check-seed.ts'],
     testTimeout: 30_000,
     hookTimeout: 120_000,
     reporters: ['default', './tests/helpers/count-reporter.ts'],
     pool: 'forks',
     maxWorkers: 2,
+    projects: [
+      {
+        extends: true,
+        test: {
+          name: 'unit',
+          include: unitTests,
+          // Pure modules with no shared state: one module graph for all files is safe and fast.
+          isolate: false,
+        },
+      },
+      {
+        extends: true,
+        test: {
+          name: 'server',
+          include: ['tests/server/**/*.test.ts'],
+          globalSetup: ['tests/helpers/global-setup.ts'],
+        },
+      },
+      {
+        extends: true,
+        test: {
+          name: 'browser',
+          include: ['tests/e2e/**/*.test.ts'],
+          globalSetup: ['tests/helpers/global-setup.ts', 'tests/helpers/client-build.ts'],
+        },
+      },
+    ],
   },
 });

@@ -1,5 +1,6 @@
 #!/usr/bin/env node
-// `npm test`: type check, lint, client build (the browser tests load it), then every test.
+// `npm test`: type check, lint and format, then every test: unit, server (the real PostgreSQL)
+// and browser (Chromium; the client is rebuilt first when older than its sources).
 // The last line printed is Vitest's `N passed, N failed` from tests/helpers/count-reporter.ts.
 import { spawnSync } from 'node:child_process';
 import { dirname, resolve } from 'node:path';
@@ -20,9 +21,18 @@ function step(name, args) {
   }
 }
 
-step('type check', ['node_modules/typescript/bin/tsc', '--noEmit', '-p', 'tsconfig.json']);
+// Incremental: a second run re-checks only what changed since the last one.
+step('type check', [
+  'node_modules/typescript/bin/tsc',
+  '--noEmit',
+  '--incremental',
+  '--tsBuildInfoFile',
+  'node_modules/.cache/sixfold-tsc.tsbuildinfo',
+  '-p',
+  'tsconfig.json',
+]);
 step('lint and format', ['node_modules/@biomejs/biome/bin/biome', 'check', '.']);
-step('client build', ['node_modules/vite/bin/vite.js', 'build', '--logLevel', 'warn']);
+// The browser project's set-up (tests/helpers/client-build.ts) rebuilds the client when stale.
 const extra = process.argv.slice(2);
 const res = spawnSync(process.execPath, ['node_modules/vitest/vitest.mjs', 'run', ...extra], {
   cwd: projectDir,

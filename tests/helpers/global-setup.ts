@@ -9,6 +9,8 @@ import { ensure } from '../../scripts/db.mjs';
  * and freshly migrated, so every run begins from the same state.
  */
 export default async function setup() {
+  // The server and browser projects both list this set-up; the database is emptied once a run.
+  if (process.env.SIXFOLD_TEST_DB_READY === '1') return;
   const url: string = process.env.TEST_DATABASE_URL ?? (ensure() as { test: string }).test;
   process.env.TEST_DATABASE_URL = url;
   const client = new pg.Client({ connectionString: url });
@@ -20,4 +22,5 @@ export default async function setup() {
   const { db, pool } = createDb(url, 2);
   await runMigrations(db);
   await pool.end();
+  process.env.SIXFOLD_TEST_DB_READY = '1';
 }
