@@ -7,6 +7,8 @@ export { EngineError } from './errors';
 export * from './theory';
 export * from './patterns';
 export { instruments } from './instruments';
+export type { InstrumentClef, InstrumentEntry } from './instruments';
 export * from './files';
 export * from './scoring';
 export { takeToMidi } from './files/take-midi';
+export { notate } from './notation';

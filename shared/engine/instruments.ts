@@ -1,11 +1,19 @@
-import type { Instrument, InstrumentId } from './types';
+import type { Clef, Instrument, InstrumentId, MidiRange } from './types';
+
+/** The clef an instrument reads: one staff's clef, or 'grand' (treble and bass) for piano. */
+export type InstrumentClef = Clef | 'grand';
 
 /** An instrument with the General MIDI program (0-based) its drills are written with. */
 export interface InstrumentEntry extends Instrument {
   /** General MIDI Level 1 program number, 0-based */
   program: number;
-  /** the clef its written part reads in */
-  clef: 'treble' | 'bass';
+  /** the clef its written part reads in: 'grand' is piano's treble and bass staves */
+  clef: InstrumentClef;
+  /**
+   * A drill's default range, concert MIDI inclusive: the part of `range` a player drills in,
+   * chosen so that the written part needs no more than four ledger lines on its staff.
+   */
+  drillRange: MidiRange;
 }
 
 /**
@@ -23,7 +31,9 @@ export const instruments: Record<InstrumentId, InstrumentEntry> = {
     range: { low: 21, high: 108 },
     monophonic: false,
     program: 0,
-    clef: 'treble',
+    clef: 'grand',
+    // C3-C6
+    drillRange: { low: 48, high: 84 },
   },
   'wind-controller': {
     label: 'Wind controller',
@@ -32,6 +42,8 @@ export const instruments: Record<InstrumentId, InstrumentEntry> = {
     monophonic: true,
     program: 65,
     clef: 'treble',
+    // an alto saxophone's sounding range, Db3-Ab5
+    drillRange: { low: 49, high: 80 },
   },
   flute: {
     label: 'Flute',
@@ -40,6 +52,8 @@ export const instruments: Record<InstrumentId, InstrumentEntry> = {
     monophonic: true,
     program: 73,
     clef: 'treble',
+    // C4-A6
+    drillRange: { low: 60, high: 93 },
   },
   clarinet: {
     label: 'Clarinet in Bb',
@@ -48,6 +62,8 @@ export const instruments: Record<InstrumentId, InstrumentEntry> = {
     monophonic: true,
     program: 71,
     clef: 'treble',
+    // written E3-A6
+    drillRange: { low: 50, high: 91 },
   },
   'soprano-sax': {
     label: 'Soprano saxophone',
@@ -56,6 +72,8 @@ export const instruments: Record<InstrumentId, InstrumentEntry> = {
     monophonic: true,
     program: 64,
     clef: 'treble',
+    // written Bb3-F6
+    drillRange: { low: 56, high: 87 },
   },
   'alto-sax': {
     label: 'Alto saxophone',
@@ -64,6 +82,8 @@ export const instruments: Record<InstrumentId, InstrumentEntry> = {
     monophonic: true,
     program: 65,
     clef: 'treble',
+    // written Bb3-F6
+    drillRange: { low: 49, high: 80 },
   },
   'tenor-sax': {
     label: 'Tenor saxophone',
@@ -72,6 +92,8 @@ export const instruments: Record<InstrumentId, InstrumentEntry> = {
     monophonic: true,
     program: 66,
     clef: 'treble',
+    // written Bb3-F6
+    drillRange: { low: 44, high: 75 },
   },
   'baritone-sax': {
     label: 'Baritone saxophone',
@@ -80,6 +102,8 @@ export const instruments: Record<InstrumentId, InstrumentEntry> = {
     monophonic: true,
     program: 67,
     clef: 'treble',
+    // written A3-F6
+    drillRange: { low: 36, high: 68 },
   },
   trumpet: {
     label: 'Trumpet in Bb',
@@ -88,6 +112,8 @@ export const instruments: Record<InstrumentId, InstrumentEntry> = {
     monophonic: true,
     program: 56,
     clef: 'treble',
+    // written F#3-C6
+    drillRange: { low: 52, high: 82 },
   },
   trombone: {
     label: 'Trombone',
@@ -96,6 +122,8 @@ export const instruments: Record<InstrumentId, InstrumentEntry> = {
     monophonic: true,
     program: 57,
     clef: 'bass',
+    // E2-C5
+    drillRange: { low: 40, high: 72 },
   },
   guitar: {
     label: 'Guitar',
@@ -103,7 +131,9 @@ export const instruments: Record<InstrumentId, InstrumentEntry> = {
     range: { low: 40, high: 86 },
     monophonic: false,
     program: 26,
-    clef: 'treble',
+    clef: 'treble-8vb',
+    // written E3-A6, read an octave lower
+    drillRange: { low: 40, high: 81 },
   },
 };
 

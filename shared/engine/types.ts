@@ -195,6 +195,9 @@ export interface LiveScorer {
 /** A clef a part is printed in; 'treble-8vb' reads an octave lower than written (guitar). */
 export type Clef = 'treble' | 'bass' | 'treble-8vb';
 
+/** An ottava line over a note: 8 under an 8va line (printed an octave lower than written), -8 under an 8vb line. */
+export type Ottava = 0 | 8 | -8;
+
 /** One note or rest as printed: the one notation model the screen, print and MusicXML share. */
 export interface NotatedEvent {
   kind: 'note' | 'rest';
@@ -211,11 +214,13 @@ export interface NotatedEvent {
   /** the sign printed, null when none is printed */
   accidental: '#' | 'b' | 'n' | null;
   /** 8: under an 8va line (printed an octave lower than written); -8: under an 8vb line */
-  ottava: 0 | 8 | -8;
+  ottava: Ottava;
   /** id of its beam group, unique in the measure */
   beam?: number;
   /** id of its tuplet (3 in the time of 2), unique in the measure */
   tuplet?: number;
+  /** notes: the stem's direction, one per beam group (the note farthest from the middle line decides) */
+  stem?: 'up' | 'down';
 }
 
 export interface NotatedMeasure {
@@ -223,6 +228,8 @@ export interface NotatedMeasure {
   number: number;
   /** the chord symbol over the measure's start, when the drill has changes */
   chord?: string;
+  /** every chord that starts inside the measure, `start` in quarter notes from its start */
+  chords?: { start: number; chord: string }[];
   events: NotatedEvent[];
 }
 

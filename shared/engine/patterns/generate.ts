@@ -5,7 +5,7 @@ import type { Drill, DrillNote, DrillSpec, FilledDrillSpec, PatternDef, TriadPai
 import { type Ladders, type RawNote, runCells } from './cells';
 import { type Ladder, ladderOf } from './ladder';
 import { checkDirection, resolveInstrument, resolveMeter, resolvePattern, resolveRange, resolveTempo } from './spec';
-import { NOTES_PER_BEAT, measuresFor, placeBeat, tidy } from './timing';
+import { checkMeterFits, measureLength, measuresFor, noteLength, tidy } from './timing';
 
 const hexCache = new Map<string, Ladders>();
 
@@ -77,30 +77,26 @@ function snapStart(start: number, lad: Ladder, descending: boolean): number {
   return m;
 }
 
-/** Places the notes one subdivision apart from beat 0 (in place: they are fresh objects). */
+/**
+ * Places the notes one subdivision apart from beat 0 (in place: they are fresh objects). In a
+ * compound meter a triplet pattern is written as plain eighths, three to a dotted-quarter beat.
+ */
 function place(raw: RawNote[], spec: FilledDrillSpec, def: PatternDef): { notes: DrillNote[]; measures: number } {
-  const perBeat = NOTES_PER_BEAT[def.subdivision];
-  const duration = 1 / perBeat;
-  const [num, den] = spec.meter;
-  // whole notes per measure, in subdivisions, when that is a whole number (it nearly always is)
-  const perMeasure = (num * 4 * perBeat) / den;
-  const whole = Number.isInteger(perMeasure);
+  const duration = noteLength(def.subdivision, spec.meter);
+  // notes per measure: checkMeterFits has made it a whole number
+  const perMeasure = Math.round(measureLength(spec.meter) / duration);
+  const unitsPerNote = (duration * spec.meter[1]) / 4;
+  // notes per quarter (3 for triplets): dividing by it keeps beats such as 10/3 exact
+  const perQuarter = tidy(1 / duration);
   for (let i = 0; i < raw.length; i++) {
     const n = raw[i];
-    const beat = i / perBeat;
-    n.beat = beat;
+    n.beat = i / perQuarter;
     n.duration = duration;
-    if (whole) {
-      const inMeasure = i % perMeasure;
-      n.measure = (i - inMeasure) / perMeasure + 1;
-      n.beatInMeasure = tidy((inMeasure * den) / (4 * perBeat) + 1);
-    } else {
-      const p = placeBeat(beat, spec.meter);
-      n.measure = p.measure;
-      n.beatInMeasure = p.beatInMeasure;
-    }
+    const inMeasure = i % perMeasure;
+    n.measure = (i - inMeasure) / perMeasure + 1;
+    n.beatInMeasure = tidy(inMeasure * unitsPerNote + 1);
   }
-  return { notes: raw, measures: measuresFor(raw.length / perBeat, spec.meter) };
+  return { notes: raw, measures: measuresFor(raw.length * duration, spec.meter) };
 }
 
 /**
@@ -125,12 +121,13 @@ export function generateDrill(spec: DrillSpec): Drill {
     pair: [spec.pair[0], spec.pair[1]],
     pattern: spec.pattern,
     direction: spec.direction,
-    range: resolveRange(spec.range, inst.range),
+    range: resolveRange(spec.range, inst.drillRange),
     start: 0,
     instrument,
     tempo: resolveTempo(spec.tempo),
     meter: resolveMeter(spec.meter),
   };
+  checkMeterFits(def.name, def.subdivision, filled.meter);
   if (spec.chord !== undefined) filled.chord = spec.chord;
   const ladders = laddersFor(pair, inst.transposition);
   const descending = spec.direction === 'down';

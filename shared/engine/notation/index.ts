@@ -1,0 +1,1 @@
+export { notate } from './notate';
