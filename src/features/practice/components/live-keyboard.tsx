@@ -20,7 +20,7 @@ export function LiveKeyboard({
   range: { low: number; high: number };
   label: string;
 }) {
-  const { current } = useLiveMarks(live);
+  const { current } = useLiveMarks(live, drill);
   const [held, setHeld] = useState<ReadonlySet<number>>(new Set());
   useEffect(
     () =>

@@ -9,10 +9,10 @@ import { useSetLatency } from '../api/settings';
 import { useSuggestedTempo } from '../api/tempo';
 import { useDrillCycle } from '../hooks/use-drill-cycle';
 import { useLadder } from '../hooks/use-ladder';
+import { useReplay } from '../hooks/use-replay';
 import { usePracticeTake } from '../hooks/use-practice-take';
 import { useSoundRouting } from '../hooks/use-sound-routing';
 import { useTakeQueue } from '../hooks/use-take-queue';
-import { replayTake } from '../lib/replay';
 import { CautionBanner } from './caution-banner';
 import { HearYourself } from './hear-yourself';
 import { KeyButtons } from './key-buttons';
@@ -43,6 +43,7 @@ export function PracticeRoom({ baseSpec, settings, initialOptions, assignmentId,
   const setLatency = useSetLatency();
   const sound = useSoundRouting();
   const { queue, save } = useTakeQueue();
+  const replay = useReplay();
 
   const spec: DrillSpec = useMemo(
     () => ({
@@ -97,6 +98,7 @@ export function PracticeRoom({ baseSpec, settings, initialOptions, assignmentId,
 
   const begin = () => {
     if (!drill || !options) return;
+    replay.stop();
     void sound.synth.ensure();
     take.start({
       drill,
@@ -120,7 +122,9 @@ export function PracticeRoom({ baseSpec, settings, initialOptions, assignmentId,
     }
   }, [drill, take.phase]);
 
-  const climb = useSuggestedTempo(fullDrill?.spec ?? null);
+  const climbed = useSuggestedTempo(fullDrill?.spec ?? null).data?.climb ?? null;
+  // Offered only when it would change something: not when the tempo already is the suggestion.
+  const climb = climbed && climbed.tempo !== opts.tempo ? climbed : null;
   const running = take.phase === 'count-in' || take.phase === 'playing';
   const inst = instruments[opts.instrument];
   const fade = opts.ladder ? ladder.ladder.fade : 0;
@@ -209,13 +213,13 @@ export function PracticeRoom({ baseSpec, settings, initialOptions, assignmentId,
               ? 'Playing — every note is being marked'
               : ''}
         </span>
-        {climb.data?.climb && !running ? (
+        {climb && !running ? (
           <button
             type="button"
             className="text-brass-700 underline dark:text-brass-300"
-            onClick={() => setOpts({ ...opts, tempo: climb.data.climb!.tempo })}
+            onClick={() => setOpts({ ...opts, tempo: climb.tempo })}
           >
-            Suggested tempo: {climb.data.climb.tempo} bpm
+            Suggested tempo: {climb.tempo} bpm
           </button>
         ) : null}
         {queue.waiting > 0 ? (
@@ -234,9 +238,9 @@ export function PracticeRoom({ baseSpec, settings, initialOptions, assignmentId,
         ))}
       </div>
 
-      {take.finished && drill ? (
+      {take.finished ? (
         <TakeResults
-          drill={drill}
+          drill={take.finished.drill}
           take={take.finished}
           onAgain={begin}
           onNextKey={
@@ -247,13 +251,13 @@ export function PracticeRoom({ baseSpec, settings, initialOptions, assignmentId,
                   take.reset();
                 }
           }
-          onReplay={() => void replayTake(drill, take.finished!.played)}
+          onReplay={() => take.finished && replay.play(take.finished.drill, take.finished.played)}
           climb={
-            climb.data?.climb && !step && take.finished.stoppedAtMs === null
+            climb && !step && take.finished.stoppedAtMs === null
               ? {
-                  tempo: climb.data.climb.tempo,
-                  verdict: climb.data.climb.lastVerdict,
-                  onUse: () => setOpts({ ...opts, tempo: climb.data!.climb!.tempo }),
+                  tempo: climb.tempo,
+                  verdict: climb.lastVerdict,
+                  onUse: () => setOpts({ ...opts, tempo: climb.tempo }),
                 }
               : null
           }

@@ -1,9 +1,9 @@
-import type { Drill, ScoreOptions, ScoreUpdate } from '@shared/engine';
+import type { Drill, ScoreOptions } from '@shared/engine';
 import { useCallback, useEffect, useRef, useState } from 'react';
 import { getNoteInput } from '@/hooks/use-note-input';
 import { type ClickMode, startBacking } from '../lib/practice-audio';
 import { LiveMarks } from '../lib/live-marks';
-import { type FinishedTake, markClass, TakeSession } from '../lib/take-session';
+import { type FinishedTake, TakeSession } from '../lib/take-session';
 
 export type TakePhase = 'idle' | 'count-in' | 'playing' | 'done';
 
@@ -33,8 +33,6 @@ export function usePracticeTake(onFinished: (take: FinishedTake, session: TakeSe
   const onFinishedRef = useRef(onFinished);
   onFinishedRef.current = onFinished;
 
-  const applyUpdates = useCallback((updates: ScoreUpdate[]) => live.apply(updates), [live]);
-
   const end = useCallback(
     (stoppedAtMs: number | null) => {
       const s = session.current;
@@ -44,7 +42,7 @@ export function usePracticeTake(onFinished: (take: FinishedTake, session: TakeSe
       backing.current?.stop();
       backing.current = null;
       const take = s.finish(stoppedAtMs);
-      live.replace(new Map(take.score.results.map((r, i) => [i, markClass({ result: r, settled: true })])));
+      live.replace(s.marks());
       live.setCurrent(null);
       setFinished(take);
       setPhase('done');
@@ -59,16 +57,16 @@ export function usePracticeTake(onFinished: (take: FinishedTake, session: TakeSe
       getNoteInput().onNote((e) => {
         const s = session.current;
         if (!s || s.snapshot().phase === 'done') return;
-        applyUpdates(s.note(e));
+        if (s.note(e)) live.replace(s.marks());
       }),
-    [applyUpdates],
+    [live],
   );
 
   const loop = useCallback(() => {
     const s = session.current;
     if (!s) return;
-    const { updates, currentChanged, over } = s.frame();
-    applyUpdates(updates);
+    const { changed, currentChanged, over } = s.frame();
+    if (changed) live.replace(s.marks());
     if (currentChanged) live.setCurrent(s.snapshot().current);
     const p = s.snapshot().phase;
     setPhase((old) => (old === p ? old : p));
@@ -77,7 +75,7 @@ export function usePracticeTake(onFinished: (take: FinishedTake, session: TakeSe
       return;
     }
     raf.current = requestAnimationFrame(loop);
-  }, [applyUpdates, end, live]);
+  }, [end, live]);
 
   const start = useCallback(
     (setup: TakeSetup) => {
@@ -90,7 +88,7 @@ export function usePracticeTake(onFinished: (take: FinishedTake, session: TakeSe
       const s = new TakeSession(drill, setup.options, lead + setup.countInMeasures * measureMs, setup.latencyMs);
       session.current = s;
       setOrigin(s.origin);
-      live.reset();
+      live.reset(drill);
       setFinished(null);
       setPhase(setup.countInMeasures > 0 ? 'count-in' : 'playing');
       startBacking(drill, {

@@ -1,14 +1,16 @@
-import type { ScoreUpdate } from '@shared/engine';
+import type { Drill } from '@shared/engine';
 import { useSyncExternalStore } from 'react';
-import { markClass } from './take-session';
+import type { LiveMark } from './take-session';
 
 /**
  * The marks and the current note of a running take, kept outside React state so that a note
  * re-renders only the staff and the keyboard that show it, never the whole practice page.
  */
 export class LiveMarks {
-  marks: ReadonlyMap<number, string> = new Map();
+  marks: ReadonlyMap<number, LiveMark> = new Map();
   current: number | null = null;
+  /** the drill the marks belong to: a staff showing another drill (the next ladder step) shows none */
+  drill: Drill | null = null;
   private version = 0;
   private listeners = new Set<() => void>();
 
@@ -21,15 +23,7 @@ export class LiveMarks {
 
   getVersion = () => this.version;
 
-  apply(updates: ScoreUpdate[]) {
-    if (updates.length === 0) return;
-    const next = new Map(this.marks);
-    for (const u of updates) next.set(u.index, markClass({ result: u.result, settled: u.settled }));
-    this.marks = next;
-    this.emit();
-  }
-
-  replace(marks: ReadonlyMap<number, string>) {
+  replace(marks: ReadonlyMap<number, LiveMark>) {
     this.marks = marks;
     this.emit();
   }
@@ -40,9 +34,11 @@ export class LiveMarks {
     this.emit();
   }
 
-  reset() {
+  /** Clears the marks; a take on `drill` starts marking it. */
+  reset(drill: Drill | null = null) {
     this.marks = new Map();
     this.current = null;
+    this.drill = drill;
     this.emit();
   }
 
@@ -52,8 +48,15 @@ export class LiveMarks {
   }
 }
 
-/** Re-renders the calling component (only) when the take's marks or current note change. */
-export function useLiveMarks(store: LiveMarks) {
+const NONE: ReadonlyMap<number, LiveMark> = new Map();
+
+/**
+ * Re-renders the calling component (only) when the take's marks or current note change. A
+ * component showing a drill other than the one marked (a new ladder step, a changed tempo)
+ * gets clean marks.
+ */
+export function useLiveMarks(store: LiveMarks, drill: Drill) {
   useSyncExternalStore(store.subscribe, store.getVersion);
+  if (store.drill !== drill) return { marks: NONE, current: null };
   return { marks: store.marks, current: store.current };
 }
