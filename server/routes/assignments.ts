@@ -1,10 +1,11 @@
 import { Router } from 'express';
-import { AssignmentParams } from '../../shared/schemas/assignments';
+import { AssignmentParams, AssignmentWeeklyQuery } from '../../shared/schemas/assignments';
 import type { AppContext } from '../context';
 import { requireRole, signedIn, requireUser } from '../middleware/auth';
-import { parseParams } from '../middleware/validate';
+import { parseParams, parseQuery } from '../middleware/validate';
 import { deleteAssignment } from '../services/assignments/delete';
 import { listMyAssignments } from '../services/assignments/list';
+import { assignmentWeekly } from '../services/assignments/weekly';
 
 /** A player's assignments across their studios; a teacher withdraws one. */
 export function assignmentsRouter({ db }: AppContext) {
@@ -12,6 +13,11 @@ export function assignmentsRouter({ db }: AppContext) {
   router.use(signedIn);
   router.get('/', requireRole('player'), async (req, res) => {
     res.json({ assignments: await listMyAssignments(db, requireUser(req)) });
+  });
+  router.get('/:id/weekly', async (req, res) => {
+    const { id } = parseParams(AssignmentParams, req);
+    const { tz } = parseQuery(AssignmentWeeklyQuery, req);
+    res.json(await assignmentWeekly(db, requireUser(req), id, tz));
   });
   router.delete('/:id', async (req, res) => {
     const { id } = parseParams(AssignmentParams, req);

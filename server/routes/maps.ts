@@ -9,6 +9,7 @@ import { keyMap } from '../services/maps/key-map';
 import { rangeMap } from '../services/maps/range-map';
 import { subjectPlayerId } from '../services/maps/subject';
 import { timeline } from '../services/maps/timeline';
+import { weeklyByDrill } from '../services/maps/weekly';
 import { whatNext } from '../services/maps/what-next';
 
 /** The key, range and beat maps, the progress charts and "what next", for a player or their teacher. */
@@ -39,6 +40,11 @@ export function mapsRouter({ db }: AppContext) {
   router.get('/calendar', async (req, res) => {
     const q = parseQuery(ChartQuery, req);
     res.json(await practiceCalendar(db, await subjectPlayerId(db, requireUser(req), q.player), q));
+  });
+
+  router.get('/weekly', async (req, res) => {
+    const q = parseQuery(ChartQuery, req);
+    res.json(await weeklyByDrill(db, await subjectPlayerId(db, requireUser(req), q.player), q));
   });
 
   router.get('/next', async (req, res) => {

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { DrillSpec, KeyOrder } from './drills';
+import { TimeZone, WeekFigures } from './maps';
 
 export const AssignmentStatus = z.enum(['open', 'overdue', 'met']);
 export type AssignmentStatus = z.infer<typeof AssignmentStatus>;
@@ -96,3 +97,18 @@ export const StudioPlayerResponse = z.object({
   assignments: z.array(Assignment),
 });
 export type StudioPlayerResponse = z.infer<typeof StudioPlayerResponse>;
+
+/** Week over week for one assignment: each player's takes of its drill in its keys. */
+export const AssignmentWeeklyResponse = z.object({
+  weeks: z.array(z.string()),
+  players: z.array(
+    z.object({
+      playerId: z.string(),
+      name: z.string(),
+      weeks: z.array(WeekFigures),
+    }),
+  ),
+});
+export type AssignmentWeeklyResponse = z.infer<typeof AssignmentWeeklyResponse>;
+
+export const AssignmentWeeklyQuery = z.object({ tz: TimeZone.default('UTC') });

@@ -22,7 +22,7 @@ export type RangeMapResponse = z.infer<typeof RangeMapResponse>;
 export const BeatMapResponse = z.object({ cells: z.array(BeatCell) });
 export type BeatMapResponse = z.infer<typeof BeatMapResponse>;
 
-const TimeZone = z
+export const TimeZone = z
   .string()
   .max(64)
   .refine(
@@ -59,6 +59,8 @@ export const CalendarResponse = z.object({
   /** consecutive practice days ending today or yesterday, and the longest run */
   streak: z.object({ current: z.number(), longest: z.number() }),
   today: z.string(),
+  /** the player's own weekly minutes goal; null when they set none */
+  weeklyMinutesGoal: z.number().nullable(),
 });
 export type CalendarResponse = z.infer<typeof CalendarResponse>;
 
@@ -80,3 +82,27 @@ export const NextItem = z.object({
 export type NextItem = z.infer<typeof NextItem>;
 export const NextResponse = z.object({ items: z.array(NextItem) });
 export type NextResponse = z.infer<typeof NextResponse>;
+
+/** One week of one drill (or one player's assignment): mean accuracy and the fastest tempo. */
+export const WeekFigures = z.object({
+  /** the Monday the week starts on, in the player's time zone */
+  week: z.string(),
+  takes: z.number(),
+  /** 0..1; null for a week without takes */
+  accuracy: z.number().nullable(),
+  tempo: z.number().nullable(),
+});
+export type WeekFigures = z.infer<typeof WeekFigures>;
+
+export const WeeklyDrill = z.object({
+  pattern: z.string(),
+  pair: z.string(),
+  instrument: z.string(),
+  /** oldest first, one entry per week shown */
+  weeks: z.array(WeekFigures),
+});
+export type WeeklyDrill = z.infer<typeof WeeklyDrill>;
+
+/** Week over week, per drill (pattern and pair): the drills practised in the weeks shown. */
+export const WeeklyResponse = z.object({ weeks: z.array(z.string()), drills: z.array(WeeklyDrill) });
+export type WeeklyResponse = z.infer<typeof WeeklyResponse>;

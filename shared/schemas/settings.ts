@@ -20,6 +20,14 @@ export const PlayerSettings = z.object({
     .min(20, { error: 'Tempo runs from 20 to 400' })
     .max(400, { error: 'Tempo runs from 20 to 400' }),
   latency: z.record(z.string().max(200), z.number().min(-500).max(500)),
+  /** minutes a week the player means to practise; null: no goal set */
+  weeklyMinutesGoal: z
+    .number({ error: 'The weekly goal is a number of minutes' })
+    .int({ error: 'Use whole minutes' })
+    .min(10, { error: 'Set a weekly goal from 10 to 2000 minutes' })
+    .max(2000, { error: 'Set a weekly goal from 10 to 2000 minutes' })
+    .nullable()
+    .optional(),
 });
 export type PlayerSettings = z.infer<typeof PlayerSettings>;
 

@@ -230,3 +230,45 @@ describe('charts', () => {
     await p.get('/api/maps/calendar?tz=Mars/Olympus').expect(400);
   });
 });
+
+const putSettings = (c: Client, body: object) => c.agent.put('/api/settings').set('X-CSRF-Token', c.csrf).send(body);
+
+describe('practice log goal and week over week', () => {
+  it('keeps the weekly minutes goal the player sets and shows it with the practice log', async () => {
+    const fresh = await createUser(ctx.db, { role: 'player' });
+    const f = await signedIn(ctx.app, fresh);
+    expect((await f.get('/api/maps/calendar').expect(200)).body.weeklyMinutesGoal).toBeNull();
+    const put = await putSettings(f, { weeklyMinutesGoal: 150 }).expect(200);
+    expect(put.body.settings.weeklyMinutesGoal).toBe(150);
+    expect((await f.get('/api/maps/calendar').expect(200)).body.weeklyMinutesGoal).toBe(150);
+    const bad = await putSettings(f, { weeklyMinutesGoal: 3 });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.fields.weeklyMinutesGoal).toBeDefined();
+    await putSettings(f, { weeklyMinutesGoal: null }).expect(200);
+    expect((await f.get('/api/maps/calendar').expect(200)).body.weeklyMinutesGoal).toBeNull();
+  });
+
+  it('gives each drill six weeks, oldest first, Mondays in the asked time zone, empty weeks as null', async () => {
+    const fresh = await createUser(ctx.db, { role: 'player' });
+    const day = (daysAgo: number) => new Date(Date.now() - daysAgo * 86_400_000).toISOString().slice(0, 10);
+    await take(fresh.id, WEAVE, WEAVE_NOTES, day(0));
+    await take(fresh.id, { ...WEAVE, tempo: 100 }, WEAVE_NOTES, day(0));
+    await take(fresh.id, WEAVE, [], day(14));
+    await take(fresh.id, FOUR_THREE, FOUR_THREE_NOTES, day(60));
+    const f = await signedIn(ctx.app, fresh);
+    const res = await f.get('/api/maps/weekly?tz=UTC').expect(200);
+    expect(res.body.weeks).toHaveLength(6);
+    for (const w of res.body.weeks) expect(new Date(`${w}T00:00:00Z`).getUTCDay()).toBe(1);
+    // the four-three take is older than six weeks
+    expect(res.body.drills.map((d: { pattern: string; pair: string }) => `${d.pattern} ${d.pair}`)).toEqual([
+      'weave F/Eb',
+    ]);
+    const weeks = res.body.drills[0].weeks as { takes: number; accuracy: number | null; tempo: number | null }[];
+    expect(weeks.at(-1)).toMatchObject({ takes: 2, tempo: 120 });
+    expect(weeks.filter((w) => w.takes > 0)).toHaveLength(day(14) >= res.body.weeks[0] ? 2 : 1);
+    expect(weeks.find((w) => w.takes === 0)?.accuracy).toBeNull();
+    const t = await signedIn(ctx.app, teacher);
+    await t.get(`/api/maps/weekly?player=${fresh.id}`).expect(404);
+    await f.get('/api/maps/weekly?tz=Nowhere/Else').expect(400);
+  });
+});

@@ -199,3 +199,29 @@ describe('"met": every key has a take of the same drill at the targets, made aft
     expect(detail.body.assignments[0].status).toBeDefined();
   });
 });
+
+describe('week over week for an assignment', () => {
+  it("gives the teacher each player's weeks and a player their own, counting takes from any button", async () => {
+    const a = await assign({ keyOrder: 'fourths' });
+    const specs = cycleSpecs(a.spec, 'fourths');
+    const o = await newMember();
+    await postTake(o, { ...specs[1], tempo: 96 });
+    await postTake(o, specs[2], { assignmentId: a.id, miss: 4 });
+    await postTake(o, { ...STUDIO_SPEC, pattern: 'weave' }); // another drill: not counted
+    const mine = await o.get(`/api/assignments/${a.id}/weekly?tz=UTC`).expect(200);
+    expect(mine.body.weeks).toHaveLength(6);
+    expect(mine.body.players).toHaveLength(1);
+    const week = mine.body.players[0].weeks.at(-1);
+    expect(week.takes).toBe(2);
+    expect(week.tempo).toBe(100);
+    expect(week.accuracy).toBeGreaterThan(0.5);
+    expect(week.accuracy).toBeLessThan(1);
+    expect(mine.body.players[0].weeks[0]).toMatchObject({ takes: 0, accuracy: null, tempo: null });
+    const all = await t.get(`/api/assignments/${a.id}/weekly`).expect(200);
+    expect(all.body.players.length).toBeGreaterThanOrEqual(3);
+    const outsider = await signedIn(ctx.app, await createUser(ctx.db, { role: 'player' }));
+    await outsider.get(`/api/assignments/${a.id}/weekly`).expect(404);
+    await o.get(`/api/assignments/${a.id}/weekly?tz=Atlantis`).expect(400);
+    await o.get('/api/assignments/not-an-id/weekly').expect(400);
+  });
+});

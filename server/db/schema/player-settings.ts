@@ -15,6 +15,8 @@ export const playerSettings = pgTable('player_settings', {
   rangeHigh: smallint('range_high'),
   defaultTempo: real('default_tempo').notNull().default(100),
   /** input device name -> its measured latency in ms, taken off its note times */
+  /** the minutes a week the player means to practise, drawn against their practice log; null: none set */
+  weeklyMinutesGoal: smallint('weekly_minutes_goal'),
   latency: jsonb('latency').$type<Record<string, number>>().notNull().default({}),
   updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
 });

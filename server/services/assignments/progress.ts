@@ -5,7 +5,7 @@ import type { AssignmentStatus, PlayerProgress } from '../../../shared/schemas/a
 import type { Db } from '../../db/client';
 
 /** The shape of a stored take's drill from its columns (pair "D/C", pattern name, direction, instrument). */
-function takeShape(t: { pair: string; pattern: string; direction: string; instrument: string }): string | null {
+export function takeShape(t: { pair: string; pattern: string; direction: string; instrument: string }): string | null {
   const [a, b] = t.pair.split('/');
   if (!a || !b) return null;
   try {

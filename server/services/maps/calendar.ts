@@ -1,6 +1,7 @@
 import { sql } from 'drizzle-orm';
 import type { CalendarResponse, ChartQuery, PracticeDay } from '../../../shared/schemas/maps';
 import type { Db } from '../../db/client';
+import { getSettings } from '../settings/get';
 import { takeWhere } from './take-where';
 
 const dayNumber = (day: string) => Math.round(Date.parse(`${day}T00:00:00Z`) / 86_400_000);
@@ -20,7 +21,7 @@ export function streaks(days: string[], today: string): { current: number; longe
   return { current, longest };
 }
 
-/** Practice minutes and takes per day in the player's time zone, with streaks. */
+/** Practice minutes and takes per day in the player's time zone, with streaks and their weekly goal. */
 export async function practiceCalendar(
   db: Db,
   playerId: string,
@@ -45,5 +46,6 @@ export async function practiceCalendar(
       today,
     ),
     today,
+    weeklyMinutesGoal: (await getSettings(db, playerId)).weeklyMinutesGoal ?? null,
   };
 }

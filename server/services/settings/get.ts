@@ -9,6 +9,7 @@ export const DEFAULT_SETTINGS: PlayerSettings = {
   range: null,
   defaultTempo: 100,
   latency: {},
+  weeklyMinutesGoal: null,
 };
 
 export function presentSettings(row: PlayerSettingsRow | undefined): PlayerSettings {
@@ -20,6 +21,7 @@ export function presentSettings(row: PlayerSettingsRow | undefined): PlayerSetti
     range: row.rangeLow !== null && row.rangeHigh !== null ? { low: row.rangeLow, high: row.rangeHigh } : null,
     defaultTempo: row.defaultTempo,
     latency: row.latency,
+    weeklyMinutesGoal: row.weeklyMinutesGoal ?? null,
   };
 }
 

@@ -11,6 +11,7 @@ export async function updateSettings(db: Db, userId: string, input: UpdateSettin
   if (input.writtenPitchInput !== undefined) values.writtenPitchInput = input.writtenPitchInput;
   if (input.octaveShift !== undefined) values.octaveShift = input.octaveShift;
   if (input.defaultTempo !== undefined) values.defaultTempo = input.defaultTempo;
+  if (input.weeklyMinutesGoal !== undefined) values.weeklyMinutesGoal = input.weeklyMinutesGoal;
   if (input.range !== undefined) {
     values.rangeLow = input.range?.low ?? null;
     values.rangeHigh = input.range?.high ?? null;

@@ -1,0 +1,1 @@
+ALTER TABLE "player_settings" ADD COLUMN "weekly_minutes_goal" smallint;
