@@ -19,3 +19,4 @@ export * from './weekly-summaries';
 export * from './map-summaries';
 export * from './books';
 export * from './purchases';
+export * from './rate-limits';
