@@ -1,10 +1,11 @@
 import { type InstrumentId, instruments } from '@shared/engine';
 import type { PlayerSettings } from '@shared/schemas/settings';
 import { type FormEvent, useEffect, useState } from 'react';
-import { keyLabel } from '@/components/midi/keyboard-diagram';
 import { Button } from '@/components/ui/button';
 import { ApiError } from '@/lib/api-client';
 import { useUpdateSettings } from '../api/settings';
+import { pitchFrame } from '../lib/pitch-frame';
+import { PitchLabel } from './pitch-label';
 
 const field = 'mt-1 rounded-md border border-line bg-surface px-2 py-1.5 text-body';
 
@@ -22,6 +23,7 @@ export function PracticeDefaults({ settings }: { settings: PlayerSettings }) {
     setUseRange(settings.range !== null);
   }, [settings]);
   const inst = instruments[draft.instrument];
+  const frame = pitchFrame(draft.instrument);
   const range = draft.range ?? inst.range;
   const errors = update.error instanceof ApiError ? (update.error.fields ?? {}) : {};
 
@@ -104,12 +106,15 @@ export function PracticeDefaults({ settings }: { settings: PlayerSettings }) {
               checked={useRange}
               onChange={(e) => setUseRange(e.target.checked)}
             />
-            Narrower than the instrument's {keyLabel(inst.range.low)}–{keyLabel(inst.range.high)}
+            Narrower than the instrument's <PitchLabel frame={frame} midi={inst.range.low} />–
+            <PitchLabel frame={frame} midi={inst.range.high} />
           </label>
           {useRange ? (
             <>
               <label className="flex flex-col text-caption font-semibold">
-                Lowest ({keyLabel(range.low)})
+                <span>
+                  Lowest: <PitchLabel frame={frame} midi={range.low} />
+                </span>
                 <input
                   className={`${field} w-24`}
                   type="number"
@@ -120,7 +125,9 @@ export function PracticeDefaults({ settings }: { settings: PlayerSettings }) {
                 />
               </label>
               <label className="flex flex-col text-caption font-semibold">
-                Highest ({keyLabel(range.high)})
+                <span>
+                  Highest: <PitchLabel frame={frame} midi={range.high} />
+                </span>
                 <input
                   className={`${field} w-24`}
                   type="number"

@@ -13,6 +13,7 @@ import { useReplay } from '../hooks/use-replay';
 import { usePracticeTake } from '../hooks/use-practice-take';
 import { useSoundRouting } from '../hooks/use-sound-routing';
 import { useTakeQueue } from '../hooks/use-take-queue';
+import { pitchFrame } from '../lib/pitch-frame';
 import { CautionBanner } from './caution-banner';
 import { HearYourself } from './hear-yourself';
 import { KeyButtons } from './key-buttons';
@@ -20,6 +21,7 @@ import { LatencyCalibration } from './latency-calibration';
 import { LiveKeyboard } from './live-keyboard';
 import { LiveStaff } from './live-staff';
 import { type PracticeOptions, PracticeControls } from './practice-controls';
+import { FramedName } from './pitch-label';
 import { PracticeDefaults } from './practice-defaults';
 import { TakeResults } from './take-results';
 import '../practice.css';
@@ -127,6 +129,12 @@ export function PracticeRoom({ baseSpec, settings, initialOptions, assignmentId,
   const climb = climbed && climbed.tempo !== opts.tempo ? climbed : null;
   const running = take.phase === 'count-in' || take.phase === 'playing';
   const inst = instruments[opts.instrument];
+  const frame = useMemo(() => pitchFrame(opts.instrument), [opts.instrument]);
+  // The keyboard reaches the player's own lowest and highest notes as well as the instrument's.
+  const keyboardRange = {
+    low: Math.min(inst.range.low, settings.range?.low ?? inst.range.low),
+    high: Math.max(inst.range.high, settings.range?.high ?? inst.range.high),
+  };
   const fade = opts.ladder ? ladder.ladder.fade : 0;
 
   return (
@@ -135,11 +143,21 @@ export function PracticeRoom({ baseSpec, settings, initialOptions, assignmentId,
       <header className="flex flex-wrap items-end justify-between gap-3">
         <div>
           <h1 className="text-title">Practice</h1>
-          <p className="text-muted">
-            {drill
-              ? `${drill.spec.pair.join(' / ')} · ${typeof drill.spec.pattern === 'string' ? drill.spec.pattern : drill.spec.pattern.name} · ${drill.spec.direction}`
-              : ''}
-            {drill?.spec.chord ? ` · over ${drill.spec.chord}` : ''} · {inst.label}
+          <p className="text-muted" data-testid="drill-summary">
+            {drill ? (
+              <>
+                <FramedName written={frame.pair(drill.spec.pair).join(' / ')} concert={drill.spec.pair.join(' / ')} />
+                {` · ${typeof drill.spec.pattern === 'string' ? drill.spec.pattern : drill.spec.pattern.name} · ${drill.spec.direction}`}
+                {drill.spec.chord ? (
+                  <>
+                    {' · over '}
+                    <FramedName written={frame.chord(drill.spec.chord)} concert={drill.spec.chord} />
+                  </>
+                ) : null}
+              </>
+            ) : null}
+            {` · ${inst.label}`}
+            {frame.transposing ? ', in written pitch' : ''}
           </p>
         </div>
         <Link
@@ -160,6 +178,7 @@ export function PracticeRoom({ baseSpec, settings, initialOptions, assignmentId,
         drills={cycle.drills}
         current={keyIndex}
         disabled={running}
+        frame={frame}
         onPick={(i) => {
           setKeyIndex(i);
           ladder.restart();
@@ -189,8 +208,10 @@ export function PracticeRoom({ baseSpec, settings, initialOptions, assignmentId,
             <LiveKeyboard
               drill={drill}
               live={take.live}
-              range={inst.range}
-              label={`${inst.label} range with the drill's notes`}
+              range={keyboardRange}
+              frame={frame}
+              playedToConcert={options?.inputTransposition ?? 0}
+              label={`${inst.label} range${frame.transposing ? ' in written pitch' : ''} with the drill's notes`}
             />
           </div>
         ) : null}

@@ -1,6 +1,6 @@
 import { type Drill, takeToMidi } from '@shared/engine';
 import { Button } from '@/components/ui/button';
-import { keyLabel } from '@/components/midi/keyboard-diagram';
+import { pitchFrame } from '../lib/pitch-frame';
 import type { FinishedTake } from '../lib/take-session';
 
 function download(bytes: Uint8Array, name: string) {
@@ -41,6 +41,11 @@ export function TakeResults({
     .map((r, i) => ({ r, n: take.expected[i], i }))
     .filter(({ r }) => r.verdict === 'missed' || r.verdict === 'wrong');
   const pct = Math.round(score.accuracy * 100);
+  // Played notes in the frame the expected ones are written in: what was played, as the player reads it.
+  const frame = pitchFrame(drill.spec.instrument);
+  const toConcert = take.options.inputTransposition ?? 0;
+  const playedName = (i: number | null, like: string) =>
+    i === null ? '?' : frame.name(frame.written(take.played[i].midi + toConcert), like);
   return (
     <section
       aria-labelledby="results-heading"
@@ -86,9 +91,7 @@ export function TakeResults({
                 className="rounded-full border border-ember-500/50 px-2.5 py-0.5 text-caption"
               >
                 m{n.measure} · {n.written}{' '}
-                {r.verdict === 'missed'
-                  ? 'missed'
-                  : `wrong (played ${r.playedIndex !== null ? keyLabel(take.played[r.playedIndex].midi) : '?'})`}
+                {r.verdict === 'missed' ? 'missed' : `wrong (played ${playedName(r.playedIndex, n.written)})`}
               </li>
             ))}
           </ul>

@@ -31,8 +31,9 @@ export interface TakeSnapshot {
 }
 
 export interface FinishedTake {
-  /** the drill (or passage of it) the take played */
+  /** the drill (or passage of it) the take played, and how it was scored */
   drill: Drill;
+  options: ScoreOptions;
   played: PlayedNote[];
   score: TakeScore;
   /** the expected notes scored (fewer when stopped early) */
@@ -205,7 +206,7 @@ export class TakeSession {
     this.results = new Map(score.results.map((r, i) => [i, { result: r, settled: true }]));
     this.held.clear();
     this.shownMarks = new Map(score.results.map((r, i) => [i, { verdict: r.verdict, settled: true }]));
-    this.finished = { drill: this.drill, played: this.played, score, expected, stoppedAtMs };
+    this.finished = { drill: this.drill, options: this.options, played: this.played, score, expected, stoppedAtMs };
     return this.finished;
   }
 
