@@ -5,6 +5,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { DrillSpec } from '../../shared/schemas/drills';
 import { type BrowserSession, openBrowser, signInThroughPage } from '../helpers/browser';
 import { createUser, signedIn, type TestUser } from '../helpers/factories';
+import { seriousViolations } from '../helpers/axe';
 import { startPaymentsFake, startTestServer } from '../helpers/test-server';
 
 const artifacts = fileURLToPath(new URL('../.artifacts/', import.meta.url));
@@ -148,4 +149,50 @@ describe('drill books in Chromium: publish, buy, practise, see the sale', () => 
     expect(await page.locator('.recharts-bar-rectangle').count()).toBeGreaterThan(0);
     await page.screenshot({ path: join(artifacts, 'books-sales.png'), fullPage: true });
   });
+
+  it('the printable edition shows every drill with its notation and teaching note', async () => {
+    const { page } = playerBrowser;
+    await page.goto(`${server.url}/books/${bookId}/print`, { waitUntil: 'networkidle' });
+    await page.getByRole('heading', { name: BOOK_TITLE }).first().waitFor();
+    await page.getByText('Sing the D triad over the chord first.').waitFor();
+    await page.getByText('Even eighths across the bar line.').waitFor();
+    await page.waitForFunction(() => document.querySelectorAll('svg [data-note-index], svg [data-index]').length > 0);
+    expect(await seriousViolations(page)).toEqual([]);
+    await page.emulateMedia({ media: 'print' });
+    await page.screenshot({ path: join(artifacts, 'books-print.png'), fullPage: true });
+    await page.emulateMedia({ media: 'screen' });
+  });
+
+  it('an admin refunds the purchase after confirming, and the player loses the full book', async () => {
+    const admin = await createUser(server.db, { role: 'admin', name: 'Desk' });
+    const adminBrowser = await openBrowser(server.url);
+    try {
+      const { page } = adminBrowser;
+      await signInThroughPage(page, server.url, admin);
+      await page.goto(`${server.url}/admin/purchases`, { waitUntil: 'networkidle' });
+      const row = page.getByRole('row').filter({ hasText: BOOK_TITLE });
+      await row.waitFor();
+      expect(await seriousViolations(page)).toEqual([]);
+      // A dismissed confirmation changes nothing.
+      page.once('dialog', (d) => d.dismiss());
+      await row.getByRole('button', { name: 'Refund' }).click();
+      expect(await row.getByRole('button', { name: 'Refund' }).count()).toBe(1);
+      page.once('dialog', (d) => d.accept());
+      await row.getByRole('button', { name: 'Refund' }).click();
+      await row.getByText('refunded').waitFor();
+      await page.goto(`${server.url}/admin/audit`, { waitUntil: 'networkidle' });
+      await page
+        .getByText(/refund/i)
+        .first()
+        .waitFor();
+      expect(await seriousViolations(page)).toEqual([]);
+      expect(adminBrowser.errors).toEqual([]);
+    } finally {
+      await adminBrowser.close();
+    }
+    const { page } = playerBrowser;
+    await page.goto(`${server.url}/books/${bookId}`, { waitUntil: 'networkidle' });
+    await page.getByRole('button', { name: 'Practise Starter on C/D' }).waitFor();
+    expect(await page.getByRole('button', { name: 'Practise Four-three on D/C' }).count()).toBe(0);
+  }, 90_000);
 });

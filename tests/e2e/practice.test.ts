@@ -1,13 +1,11 @@
 import { readFileSync } from 'node:fs';
-import { createRequire } from 'node:module';
 import { parseMidi } from 'midi-file';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { type DrillSpec, generateDrill, sliceDrill } from '../../shared/engine';
+import { seriousViolations } from '../helpers/axe';
 import { type BrowserSession, openBrowser, signInThroughPage } from '../helpers/browser';
 import { createUser, type TestUser } from '../helpers/factories';
 import { startTestServer } from '../helpers/test-server';
-
-const require = createRequire(import.meta.url);
 
 // A short drill at 100 bpm: a beat is 600 ms, so the default hit window is 75 ms and triplet
 // notes are 200 ms apart (match window 150 ms). Scripted mistakes sit well inside those.
@@ -255,21 +253,6 @@ describe('practice page in Chromium with the fake MIDI device', () => {
   it('has no serious accessibility violation (axe-core)', async () => {
     const { page } = b;
     await open(SPEC);
-    await page.addScriptTag({ content: readFileSync(require.resolve('axe-core/axe.min.js'), 'utf8') });
-    const violations = await page.evaluate(async () => {
-      const axe = (
-        window as unknown as {
-          axe: {
-            run(
-              ctx: Document,
-              o: object,
-            ): Promise<{ violations: Array<{ id: string; impact: string; nodes: unknown[] }> }>;
-          };
-        }
-      ).axe;
-      const result = await axe.run(document, { resultTypes: ['violations'] });
-      return result.violations.map((v) => ({ id: v.id, impact: v.impact, nodes: v.nodes.length }));
-    });
-    expect(violations.filter((v) => v.impact === 'serious' || v.impact === 'critical')).toEqual([]);
+    expect(await seriousViolations(page)).toEqual([]);
   });
 });

@@ -15,7 +15,7 @@ export function AuthPage({
   return (
     <section className="mx-auto grid max-w-md gap-6 py-6">
       <header>
-        <p className="text-caption font-bold uppercase tracking-[0.2em] text-brass-600 dark:text-brass-300">
+        <p className="text-caption font-bold uppercase tracking-[0.2em] text-brass-700 dark:text-brass-300">
           {eyebrow}
         </p>
         <h1 className="mt-1 text-title">{title}</h1>

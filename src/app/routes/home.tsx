@@ -1,6 +1,9 @@
 import type { User } from '@shared/schemas/auth';
+import { useQuery } from '@tanstack/react-query';
 import { Link } from 'react-router-dom';
 import { useMe } from '@/features/auth/api/session';
+import { takesQueryOptions } from '@/features/history/api/takes';
+import { studiosQueryOptions } from '@/features/studios/api/studios';
 import { MyAssignments } from '@/features/studios/components/my-assignments';
 import { NotificationList } from '@/features/studios/components/notification-list';
 import { StudioSummary } from '@/features/studios/components/studio-summary';
@@ -87,18 +90,38 @@ const lead: Record<User['role'], string> = {
   admin: 'Next: keep the accounts on this Sixfold in order.',
 };
 
+/**
+ * "Welcome back" only to someone who has been here before: a player with a take, a teacher with
+ * a studio. A brand-new account (or one still loading) is simply welcomed.
+ */
+function Greeting({ user }: { user: User }) {
+  const takes = useQuery({ ...takesQueryOptions({ pageSize: 1 }), enabled: user.role === 'player' });
+  const studios = useQuery({ ...studiosQueryOptions, enabled: user.role === 'teacher' });
+  const first = user.name.split(/\s+/)[0];
+  const returning =
+    user.role === 'player'
+      ? (takes.data?.total ?? 0) > 0
+      : user.role === 'teacher'
+        ? (studios.data?.studios.length ?? 0) > 0
+        : false;
+  return (
+    <h1 className="mt-1 text-display" data-testid="home-greeting">
+      {returning ? `Welcome back, ${first}.` : `Welcome to Sixfold, ${first}.`}
+    </h1>
+  );
+}
+
 /** What to do next, per role. */
 export function HomeRoute() {
   const { user } = useMe();
   if (!user) return null;
-  const first = user.name.split(/\s+/)[0];
   return (
     <section className="grid gap-6" data-testid={`home-${user.role}`}>
       <header>
-        <p className="text-caption font-bold uppercase tracking-[0.2em] text-brass-600 dark:text-brass-300">
+        <p className="text-caption font-bold uppercase tracking-[0.2em] text-brass-700 dark:text-brass-300">
           {user.role} home
         </p>
-        <h1 className="mt-1 text-display">Welcome back, {first}.</h1>
+        <Greeting user={user} />
         <p className="mt-2 text-lead text-muted">{lead[user.role]}</p>
       </header>
       <NotificationList />

@@ -5,7 +5,7 @@ export function LandingRoute() {
   return (
     <section className="grid gap-10 md:grid-cols-[3fr_2fr] md:items-center">
       <div>
-        <p className="text-caption font-bold uppercase tracking-[0.2em] text-brass-600 dark:text-brass-300">
+        <p className="text-caption font-bold uppercase tracking-[0.2em] text-brass-700 dark:text-brass-300">
           Practice companion
         </p>
         <h1 className="mt-2 text-display">Two triads, six notes, every key.</h1>
