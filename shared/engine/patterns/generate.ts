@@ -3,7 +3,7 @@ import { instruments } from '../instruments';
 import { pairOf } from '../theory/pairs';
 import type { Drill, DrillNote, DrillSpec, FilledDrillSpec, PatternDef, TriadPair } from '../types';
 import { type Ladders, type RawNote, runCells } from './cells';
-import { type Ladder, ladderOf } from './ladder';
+import { type Ladder, ladderOf, writtenPairPitchClasses } from './ladder';
 import { checkDirection, resolveInstrument, resolveMeter, resolvePattern, resolveRange, resolveTempo } from './spec';
 import { checkMeterFits, measureLength, measuresFor, noteLength, tidy } from './timing';
 
@@ -13,8 +13,10 @@ function laddersFor(pair: TriadPair, transposition: number): Ladders {
   const key = `${pair.a.symbol}|${pair.b.symbol}|${transposition}`;
   const hit = hexCache.get(key);
   if (hit) return hit;
-  const a = ladderOf(pair.a, transposition);
-  const b = ladderOf(pair.b, transposition);
+  // the written part spells the pair as one unit, moved by the instrument's interval
+  const [writtenA, writtenB] = writtenPairPitchClasses(pair.a, pair.b, transposition);
+  const a = ladderOf(pair.a, transposition, writtenA);
+  const b = ladderOf(pair.b, transposition, writtenB);
   const hex: Ladders['hex'] = [];
   const hexIndexOf = new Int16Array(128).fill(-1);
   for (let m = 0; m < 128; m++) {
@@ -146,16 +148,18 @@ export function generateDrill(spec: DrillSpec): Drill {
     );
   }
   if (spec.direction === 'up-down') {
+    // The descent's first cell enters on the highest tone of the first triad at or below the top
+    // reached; when that is the note just played, on the next one below, so nothing is dropped
+    // and every cell keeps its place in the beat.
     let top = raw[0].midi;
     for (const n of raw) if (n.midi > top) top = n.midi;
-    const turn = lad.indexOf[top] >= 0 ? top : lad.midi[lad.below[top]];
+    const lastMidi = raw[raw.length - 1].midi;
+    let turn: number | undefined = lad.indexOf[top] >= 0 ? top : lad.midi[lad.below[top]];
+    if (turn === lastMidi) turn = lad.midi[lad.below[turn]];
     if (turn !== undefined && turn >= filled.range.low) {
       const down = runCells(def, ladders, { start: turn, range: filled.range, descending: true });
       const base = raw[raw.length - 1].cell + 1;
-      const lastMidi = raw[raw.length - 1].midi;
-      for (let i = 0; i < down.length; i++) {
-        const n = down[i];
-        if (i === 0 && n.midi === lastMidi) continue;
+      for (const n of down) {
         n.cell += base;
         raw.push(n);
       }

@@ -1,17 +1,12 @@
 import { Chord } from 'tonal';
 import { EngineError } from '../errors';
-import { parseTriad, QUALITY_SUFFIX } from '../theory/triads';
+import { movePair, semitoneInterval } from '../theory/pair-spelling';
 import { chromaOf, rootSpelling } from '../theory/spelling';
 import type { Drill, DrillSpec, KeyOrder } from '../types';
 import { cellsToFit, generateDrill } from './generate';
 import { resolvePattern } from './spec';
 
 const STEP: Record<KeyOrder, number> = { chromatic: 1, fourths: 5, fifths: 7 };
-
-function moveTriad(symbol: string, semitones: number): string {
-  const t = parseTriad(symbol);
-  return rootSpelling(chromaOf(t.root) + semitones) + QUALITY_SUFFIX[t.quality];
-}
 
 function moveChord(chord: string, semitones: number): string {
   const [tonic, type, bass] = Chord.tokenize(chord);
@@ -22,7 +17,8 @@ function moveChord(chord: string, semitones: number): string {
 
 /**
  * The same drill in all 12 keys, from the spec's own: up a half step, a fourth or a fifth each
- * time. Roots are respelled from C Db D Eb E F F# G Ab A Bb B; a given start moves with the key,
+ * time. The moved pair is spelled as one unit (intervals keep their names, no double sharps or
+ * flats; the spec's own key keeps the names as typed); a given start moves with the key,
  * then by octaves into the range (else the default start is used).
  *
  * @example
@@ -38,7 +34,8 @@ export function inAllKeys(spec: DrillSpec, order: KeyOrder = 'chromatic'): Drill
     const shift = (k * STEP[order]) % 12;
     const moved: DrillSpec = {
       ...spec,
-      pair: [moveTriad(spec.pair[0], shift), moveTriad(spec.pair[1], shift)],
+      // the drill's own key keeps the names as typed; every other key spells the moved pair as a unit
+      pair: shift === 0 ? [spec.pair[0], spec.pair[1]] : movePair(spec.pair, semitoneInterval(shift)),
       chord: spec.chord === undefined ? undefined : moveChord(spec.chord, shift),
     };
     if (spec.chord === undefined) delete moved.chord;

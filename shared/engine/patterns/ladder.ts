@@ -1,6 +1,6 @@
-import { Note } from 'tonal';
-import { QUALITY_INTERVALS } from '../theory/triads';
-import { chromaOf, nameAt, rootSpelling, spelledPc } from '../theory/spelling';
+import { movePair, semitoneInterval } from '../theory/pair-spelling';
+import { nameAt, spelledPc } from '../theory/spelling';
+import { parseTriad } from '../theory/triads';
 import type { Triad } from '../types';
 
 /**
@@ -26,31 +26,33 @@ export interface Ladder {
 const cache = new Map<string, Ladder>();
 
 /**
- * The written pitch classes of a triad on an instrument: the root moved by -transposition and
- * spelled from C Db D Eb E F F# G Ab A Bb B, the tones spelled from it (B major on alto sax is
- * written Ab C Eb). Octave transpositions keep the concert spelling.
+ * The written pitch classes of a pair on an instrument, a's three then b's: the whole pair moved
+ * by the instrument's interval and spelled as one unit, so every interval keeps its name (concert
+ * F#/E on a B-flat instrument reads Ab/Gb, B major on alto sax Ab C Eb). Octave transpositions
+ * (guitar) keep the concert names as they are.
  *
  * @example
- * writtenPitchClasses(parseTriad('B'), -9) // ['Ab', 'C', 'Eb']
+ * writtenPairPitchClasses(parseTriad('F#'), parseTriad('E'), -2) // [['Ab', 'C', 'Eb'], ['Gb', 'Bb', 'Db']]
  */
-export function writtenPitchClasses(triad: Triad, transposition: number): string[] {
-  if (transposition % 12 === 0) return triad.pitchClasses;
-  const root = rootSpelling(chromaOf(triad.root) - transposition);
-  return QUALITY_INTERVALS[triad.quality].map((ivl) => Note.transpose(root, ivl));
+export function writtenPairPitchClasses(a: Triad, b: Triad, transposition: number): [string[], string[]] {
+  if (transposition % 12 === 0) return [a.pitchClasses, b.pitchClasses];
+  const [wa, wb] = movePair([a.symbol, b.symbol], semitoneInterval(-transposition));
+  return [parseTriad(wa).pitchClasses, parseTriad(wb).pitchClasses];
 }
 
 /**
- * The ladder of a triad for an instrument's transposition (cached).
+ * The ladder of a triad for an instrument's transposition (cached), its written names spelled
+ * from `writtenPcs` (root, third, fifth: the pair's written spelling; see writtenPairPitchClasses).
  *
  * @example
- * ladderOf(parseTriad('F'), 0).name[ladderOf(parseTriad('F'), 0).indexOf[65]] // 'F4'
+ * ladderOf(parseTriad('F'), 0, ['F', 'A', 'C']).name[ladderOf(parseTriad('F'), 0, ['F', 'A', 'C']).indexOf[65]] // 'F4'
  */
-export function ladderOf(triad: Triad, transposition: number): Ladder {
-  const key = `${triad.symbol}|${transposition}`;
+export function ladderOf(triad: Triad, transposition: number, writtenPcs: string[]): Ladder {
+  const key = `${triad.symbol}|${triad.pitchClasses.join(',')}|${transposition}|${writtenPcs.join(',')}`;
   const hit = cache.get(key);
   if (hit) return hit;
   const concert = triad.pitchClasses.map(spelledPc);
-  const written = writtenPitchClasses(triad, transposition).map(spelledPc);
+  const written = writtenPcs.map(spelledPc);
   const chroma = concert.map((s) => s.chroma);
   const ladder: Ladder = {
     midi: [],

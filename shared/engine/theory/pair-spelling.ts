@@ -34,13 +34,24 @@ export function pairNotes(p: PairRoots): string[] {
   return notes;
 }
 
-function score(p: PairRoots): number[] {
+/** Semitones past a single sharp or flat, over all six notes and both roots (Ebb counts 1, Fbbb 2). */
+function doubles(p: PairRoots): number {
+  let n = 0;
+  for (const name of [...pairNotes(p), p.a.root, p.b.root]) {
+    const alt = Math.abs(Note.get(name).alt);
+    if (alt > 1) n += alt - 1;
+  }
+  return n;
+}
+
+function score(p: PairRoots, unit: boolean): number[] {
   const notes = pairNotes(p);
   const roots = [p.a.root, p.b.root];
   const alts = notes.map((n) => Note.get(n).alt);
   const rootIndex = ROOT_ORDER.indexOf(p.a.root);
   return [
-    alts.some((a) => Math.abs(a) > 1) || roots.some((r) => Math.abs(Note.get(r).alt) > 1) ? 1 : 0,
+    doubles(p),
+    unit ? 0 : 1,
     roots.filter((r) => AWKWARD.has(r)).length,
     notes.filter((n) => AWKWARD.has(n)).length,
     alts.filter((a) => a !== 0).length,
@@ -48,12 +59,14 @@ function score(p: PairRoots): number[] {
   ];
 }
 
-function respell(p: PairRoots, interval: string): PairRoots {
+function respell(p: PairRoots, aInterval: string, bInterval: string): PairRoots {
   return {
-    a: { ...p.a, root: Note.transpose(p.a.root, interval) },
-    b: { ...p.b, root: Note.transpose(p.b.root, interval) },
+    a: { ...p.a, root: aInterval === '1P' ? p.a.root : Note.transpose(p.a.root, aInterval) },
+    b: { ...p.b, root: bInterval === '1P' ? p.b.root : Note.transpose(p.b.root, bInterval) },
   };
 }
+
+const SHIFTS = ['1P', '2d', '-2d'];
 
 /**
  * Spells a pair as one unit: the pair as given, or its enharmonic respelling with every note
@@ -63,23 +76,29 @@ function respell(p: PairRoots, interval: string): PairRoots {
  * pair as given. Intervals between any two notes keep their names, so the triads never pull
  * apart (a whole step stays a whole step).
  *
+ * A few pairs cannot be spelled as a unit without a double sharp or flat in some keys (Eb with
+ * Gbm: its respelling is D# with F##... ); only then is one triad respelled on its own (Eb with
+ * F#m), since no double sharp or flat comes first.
+ *
  * @example
  * spellPairAsUnit({ a: { root: 'G#', quality: 'major' }, b: { root: 'F#', quality: 'major' } })
  * // { a: { root: 'Ab', quality: 'major' }, b: { root: 'Gb', quality: 'major' } }
  */
 export function spellPairAsUnit(p: PairRoots): PairRoots {
-  const candidates = [p, respell(p, '2d'), respell(p, '-2d')].filter(
-    (c) => c.a.root !== '' && c.b.root !== '' && Note.get(c.a.root).alt >= -2 && Note.get(c.a.root).alt <= 2,
-  );
-  let best = candidates[0];
-  let bestScore = score(best);
-  for (const c of candidates.slice(1)) {
-    const s = score(c);
+  let best = p;
+  let bestScore = score(p, true);
+  const consider = (c: PairRoots, unit: boolean) => {
+    if (c.a.root === '' || c.b.root === '') return;
+    const s = score(c, unit);
     const i = s.findIndex((v, k) => v !== bestScore[k]);
     if (i >= 0 && s[i] < bestScore[i]) {
       best = c;
       bestScore = s;
     }
+  };
+  for (const sh of SHIFTS.slice(1)) consider(respell(p, sh, sh), true);
+  if (bestScore[0] > 0) {
+    for (const sa of SHIFTS) for (const sb of SHIFTS) if (sa !== sb) consider(respell(p, sa, sb), false);
   }
   return best;
 }
