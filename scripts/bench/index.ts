@@ -9,6 +9,7 @@ const sections: Array<[string, () => Promise<{ run: () => Promise<void> }>]> = [
   ['maps', () => import('./maps')],
   ['takes-load', () => import('./takes-load')],
   ['live-marks', () => import('./live-marks')],
+  ['listening', () => import('./listening')],
 ];
 
 const only = process.argv.slice(2);

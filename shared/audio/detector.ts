@@ -357,7 +357,7 @@ function createDecimator(sampleRate: number) {
     return {
       factor,
       delay: 0,
-      push: (block: Float32Array) => Float32Array.from(block),
+      push: (block: Float32Array) => block,
       flush: () => new Float32Array(0),
     };
   }
@@ -375,34 +375,33 @@ function createDecimator(sampleRate: number) {
     norm += h[m];
   }
   for (let m = 0; m < taps; m++) h[m] /= norm;
-  // The last taps - 1 input samples, then the new block.
-  let hist = new Float32Array(taps - 1);
+  // The last taps - 1 input samples, then the new block; outputs go to a reused buffer.
+  const keep = taps - 1;
+  let input = new Float32Array(keep + 4096);
+  let output = new Float32Array(Math.ceil(4096 / factor) + 1);
   let received = 0;
   let next = 0; // index of the next output
   const run = (block: Float32Array) => {
-    const all = new Float32Array(hist.length + block.length);
-    all.set(hist);
-    all.set(block, hist.length);
-    const base = received - hist.length; // input index of all[0]
+    if (keep + block.length > input.length) {
+      const bigger = new Float32Array(keep + block.length);
+      bigger.set(input.subarray(0, keep));
+      input = bigger;
+      output = new Float32Array(Math.ceil(block.length / factor) + 1);
+    }
+    input.set(block, keep);
+    const base = received - keep; // input index of input[0]
     received += block.length;
-    const outs: number[] = [];
+    let n = 0;
     while (next * factor < received) {
+      // input[i - m] for m = 0..taps-1; before the first sample the history holds zeros.
       const i = next * factor - base;
       let acc = 0;
-      for (let m = 0; m < taps; m++) {
-        const j = i - m;
-        if (j >= 0) acc += h[m] * all[j];
-      }
-      outs.push(acc);
+      for (let m = 0; m < taps; m++) acc += h[m] * input[i - m];
+      output[n++] = acc;
       next++;
     }
-    hist = all.slice(Math.max(0, all.length - (taps - 1)));
-    if (hist.length < taps - 1) {
-      const padded = new Float32Array(taps - 1);
-      padded.set(hist, taps - 1 - hist.length);
-      hist = padded;
-    }
-    return Float32Array.from(outs);
+    input.copyWithin(0, block.length, block.length + keep);
+    return output.subarray(0, n);
   };
   return {
     factor,

@@ -96,8 +96,28 @@ export interface Instrument {
 
 export type Meter = [number, number];
 
-export interface DrillSpec {
+/** One chord of a progression: its symbol, how long it lasts, and optionally the pair pinned to it. */
+export interface ChordChange {
+  /** a chord symbol, e.g. 'Dm7' */
+  chord: string;
+  /** quarter notes */
+  beats: number;
+  /** pinned; else chosen among the chord's first three fits */
+  pair?: [string, string];
+}
+
+/** A chord of a generated progression drill, once per chorus, with the pair it was played in. */
+export interface DrillChange {
+  chord: string;
   pair: [string, string];
+  /** quarter notes from the first downbeat */
+  startBeat: number;
+  beats: number;
+}
+
+export interface DrillSpec {
+  /** may be left out when `changes` is given */
+  pair?: [string, string];
   pattern: PatternId | PatternDef;
   direction: Direction;
   range?: MidiRange;
@@ -106,10 +126,16 @@ export interface DrillSpec {
   tempo?: number;
   meter?: Meter;
   chord?: string;
+  /** a progression the drill plays through, chord by chord */
+  changes?: ChordChange[];
+  /** times through the progression (default 1) */
+  choruses?: number;
 }
 
 /** A DrillSpec with its defaults filled in, as held by a generated Drill. */
 export interface FilledDrillSpec extends DrillSpec {
+  /** with changes: the first chord's pair */
+  pair: [string, string];
   range: MidiRange;
   start: number;
   instrument: InstrumentId;
@@ -134,12 +160,16 @@ export interface DrillNote {
   source: 'a' | 'b' | 'scale';
   /** 0-based index of the note's cell */
   cell: number;
+  /** index into Drill.changes (only when the spec has changes) */
+  chordIndex?: number;
 }
 
 export interface Drill {
   spec: FilledDrillSpec;
   notes: DrillNote[];
   measures: number;
+  /** the progression as played, one entry per chord per chorus (only when the spec has changes) */
+  changes?: DrillChange[];
 }
 
 export type KeyOrder = 'chromatic' | 'fourths' | 'fifths';

@@ -3,13 +3,15 @@ import { instruments } from '../instruments';
 import { pairOf } from '../theory/pairs';
 import type { Drill, DrillNote, DrillSpec, FilledDrillSpec, PatternDef, TriadPair } from '../types';
 import { type Ladders, type RawNote, runCells } from './cells';
+import { generateChangesDrill } from './changes';
 import { type Ladder, ladderOf, writtenPairPitchClasses } from './ladder';
 import { checkDirection, resolveInstrument, resolveMeter, resolvePattern, resolveRange, resolveTempo } from './spec';
 import { checkMeterFits, measureLength, measuresFor, noteLength, tidy } from './timing';
 
 const hexCache = new Map<string, Ladders>();
 
-function laddersFor(pair: TriadPair, transposition: number): Ladders {
+/** The ladders of a pair on an instrument (cached); progression drills share them. */
+export function laddersFor(pair: TriadPair, transposition: number): Ladders {
   const key = `${pair.a.symbol}|${pair.b.symbol}|${transposition}`;
   const hit = hexCache.get(key);
   if (hit) return hit;
@@ -111,6 +113,7 @@ function place(raw: RawNote[], spec: FilledDrillSpec, def: PatternDef): { notes:
  */
 export function generateDrill(spec: DrillSpec): Drill {
   if (!spec || typeof spec !== 'object') throw new EngineError('A drill needs a spec.');
+  if (spec.changes !== undefined) return generateChangesDrill(spec);
   if (!Array.isArray(spec.pair) || spec.pair.length !== 2) {
     throw new EngineError('A drill needs a pair of two triads, such as ["F", "Eb"].');
   }

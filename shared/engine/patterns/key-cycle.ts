@@ -3,6 +3,7 @@ import { EngineError } from '../errors';
 import { movePair, semitoneInterval } from '../theory/pair-spelling';
 import { chromaOf, rootSpelling } from '../theory/spelling';
 import type { Drill, DrillSpec, KeyOrder } from '../types';
+import { moveChanges } from './changes';
 import { cellsToFit, generateDrill } from './generate';
 import { resolvePattern } from './spec';
 
@@ -35,10 +36,13 @@ export function inAllKeys(spec: DrillSpec, order: KeyOrder = 'chromatic'): Drill
     const moved: DrillSpec = {
       ...spec,
       // the drill's own key keeps the names as typed; every other key spells the moved pair as a unit
-      pair: shift === 0 ? [spec.pair[0], spec.pair[1]] : movePair(spec.pair, semitoneInterval(shift)),
+      pair: spec.pair && (shift === 0 ? [spec.pair[0], spec.pair[1]] : movePair(spec.pair, semitoneInterval(shift))),
       chord: spec.chord === undefined ? undefined : moveChord(spec.chord, shift),
     };
     if (spec.chord === undefined) delete moved.chord;
+    if (spec.pair === undefined) delete moved.pair;
+    // a progression moves chord by chord, pinned pairs with it (its own key keeps the names as typed)
+    if (spec.changes && shift !== 0) moved.changes = moveChanges(spec.changes, shift);
     drills.push(withMovedStart(moved, spec.start === undefined ? undefined : first.spec.start + shift, range));
   }
   return drills;
