@@ -5,6 +5,7 @@ export {};
  */
 const sections: Array<[string, () => Promise<{ run: () => Promise<void> }>]> = [
   ['engine', () => import('./engine')],
+  ['changes', () => import('./changes')],
   ['scoring', () => import('./scoring')],
   ['maps', () => import('./maps')],
   ['takes-load', () => import('./takes-load')],

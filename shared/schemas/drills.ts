@@ -101,34 +101,70 @@ const TriadSymbol = z
   .min(1, { error: 'Name a triad, such as F, Fm, Fdim or Faug' })
   .max(12, { error: 'That is not a triad symbol' });
 
-export const DrillSpec = z.object({
-  pair: z.tuple([TriadSymbol, TriadSymbol], { error: 'A pair is two triad symbols, such as ["D", "C"]' }),
-  pattern: z.union([PatternId, PatternDef], { error: 'Choose a preset pattern or define one' }),
-  direction: z.enum(['up', 'down', 'up-down'], { error: 'A drill goes up, down or up-down' }),
-  range: z
-    .object({ low: Midi, high: Midi })
-    .refine((r) => r.low <= r.high, { error: 'The low note must not be above the high note', path: ['low'] })
-    .optional(),
-  start: Midi.optional(),
-  instrument: InstrumentIdSchema.optional(),
-  tempo: z
-    .number({ error: 'The tempo is a number of beats per minute' })
-    .min(20, { error: 'The tempo is at least 20' })
-    .max(400, { error: 'The tempo is at most 400' })
-    .optional(),
-  meter: z
-    .tuple([z.number().int(), z.number().int()], { error: 'A meter is two numbers, such as [4, 4]' })
-    .refine((m) => METERS.some(([n, d]) => n === m[0] && d === m[1]), { error: 'Choose 4/4, 3/4, 5/4, 6/8 or 7/8' })
-    .optional(),
+const PairTuple = z.tuple([TriadSymbol, TriadSymbol], { error: 'A pair is two triad symbols, such as ["D", "C"]' });
+
+/** One chord of a progression: its symbol, its length in quarter notes, and a pair pinned to it. */
+export const ChordChange = z.object({
   chord: z
-    .string()
+    .string({ error: 'Name the chord, such as Dm7' })
     .trim()
+    .min(1, { error: 'Name the chord, such as Dm7' })
     .max(24, { error: 'That chord symbol is too long' })
     .refine((c) => chordTones(c).length > 0, {
-      error: 'That is not a chord symbol Sixfold can read (try D7, Bbm7, Cmaj7#11)',
-    })
-    .optional(),
+      error: (iss) => `"${String(iss.input)}" is not a chord symbol Sixfold can read (try Dm7, G7, Cmaj7)`,
+    }),
+  beats: z
+    .number({ error: 'A chord lasts a number of beats' })
+    .positive({ error: 'A chord lasts more than 0 beats' })
+    .max(64, { error: 'A chord lasts at most 64 beats' }),
+  pair: PairTuple.optional(),
 });
+export type ChordChange = z.infer<typeof ChordChange>;
+
+export const DrillSpec = z
+  .object({
+    pair: PairTuple.optional(),
+    changes: z
+      .array(ChordChange, { error: 'A progression is a list of chords' })
+      .min(1, { error: 'A progression needs at least one chord' })
+      .max(96, { error: 'A progression holds at most 96 chords' })
+      .optional(),
+    choruses: z
+      .number({ error: 'Choruses is a whole number' })
+      .int({ error: 'Choruses is a whole number' })
+      .min(1, { error: 'Play the progression at least once' })
+      .max(16, { error: 'Play the progression at most 16 times' })
+      .optional(),
+    pattern: z.union([PatternId, PatternDef], { error: 'Choose a preset pattern or define one' }),
+    direction: z.enum(['up', 'down', 'up-down'], { error: 'A drill goes up, down or up-down' }),
+    range: z
+      .object({ low: Midi, high: Midi })
+      .refine((r) => r.low <= r.high, { error: 'The low note must not be above the high note', path: ['low'] })
+      .optional(),
+    start: Midi.optional(),
+    instrument: InstrumentIdSchema.optional(),
+    tempo: z
+      .number({ error: 'The tempo is a number of beats per minute' })
+      .min(20, { error: 'The tempo is at least 20' })
+      .max(400, { error: 'The tempo is at most 400' })
+      .optional(),
+    meter: z
+      .tuple([z.number().int(), z.number().int()], { error: 'A meter is two numbers, such as [4, 4]' })
+      .refine((m) => METERS.some(([n, d]) => n === m[0] && d === m[1]), { error: 'Choose 4/4, 3/4, 5/4, 6/8 or 7/8' })
+      .optional(),
+    chord: z
+      .string()
+      .trim()
+      .max(24, { error: 'That chord symbol is too long' })
+      .refine((c) => chordTones(c).length > 0, {
+        error: 'That is not a chord symbol Sixfold can read (try D7, Bbm7, Cmaj7#11)',
+      })
+      .optional(),
+  })
+  .refine((s) => s.pair !== undefined || s.changes !== undefined, {
+    error: 'A drill needs a pair of two triads, such as ["D", "C"], or a progression of chords',
+    path: ['pair'],
+  });
 export type DrillSpec = z.infer<typeof DrillSpec>;
 /** The same schema under the name request bodies use (takes carry the spec they were played from). */
 export const DrillSpecInput = DrillSpec;
@@ -159,8 +195,9 @@ export function generateChecked(spec: DrillSpec): DrillResult {
     fields: { [field]: [err.message] },
     message: err.message,
   });
+  if (spec.changes) return generateProgression(spec as EngineDrillSpec, fail);
   try {
-    triadPair(spec.pair[0], spec.pair[1]);
+    if (spec.pair) triadPair(spec.pair[0], spec.pair[1]);
   } catch (err) {
     if (err instanceof EngineError) return fail('pair', err);
     throw err;
@@ -179,6 +216,32 @@ export function generateChecked(spec: DrillSpec): DrillResult {
     } catch {
       return fail('range', err);
     }
+  }
+}
+
+/**
+ * A progression drill, or the field to blame: the changes (a chord no pair fits, a length the
+ * pattern cannot fill, a pinned pair that shares a note), the start, or the range.
+ */
+function generateProgression(
+  spec: EngineDrillSpec,
+  fail: (field: string, err: EngineError) => DrillResult,
+): DrillResult {
+  try {
+    return { ok: true, drill: generateDrill(spec) };
+  } catch (err) {
+    if (!(err instanceof EngineError)) throw err;
+    if (/range|start/i.test(err.message)) {
+      if (spec.start === undefined) return fail('range', err);
+      const { start: _start, ...rest } = spec;
+      try {
+        generateDrill(rest);
+        return fail('start', err);
+      } catch {
+        return fail('range', err);
+      }
+    }
+    return fail('changes', err);
   }
 }
 

@@ -136,7 +136,12 @@ export async function seedDemoHistory(db: Db, now = new Date(), days = 42): Prom
     const cycles = habits.drills.map((d) => ({
       ...d,
       drills: inAllKeys(
-        { ...d.spec, pair: [...d.spec.pair], instrument: habits.instrument, range: habits.range },
+        {
+          ...d.spec,
+          pair: d.spec.pair && [d.spec.pair[0], d.spec.pair[1]],
+          instrument: habits.instrument,
+          range: habits.range,
+        },
         d.order,
       ),
     }));

@@ -1,6 +1,7 @@
 import { asc, eq, inArray } from 'drizzle-orm';
 import { presets } from '../../../shared/engine';
 import type { Book, BookAccess, BookDrill, BookDrillEntry } from '../../../shared/schemas/books';
+import { drillMaterial } from '../../../shared/practice/drill-identity';
 import type { DrillSpec } from '../../../shared/schemas/drills';
 import type { Db } from '../../db/client';
 import { type BookDrillRow, type BookRow, bookDrills, users } from '../../db/schema';
@@ -8,7 +9,7 @@ import { type BookDrillRow, type BookRow, bookDrills, users } from '../../db/sch
 /** "D / C over D7 · four-three": what a contents line says about a drill without giving it away. */
 export function drillSummary(spec: DrillSpec): string {
   const pattern = typeof spec.pattern === 'string' ? presets[spec.pattern].name : spec.pattern.name;
-  return `${spec.pair.join(' / ')}${spec.chord ? ` over ${spec.chord}` : ''} · ${pattern}`;
+  return `${drillMaterial(spec, ' / ')}${spec.chord ? ` over ${spec.chord}` : ''} · ${pattern}`;
 }
 
 export function presentEntry(row: BookDrillRow): BookDrillEntry {

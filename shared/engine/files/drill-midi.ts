@@ -8,7 +8,7 @@ const VELOCITY = 96;
 /**
  * A drill as a Standard MIDI File (format 1): a conductor track with tempo and meter, then a
  * track named "Drill" with the notes at concert pitch and the instrument's General MIDI program,
- * time 0 at the first downbeat.
+ * time 0 at the first downbeat; over a progression, a marker names each chord where it starts.
  *
  * @example
  * const bytes = drillToMidi(generateDrill({ pair: ['F', 'Eb'], pattern: 'weave', direction: 'up' }));
@@ -18,6 +18,10 @@ export function drillToMidi(drill: Drill): Uint8Array {
   const { tempo, meter, instrument } = drill.spec;
   const file = smfWith('Sixfold', tempo, meter);
   const ppq = file.header.ppq;
+  // a marker per chord of a progression, in the conductor track (Standard MIDI Files 1.0: FF 06)
+  for (const c of drill.changes ?? []) {
+    file.header.meta.push({ type: 'marker', text: c.chord, ticks: Math.round(c.startBeat * ppq) });
+  }
   const track = file.addTrack();
   track.name = 'Drill';
   track.channel = 0;

@@ -1,4 +1,5 @@
 import { CreateSavedDrillInput, type DrillSpec, type KeyOrder, type SavedDrill } from '@shared/schemas/drills';
+import { drillMaterial } from '@shared/practice/drill-identity';
 import { type FormEvent, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { Button } from '@/components/ui/button';
@@ -55,7 +56,7 @@ export function SavedDrillsPanel({
       <span className="flex-1">
         <span className="font-semibold">{d.name}</span>{' '}
         <span className="text-caption text-muted">
-          {d.spec.pair.join('/')} · {typeof d.spec.pattern === 'string' ? d.spec.pattern : d.spec.pattern.name}
+          {drillMaterial(d.spec)} · {typeof d.spec.pattern === 'string' ? d.spec.pattern : d.spec.pattern.name}
           {d.mine ? '' : ` · from ${d.owner.name}`}
         </span>
       </span>

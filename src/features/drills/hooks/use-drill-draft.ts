@@ -1,5 +1,5 @@
 import { type Drill, EngineError, inAllKeys, type InstrumentId, instruments } from '@shared/engine';
-import { DrillSpec, type FieldErrors, generateChecked, type KeyOrder } from '@shared/schemas/drills';
+import { type ChordChange, DrillSpec, type FieldErrors, generateChecked, type KeyOrder } from '@shared/schemas/drills';
 import { useMemo, useState } from 'react';
 import { fieldErrors } from '@/lib/field-errors';
 
@@ -14,6 +14,9 @@ export interface Draft {
   meter: [number, number];
   chord: string;
   order: KeyOrder;
+  /** a progression to play the pattern through (the pair then stands aside), or null */
+  changes: ChordChange[] | null;
+  choruses: number;
 }
 
 /** The demo world's first drill: D/C over D7, four-three, for alto sax. */
@@ -27,11 +30,13 @@ export const DEFAULT_DRAFT: Draft = {
   meter: [4, 4],
   chord: 'D7',
   order: 'chromatic',
+  changes: null,
+  choruses: 1,
 };
 
 export function draftFromSpec(spec: DrillSpec, order: KeyOrder): Draft {
   return {
-    pair: spec.pair,
+    pair: spec.pair ?? spec.changes?.find((c) => c.pair)?.pair ?? DEFAULT_DRAFT.pair,
     pattern: spec.pattern,
     direction: spec.direction,
     instrument: spec.instrument ?? 'piano',
@@ -40,12 +45,14 @@ export function draftFromSpec(spec: DrillSpec, order: KeyOrder): Draft {
     meter: spec.meter ?? [4, 4],
     chord: spec.chord ?? '',
     order,
+    changes: spec.changes ?? null,
+    choruses: spec.choruses ?? 1,
   };
 }
 
 export function specOf(d: Draft): DrillSpec {
   return {
-    pair: d.pair,
+    ...(d.changes ? { changes: d.changes, choruses: d.choruses } : { pair: d.pair }),
     pattern: d.pattern,
     direction: d.direction,
     instrument: d.instrument,
