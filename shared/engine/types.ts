@@ -30,7 +30,16 @@ export interface ChordFit {
   functions: string[];
   /** 1-based position, best first */
   rank: number;
+  /** found only through a scale that leaves out the dominant's perfect fifth */
+  altered: boolean;
+  /** the hexatonic notes as the chord spells them (its tones) or its scale does (the rest) */
+  notes: string[];
+  /** what each hexatonic note is to the chord, in hexatonic order */
+  roles: NoteRole[];
 }
+
+/** A chord tone, a tension (9, 11, 13 and their alterations), or another note over a triad or sus chord. */
+export type NoteRole = 'chord-tone' | 'tension' | 'other';
 
 export type PatternId =
   | 'stack'

@@ -10,6 +10,7 @@ export interface ChordFamily {
 
 export type FamilyId =
   | 'major'
+  | 'maj7#11'
   | 'maj7#5'
   | 'dominant'
   | '7sus4'
@@ -22,6 +23,7 @@ export type FamilyId =
 
 export const CHORD_FAMILIES: Record<FamilyId, ChordFamily> = {
   major: { name: 'major triad, 6, maj7, maj9', scales: ['major', 'lydian'] },
+  'maj7#11': { name: 'maj7#11', scales: ['lydian'] },
   'maj7#5': { name: 'maj7#5', scales: ['lydian augmented'] },
   dominant: {
     name: 'dominant (3 + b7)',
@@ -63,6 +65,7 @@ export function familyOf(has: (semitones: number) => boolean): FamilyId | null {
   if (maj3 && b7) return 'dominant';
   if (!maj3 && !has(3) && has(5)) return '7sus4';
   if (maj3 && sharp5) return maj7 ? 'maj7#5' : 'augmented';
+  if (maj3 && maj7 && has(6)) return 'maj7#11';
   if (maj3) return 'major';
   if (min3 && flat5) {
     if (b7) return 'half-diminished';
