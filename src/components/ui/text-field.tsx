@@ -16,7 +16,7 @@ export function TextField({ label, errors, hint, id, className = '', ...props }:
   const invalid = Boolean(errors && errors.length > 0);
   const describedBy = [hint ? hintId : null, invalid ? errorId : null].filter(Boolean).join(' ') || undefined;
   return (
-    <div className={`grid gap-1 ${className}`}>
+    <div className={`grid min-w-0 gap-1 ${className}`}>
       <label htmlFor={inputId} className="text-body font-semibold">
         {label}
       </label>
@@ -24,7 +24,7 @@ export function TextField({ label, errors, hint, id, className = '', ...props }:
         id={inputId}
         aria-invalid={invalid || undefined}
         aria-describedby={describedBy}
-        className={`rounded-lg border bg-raised px-3 py-2 text-body text-text ${invalid ? 'border-ember-500' : 'border-line focus:border-ink-500'}`}
+        className={`w-full min-w-0 rounded-lg border bg-raised px-3 py-2 text-body text-text ${invalid ? 'border-ember-500' : 'border-line focus:border-ink-500'}`}
         {...props}
       />
       {hint && !invalid ? (

@@ -1,4 +1,7 @@
 import type { Role } from '@shared/schemas/auth';
+import { useState } from 'react';
+import { ConfirmDialog } from '@/components/ui/confirm-dialog';
+import { TableScroll } from '@/components/ui/table-scroll';
 import { useMe } from '@/features/auth/api/session';
 import { useAdminUsers, useUpdateAdminUser } from '../api/users';
 
@@ -11,21 +14,43 @@ export function UsersTable() {
   const { data, isPending, error } = useAdminUsers();
   const update = useUpdateAdminUser();
   const { user: me } = useMe();
+  const [pending, setPending] = useState<{ id: string; name: string; from: Role; to: Role } | null>(null);
   if (isPending) return <p className="text-muted">Loading accounts…</p>;
   if (error)
     return (
-      <p role="alert" className="text-ember-700">
+      <p role="alert" className="text-ember-700 dark:text-ember-100">
         {error.message}
       </p>
     );
   return (
     <div className="grid gap-2">
       {update.error ? (
-        <p role="alert" className="text-ember-700">
+        <p role="alert" className="text-ember-700 dark:text-ember-100">
           {update.error.message}
         </p>
       ) : null}
-      <div className="relative overflow-x-auto rounded-card border border-line bg-raised">
+      <ConfirmDialog
+        open={pending !== null}
+        title={pending ? `Make ${pending.name} ${pending.to === 'admin' ? 'an' : 'a'} ${pending.to}?` : ''}
+        confirmLabel="Change the role"
+        cancelLabel={pending ? `Keep ${pending.from}` : 'Cancel'}
+        onCancel={() => setPending(null)}
+        onConfirm={() => {
+          if (pending) update.mutate({ id: pending.id, role: pending.to });
+          setPending(null);
+        }}
+      >
+        {pending
+          ? `${pending.name} is ${pending.from === 'admin' ? 'an' : 'a'} ${pending.from} now. ${
+              pending.to === 'admin'
+                ? 'An admin can change every account on this Sixfold.'
+                : pending.to === 'teacher'
+                  ? 'A teacher can run studios and set assignments.'
+                  : 'A player practises and keeps their own takes.'
+            } The change is written to the audit log.`
+          : null}
+      </ConfirmDialog>
+      <TableScroll label="Accounts, scrolls sideways">
         <table className="w-full text-left text-body">
           <caption className="sr-only">Accounts</caption>
           <thead className="border-b border-line text-caption uppercase tracking-wider text-muted">
@@ -61,9 +86,9 @@ export function UsersTable() {
                   ) : (
                     <select
                       aria-label={`Role of ${u.name}`}
-                      value={u.role}
+                      value={pending?.id === u.id ? pending.to : u.role}
                       disabled={update.isPending}
-                      onChange={(e) => update.mutate({ id: u.id, role: e.target.value as Role })}
+                      onChange={(e) => setPending({ id: u.id, name: u.name, from: u.role, to: e.target.value as Role })}
                       className="rounded-lg border border-line bg-raised px-2 py-1 capitalize"
                     >
                       {ROLES.map((r) => (
@@ -98,7 +123,7 @@ export function UsersTable() {
             ))}
           </tbody>
         </table>
-      </div>
+      </TableScroll>
     </div>
   );
 }

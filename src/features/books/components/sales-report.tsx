@@ -2,7 +2,18 @@ import { formatPrice } from '@shared/schemas/books';
 import { Bar, BarChart, CartesianGrid, Legend, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import { useSales } from '../api/books';
 
-const BAR_COLOURS = ['#22365b', '#d99a1e', '#2f9e5e', '#6b4fc2', '#d2492a'];
+/** Mid-tone colours that read on the light and the dark page alike. */
+const BAR_COLOURS = ['#3b6fd8', '#d99a1e', '#2f9e5e', '#8a6fe0', '#e0603e'];
+const DAYS_SHOWN = 90;
+const DAY_MS = 86_400_000;
+
+/** Every day of the last 90, oldest first (UTC dates, as the sales are counted). */
+function lastDays(now = Date.now()): string[] {
+  const today = Date.parse(`${new Date(now).toISOString().slice(0, 10)}T00:00:00Z`);
+  return Array.from({ length: DAYS_SHOWN }, (_, i) =>
+    new Date(today - (DAYS_SHOWN - 1 - i) * DAY_MS).toISOString().slice(0, 10),
+  );
+}
 
 /** Sales per book (table) and books sold per day (chart, with its figures as a table too). */
 export function SalesReport() {
@@ -11,14 +22,16 @@ export function SalesReport() {
   if (error) return <p role="alert">{error.message}</p>;
   if (data.books.length === 0) return <p className="text-muted">No books yet.</p>;
   const titles = new Map(data.books.map((b) => [b.id, b.title]));
-  const byDay = new Map<string, Record<string, number | string>>();
-  for (const d of data.days) {
-    const row = byDay.get(d.day) ?? { day: d.day };
-    row[d.bookId] = d.sales;
-    byDay.set(d.day, row);
-  }
-  const series = [...byDay.values()];
   const sold = data.books.filter((b) => data.days.some((d) => d.bookId === b.id));
+  // One slot per day, days without sales at zero, so each bar is one day wide.
+  const byDay = new Map<string, Record<string, number | string>>(
+    lastDays().map((day) => [day, Object.fromEntries([['day', day], ...sold.map((b) => [b.id, 0])])]),
+  );
+  for (const d of data.days) {
+    const row = byDay.get(d.day);
+    if (row) row[d.bookId] = d.sales;
+  }
+  const series = data.days.length > 0 ? [...byDay.values()] : [];
   return (
     <div className="grid gap-6">
       <div className="overflow-x-auto rounded-card border border-line bg-raised">
@@ -65,13 +78,20 @@ export function SalesReport() {
           <p className="text-muted">No sales yet.</p>
         ) : (
           <>
-            <div className="h-64 w-full" aria-hidden="true">
+            <div className="h-64 w-full text-ink-700 dark:text-ink-100" aria-hidden="true" data-testid="sales-chart">
               <ResponsiveContainer width="100%" height="100%">
-                <BarChart data={series} margin={{ top: 8, right: 16, bottom: 8, left: 0 }}>
-                  <CartesianGrid strokeDasharray="3 3" opacity={0.4} />
-                  <XAxis dataKey="day" tick={{ fontSize: 11 }} />
-                  <YAxis allowDecimals={false} tick={{ fontSize: 11 }} />
-                  <Tooltip />
+                <BarChart data={series} margin={{ top: 8, right: 16, bottom: 8, left: 0 }} barCategoryGap={1}>
+                  <CartesianGrid strokeDasharray="3 3" opacity={0.4} vertical={false} />
+                  <XAxis dataKey="day" tick={{ fontSize: 11, fill: 'currentColor' }} minTickGap={24} />
+                  <YAxis allowDecimals={false} tick={{ fontSize: 11, fill: 'currentColor' }} width={32} />
+                  <Tooltip
+                    cursor={{ fill: 'rgb(var(--sf-line))', opacity: 0.4 }}
+                    contentStyle={{
+                      background: 'rgb(var(--sf-raised))',
+                      borderColor: 'rgb(var(--sf-line))',
+                      color: 'rgb(var(--sf-text))',
+                    }}
+                  />
                   <Legend />
                   {sold.map((b, i) => (
                     <Bar
@@ -80,6 +100,7 @@ export function SalesReport() {
                       name={titles.get(b.id)}
                       stackId="sold"
                       fill={BAR_COLOURS[i % BAR_COLOURS.length]}
+                      maxBarSize={12}
                     />
                   ))}
                 </BarChart>
