@@ -29,6 +29,15 @@ export const ScoreOptionsInput = z.object({
   inputTransposition: z.number().int().min(-48).max(48).optional(),
 });
 
+/**
+ * What a take was played on: a MIDI device, the on-screen or computer keyboard, an acoustic
+ * instrument through the microphone, or a MIDI file imported afterwards.
+ */
+export const InputKind = z.enum(['midi', 'keyboard', 'microphone', 'file'], {
+  error: 'inputKind is midi, keyboard, microphone or file',
+});
+export type InputKind = z.infer<typeof InputKind>;
+
 export const CreateTakeInput = z
   .object({
     id: z.uuid({ error: 'id must be a UUID made by the client' }),
@@ -45,6 +54,7 @@ export const CreateTakeInput = z
       .nullable(),
     stoppedAtMs: z.number().finite().min(0).optional().nullable(),
     assignmentId: z.uuid().optional().nullable(),
+    inputKind: InputKind.optional().nullable(),
   })
   .strict();
 export type CreateTakeInput = z.infer<typeof CreateTakeInput>;

@@ -1,5 +1,6 @@
 import { index, integer, jsonb, pgTable, real, smallint, text, timestamp, uuid } from 'drizzle-orm/pg-core';
 import type { DrillSpec, PlayedNote, ScoreOptions, TakeScore } from '../../../shared/engine/types';
+import type { InputKind } from '../../../shared/schemas/takes';
 import { users } from './users';
 
 /**
@@ -19,6 +20,8 @@ export const takes = pgTable(
     measureFrom: smallint('measure_from'),
     measureTo: smallint('measure_to'),
     stoppedAtMs: real('stopped_at_ms'),
+    /** what the take was played on (null: takes from before it was recorded) */
+    inputKind: text('input_kind').$type<InputKind>(),
     played: jsonb('played').$type<PlayedNote[]>().notNull(),
     score: jsonb('score').$type<TakeScore>().notNull(),
     // Denormalised from spec and score for the history table and the maps.

@@ -1,0 +1,1 @@
+ALTER TABLE "takes" ADD COLUMN "input_kind" text;
