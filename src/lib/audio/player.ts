@@ -1,6 +1,6 @@
 import type { Drill } from '@shared/engine';
 import type * as ToneNs from 'tone';
-import { type AudioEvent, type ScheduleOptions, scheduleDrill } from './schedule';
+import { type AudioEvent, type Schedule, type ScheduleOptions, scheduleDrill } from './schedule';
 import { encodeWav } from './wav';
 
 type Tone = typeof ToneNs;
@@ -79,6 +79,33 @@ export async function playDrill(
     opts.onEnd?.();
   };
   transport.schedule(() => draw.schedule(stop, Tone.now()), end + 0.3);
+  transport.start('+0.05', 0);
+  return { stop };
+}
+
+/**
+ * Plays sounds already scheduled (a pair's scale over its chord, say) at once, stopping whatever
+ * the Transport was playing; `onEnd` is called when it is over or stopped.
+ */
+export async function playSchedule(schedule: Schedule, opts: { onEnd?: () => void } = {}): Promise<Playback> {
+  const Tone = await loadTone();
+  await Tone.start();
+  const transport = Tone.getTransport();
+  transport.stop();
+  transport.cancel(0);
+  const voices = makeVoices(Tone);
+  for (const e of schedule.events) transport.schedule((time) => voices.play(e, time), e.time);
+  const draw = Tone.getDraw();
+  let stopped = false;
+  const stop = () => {
+    if (stopped) return;
+    stopped = true;
+    transport.stop();
+    transport.cancel(0);
+    setTimeout(() => voices.dispose(), 500);
+    opts.onEnd?.();
+  };
+  transport.schedule(() => draw.schedule(stop, Tone.now()), schedule.end);
   transport.start('+0.05', 0);
   return { stop };
 }

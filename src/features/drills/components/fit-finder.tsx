@@ -1,6 +1,7 @@
-import { type ChordFit, EngineError, pairsForChord } from '@shared/engine';
-import { type FormEvent, useId, useMemo, useState } from 'react';
+import { type ChordFit, EngineError, type NoteRole, pairsForChord } from '@shared/engine';
+import { type FormEvent, useEffect, useId, useMemo, useRef, useState } from 'react';
 import { Button } from '@/components/ui/button';
+import type { Playback } from '@/lib/audio/player';
 
 type Found = { chord: string; fits: ChordFit[]; error: null } | { chord: string; fits: []; error: string };
 
@@ -13,11 +14,48 @@ function find(chord: string): Found {
   }
 }
 
+/** Tone.js and the scheduler load only when a scale is first heard. */
+const audio = () => Promise.all([import('@/lib/audio/player'), import('@/lib/audio/scale-preview')]);
+
 const SHOWN = 8;
+const pairName = (fit: ChordFit) => `${fit.pair.a.symbol} / ${fit.pair.b.symbol}`;
+
+const ROLE_LABEL: Record<NoteRole, string> = {
+  'chord-tone': 'Chord tones',
+  tension: 'Tensions',
+  other: 'Other notes',
+};
+const ROLE_STYLE: Record<NoteRole, string> = {
+  'chord-tone': 'border-ink-300 bg-raised font-semibold',
+  tension: 'border-dashed border-brass-500',
+  other: 'border-line text-muted',
+};
+
+/** The pair's notes in the chord's spelling, chord tones apart from tensions. */
+function NoteRoles({ fit }: { fit: ChordFit }) {
+  const groups = (['chord-tone', 'tension', 'other'] as const)
+    .map((role) => ({ role, idx: fit.roles.flatMap((r, i) => (r === role ? [i] : [])) }))
+    .filter((g) => g.idx.length > 0);
+  return (
+    <span className="order-last grid basis-full gap-1" data-testid="fit-notes">
+      {groups.map(({ role, idx }) => (
+        <span key={role} className="flex flex-wrap items-center gap-1" data-role={role}>
+          <span className="w-24 text-caption text-muted">{ROLE_LABEL[role]}</span>
+          {idx.map((i) => (
+            <span key={fit.notes[i]} className={`rounded border px-1.5 text-caption ${ROLE_STYLE[role]}`}>
+              {fit.notes[i]} <span className="font-bold">{fit.functions[i]}</span>
+            </span>
+          ))}
+        </span>
+      ))}
+    </span>
+  );
+}
 
 /**
  * The fit finder: a chord symbol in, the pairs whose six notes fit it out, best first, with
- * each note's function against the chord.
+ * each note named against the chord, the altered sounds marked (and hideable), and the pair's
+ * six-note scale to hear over the chord.
  */
 export function FitFinder({
   initialChord,
@@ -29,9 +67,16 @@ export function FitFinder({
   const [text, setText] = useState(initialChord);
   const [asked, setAsked] = useState<string | null>(null);
   const [all, setAll] = useState(false);
+  const [showAltered, setShowAltered] = useState(true);
+  const [hearing, setHearing] = useState<string | null>(null);
+  const [audioError, setAudioError] = useState<string | null>(null);
+  const playback = useRef<Playback | null>(null);
   const found = useMemo(() => (asked ? find(asked) : null), [asked]);
   const inputId = useId();
   const errorId = `${inputId}-error`;
+  const alteredId = useId();
+
+  useEffect(() => () => playback.current?.stop(), []);
 
   function submit(e: FormEvent) {
     e.preventDefault();
@@ -39,8 +84,30 @@ export function FitFinder({
     setAsked(text.trim() || ' ');
   }
 
+  async function hear(fit: ChordFit, chord: string) {
+    const key = pairName(fit);
+    const wasHearing = hearing;
+    playback.current?.stop();
+    playback.current = null;
+    if (wasHearing === key) return;
+    setAudioError(null);
+    setHearing(key);
+    try {
+      const [{ playSchedule }, { scheduleScalePreview }] = await audio();
+      const mine = await playSchedule(scheduleScalePreview(fit.notes, chord), {
+        onEnd: () => setHearing((now) => (now === key ? null : now)),
+      });
+      playback.current = mine;
+    } catch {
+      setAudioError('This browser could not start audio; check that sound is allowed for this page.');
+      setHearing(null);
+    }
+  }
+
   const fits = found?.fits ?? [];
-  const shown = all ? fits : fits.slice(0, SHOWN);
+  const alteredCount = fits.filter((f) => f.altered).length;
+  const listed = showAltered ? fits : fits.filter((f) => !f.altered);
+  const shown = all ? listed : listed.slice(0, SHOWN);
   return (
     <section aria-labelledby="fit-finder-heading" className="grid gap-3">
       <h2 id="fit-finder-heading" className="text-lead font-bold">
@@ -55,7 +122,7 @@ export function FitFinder({
             id={inputId}
             value={text}
             onChange={(e) => setText(e.target.value)}
-            placeholder="D7, Bbm7, Cmaj7#11 …"
+            placeholder="D7, Bbm7, Cmaj7#11, G7alt …"
             autoComplete="off"
             spellCheck={false}
             aria-invalid={found?.error ? true : undefined}
@@ -73,42 +140,75 @@ export function FitFinder({
       {found && !found.error ? (
         <div className="grid gap-2">
           <p className="text-caption text-muted" role="status">
-            {fits.length} pairs fit {found.chord}, best first: those holding its third and seventh lead.
+            {listed.length} pairs fit {found.chord}
+            {listed.length < fits.length ? ` (${fits.length - listed.length} altered hidden)` : ''}, best first: the
+            tensions the chord names, two major triads a whole step apart, then its third and seventh.
           </p>
+          {alteredCount > 0 ? (
+            <label htmlFor={alteredId} className="flex items-center gap-2 text-body">
+              <input
+                id={alteredId}
+                type="checkbox"
+                checked={showAltered}
+                onChange={(e) => {
+                  setShowAltered(e.target.checked);
+                  setAll(false);
+                }}
+              />
+              Show altered pairs ({alteredCount}): their scale leaves out the chord's fifth
+            </label>
+          ) : null}
+          <p className="text-caption text-muted">
+            Hear plays the pair's six-note scale over the chord; keep headphones at a moderate volume.
+          </p>
+          {audioError ? (
+            <p role="alert" className="text-caption font-semibold text-ember-700 dark:text-ember-100">
+              {audioError}
+            </p>
+          ) : null}
           <ol className="grid gap-2" aria-label={`Pairs for ${found.chord}`}>
             {shown.map((fit) => (
               <li
-                key={`${fit.pair.a.symbol}/${fit.pair.b.symbol}`}
+                key={pairName(fit)}
                 className="flex flex-wrap items-center gap-x-3 gap-y-2 rounded-lg border border-line bg-surface p-3"
                 data-testid="fit"
+                data-altered={fit.altered ? 'true' : undefined}
               >
                 <span className="w-6 text-caption font-bold text-muted">{fit.rank}</span>
                 <span className="min-w-24 font-bold">
                   <span className="text-dusk-700 dark:text-dusk-100">{fit.pair.a.symbol}</span> /{' '}
                   <span className="text-brass-700 dark:text-brass-300">{fit.pair.b.symbol}</span>
                 </span>
-                <span className="flex-1 text-caption text-muted">{fit.scale}</span>
-                <span className="order-last flex basis-full flex-wrap gap-1">
-                  <span className="sr-only">Notes and their functions: </span>
-                  {fit.pair.hexatonic.map((pc, i) => (
-                    <span key={pc} className="rounded border border-line px-1.5 text-caption">
-                      {pc} <span className="font-bold">{fit.functions[i]}</span>
+                <span className="flex-1 text-caption text-muted">
+                  {fit.scale}
+                  {fit.altered ? (
+                    <span
+                      className="ml-2 rounded border border-dusk-500 px-1.5 font-semibold text-dusk-700 dark:text-dusk-100"
+                      data-testid="altered-mark"
+                      title="Altered: this pair's scale leaves out the chord's fifth"
+                    >
+                      altered, no 5th
                     </span>
-                  ))}
+                  ) : null}
                 </span>
+                <NoteRoles fit={fit} />
                 <Button
                   variant="quiet"
-                  onClick={() => onPick(fit, found.chord)}
-                  aria-label={`Use ${fit.pair.a.symbol} / ${fit.pair.b.symbol}`}
+                  onClick={() => hear(fit, found.chord)}
+                  aria-label={`${hearing === pairName(fit) ? 'Stop' : 'Hear'} the scale of ${pairName(fit)} over ${found.chord}`}
+                  aria-pressed={hearing === pairName(fit)}
                 >
+                  {hearing === pairName(fit) ? 'Stop' : 'Hear'}
+                </Button>
+                <Button variant="quiet" onClick={() => onPick(fit, found.chord)} aria-label={`Use ${pairName(fit)}`}>
                   Use this pair
                 </Button>
               </li>
             ))}
           </ol>
-          {fits.length > SHOWN ? (
+          {listed.length > SHOWN ? (
             <Button variant="quiet" onClick={() => setAll(!all)} className="justify-self-start">
-              {all ? `Show the first ${SHOWN}` : `Show all ${fits.length}`}
+              {all ? `Show the first ${SHOWN}` : `Show all ${listed.length}`}
             </Button>
           ) : null}
         </div>
