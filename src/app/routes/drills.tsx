@@ -15,6 +15,7 @@ import { KeyCycleNav } from '@/features/drills/components/key-cycle-nav';
 import { PatternForm } from '@/features/drills/components/pattern-form';
 import { RangeView } from '@/features/drills/components/range-view';
 import { SavedDrillsPanel } from '@/features/drills/components/saved-drills-panel';
+import { ProgressionEditor, progressionTitle } from '@/features/drills/components/progression-editor';
 import { pairTitle } from '@/features/drills/components/written-pair';
 import { specFromParams, specToParams } from '@/features/drills/hooks/spec-params';
 import { DEFAULT_DRAFT, draftFromSpec, useDrillDraft } from '@/features/drills/hooks/use-drill-draft';
@@ -79,6 +80,8 @@ export function DrillsRoute() {
         <DrillSettings draft={draft} update={update} fields={fields} savedPatterns={patterns.data?.patterns ?? []} />
       </div>
 
+      <ProgressionEditor draft={draft} update={update} drill={cycle[0]} fields={fields} />
+
       {customDef ? (
         <PatternForm
           def={customDef}
@@ -105,7 +108,9 @@ export function DrillsRoute() {
       >
         <div className="flex flex-wrap items-baseline justify-between gap-2">
           <h2 id="notation-heading" className="text-lead font-bold" data-testid="drill-title">
-            {drill ? `Key ${index + 1} of ${cycle.length}: ${pairTitle(drill)}` : 'No drill yet'}
+            {drill
+              ? `Key ${index + 1} of ${cycle.length}: ${drill.changes ? progressionTitle(drill) : pairTitle(drill)}`
+              : 'No drill yet'}
           </h2>
           <p className="text-caption text-muted">{instruments[draft.instrument].label}, written pitch</p>
         </div>

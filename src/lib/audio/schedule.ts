@@ -11,7 +11,7 @@ export type AudioEvent =
 export interface ScheduleOptions {
   /** a click on every beat of the meter (default on) */
   click?: boolean;
-  /** the spec's chord held under each measure (default off; nothing when the drill has no chord) */
+  /** the spec's chord held under each measure, or each chord of a progression for its beats (default off) */
   pad?: boolean;
   /** measures of clicks before the first downbeat (default 1) */
   countInMeasures?: number;
@@ -66,7 +66,20 @@ export function scheduleDrill(drill: Drill, opts: ScheduleOptions = {}): Schedul
       events.push({ kind: 'click', time, accent: b === 0, countIn: m < countIn });
     }
   }
-  const voicing = opts.pad && chord ? padVoicing(chord) : [];
+  // over a progression the pad follows the changes: each chord held for its own beats
+  if (opts.pad && drill.changes) {
+    for (const c of drill.changes) {
+      const midis = padVoicing(c.chord);
+      if (midis.length === 0) continue;
+      events.push({
+        kind: 'pad',
+        time: downbeat + c.startBeat * secPerQuarter,
+        duration: c.beats * secPerQuarter * 0.95,
+        midis,
+      });
+    }
+  }
+  const voicing = opts.pad && chord && !drill.changes ? padVoicing(chord) : [];
   if (voicing.length > 0) {
     for (let m = 0; m < drill.measures; m++) {
       events.push({

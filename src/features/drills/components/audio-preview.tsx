@@ -12,7 +12,8 @@ const player = () => import('@/lib/audio/player');
  */
 export function AudioPreview({ drill, onNote }: { drill: Drill; onNote: (index: number | null) => void }) {
   const [click, setClick] = useState(true);
-  const [pad, setPad] = useState(Boolean(drill.spec.chord));
+  const hasChords = Boolean(drill.spec.chord || drill.changes);
+  const [pad, setPad] = useState(hasChords);
   const [state, setState] = useState<'idle' | 'loading' | 'playing' | 'rendering'>('idle');
   const [error, setError] = useState<string | null>(null);
   const playback = useRef<Playback | null>(null);
@@ -100,9 +101,10 @@ export function AudioPreview({ drill, onNote }: { drill: Drill; onNote: (index: 
             type="checkbox"
             checked={pad}
             onChange={(e) => setPad(e.target.checked)}
-            disabled={!drill.spec.chord || state === 'playing'}
+            disabled={!hasChords || state === 'playing'}
           />
-          Chord pad{drill.spec.chord ? ` (${drill.spec.chord})` : ' (no chord set)'}
+          Chord pad
+          {drill.changes ? ' (follows the changes)' : drill.spec.chord ? ` (${drill.spec.chord})` : ' (no chord set)'}
         </label>
         <Button variant="quiet" onClick={renderWav} disabled={state !== 'idle'}>
           {state === 'rendering' ? 'Rendering…' : 'Audio (WAV)'}

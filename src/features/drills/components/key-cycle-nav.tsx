@@ -1,6 +1,9 @@
 import type { Drill } from '@shared/engine';
 import { Button } from '@/components/ui/button';
 
+/** A key's name: its pair, or over a progression its first chord. */
+const keyName = (d: Drill, separator = '/') => d.changes?.[0]?.chord ?? d.spec.pair.join(separator);
+
 /** The 12 keys of the cycle, in the chosen order; one is shown at a time. */
 export function KeyCycleNav({
   cycle,
@@ -23,15 +26,15 @@ export function KeyCycleNav({
       </Button>
       <ol className="flex flex-wrap gap-1">
         {cycle.map((d, i) => (
-          <li key={`${d.spec.pair.join('/')}-${i}`}>
+          <li key={`${keyName(d)}-${i}`}>
             <button
               type="button"
               onClick={() => onChange(i)}
               aria-current={i === index ? 'true' : undefined}
-              aria-label={`Key ${i + 1} of ${cycle.length}: ${d.spec.pair.join(' / ')}`}
+              aria-label={`Key ${i + 1} of ${cycle.length}: ${keyName(d, ' / ')}`}
               className={`rounded-md border px-2 py-1 text-caption font-semibold ${i === index ? 'border-ink-800 bg-ink-800 text-white dark:border-brass-300 dark:bg-brass-300 dark:text-ink-950' : 'border-line bg-raised text-text hover:border-ink-300'}`}
             >
-              {d.spec.pair.join('/')}
+              {keyName(d)}
             </button>
           </li>
         ))}
