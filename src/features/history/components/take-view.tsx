@@ -2,18 +2,30 @@ import { generateDrill, sliceDrill } from '@shared/engine';
 import { useMemo, useRef, useState } from 'react';
 import { useNavigate } from 'react-router-dom';
 import { DrillStaff } from '@/components/notation/drill-staff';
+import { noteOf } from '@/components/review/note-of';
+import { readNotes } from '@/components/review/note-readings';
+import { NoteStrip } from '@/components/review/note-strip';
+import { SlipList } from '@/components/review/slip-list';
 import { Button } from '@/components/ui/button';
 import { useMe } from '@/features/auth/api/session';
 import type { Playback } from '@/lib/audio/player';
 import { takeMidiUrl, useDeleteTake, useTake } from '../api/takes';
 
 /** A stored take: its score on the notation (missed and wrong notes marked), replay, MIDI, delete. */
+const PLAYED_ON = {
+  midi: 'MIDI device',
+  keyboard: 'on-screen or computer keyboard',
+  microphone: 'microphone',
+  file: 'imported MIDI file',
+} as const;
+
 export function TakeView({ id }: { id: string }) {
   const { data, error } = useTake(id);
   const { user } = useMe();
   const remove = useDeleteTake();
   const navigate = useNavigate();
   const [current, setCurrent] = useState<number | null>(null);
+  const [chosen, setChosen] = useState<number | null>(null);
   const playback = useRef<Playback | null>(null);
   const take = data?.take;
   const drill = useMemo(() => {
@@ -21,6 +33,7 @@ export function TakeView({ id }: { id: string }) {
     const full = generateDrill(take.spec);
     return take.measures ? sliceDrill(full, take.measures[0], take.measures[1]) : full;
   }, [take]);
+  const readings = useMemo(() => (take && drill ? readNotes(drill, take) : []), [take, drill]);
   const marks = useMemo(() => new Map((take?.score.results ?? []).map((r, i) => [i, `sf-mark-${r.verdict}`])), [take]);
   if (error) return <p role="alert">{error.message}</p>;
   if (!take || !drill) return <p className="text-muted">Loading the take…</p>;
@@ -45,6 +58,7 @@ export function TakeView({ id }: { id: string }) {
           ['Tempo', `${take.tempo} bpm`],
           ['Accuracy', `${Math.round(take.accuracy * 100)}%`],
           ['Mean offset', take.meanOffsetMs === null ? '—' : `${Math.round(take.meanOffsetMs)} ms`],
+          ...(take.inputKind ? [['Played on', PLAYED_ON[take.inputKind]]] : []),
         ].map(([k, v]) => (
           <div key={k}>
             <dt className="text-caption text-muted">{k}</dt>
@@ -56,12 +70,15 @@ export function TakeView({ id }: { id: string }) {
         {(['hit', 'early', 'late', 'wrong', 'missed'] as const).map((v) => `${counts[v] ?? 0} ${v}`).join(' · ')}
         {take.stoppedAtMs !== null ? ' · stopped early: later notes not scored' : ''}
       </p>
-      <DrillStaff
-        drill={drill}
-        marks={marks}
-        current={current}
-        label={`The take's drill, ${counts.missed ?? 0} missed and ${counts.wrong ?? 0} wrong notes marked`}
-      />
+      {/* biome-ignore lint/a11y/useKeyWithClickEvents lint/a11y/noStaticElementInteractions: the note strip is the keyboard route to the same choice */}
+      <div onClick={(e) => noteOf(e.target, setChosen)} className="cursor-pointer" data-testid="review-staff">
+        <DrillStaff
+          drill={drill}
+          marks={marks}
+          current={current ?? chosen}
+          label={`The take's drill, ${counts.missed ?? 0} missed and ${counts.wrong ?? 0} wrong notes marked; the chosen note is lit`}
+        />
+      </div>
       <div className="flex flex-wrap gap-2">
         <Button onClick={() => void replay()}>Replay the drill</Button>
         {current !== null ? (
@@ -90,6 +107,15 @@ export function TakeView({ id }: { id: string }) {
         ) : null}
       </div>
       {remove.error ? <p role="alert">{remove.error.message}</p> : null}
+      <NoteStrip readings={readings} selected={chosen} onSelect={setChosen} />
+      <SlipList
+        readings={readings}
+        extras={take.score.extras.length}
+        meanOffsetMs={take.meanOffsetMs}
+        selected={chosen}
+        onSelect={setChosen}
+        actionLabel="Light it on the staff"
+      />
     </div>
   );
 }

@@ -44,11 +44,14 @@ export function RemarkThread({
   remarks,
   notes,
   canAnswer,
+  highlight,
 }: {
   takeId: string;
   remarks: Remark[];
   notes: DrillNote[];
   canAnswer: boolean;
+  /** the note chosen on the page: its remarks are marked */
+  highlight?: number | null;
 }) {
   const top = remarks.filter((r) => !r.parentId);
   if (top.length === 0) return <p className="text-muted">No remarks on this take yet.</p>;
@@ -57,7 +60,11 @@ export function RemarkThread({
       {top.map((r) => (
         <li
           key={r.id}
-          className="rounded-card border border-line bg-raised p-4"
+          className={`rounded-card border bg-raised p-4 ${
+            highlight !== null && highlight !== undefined && r.noteIndex === highlight
+              ? 'border-dusk-500 ring-2 ring-dusk-500/40'
+              : 'border-line'
+          }`}
           data-note-index={r.noteIndex ?? undefined}
         >
           <p className="text-caption text-muted">

@@ -1,6 +1,10 @@
 import { type Drill, generateDrill, sliceDrill } from '@shared/engine';
 import { type FormEvent, useMemo, useState } from 'react';
 import { DrillStaff, type NoteMarks } from '@/components/notation/drill-staff';
+import { noteOf } from '@/components/review/note-of';
+import { readNotes } from '@/components/review/note-readings';
+import { NoteStrip } from '@/components/review/note-strip';
+import { SlipList } from '@/components/review/slip-list';
 import { Button } from '@/components/ui/button';
 import { FormMessage } from '@/components/ui/form-message';
 import { SelectField } from '@/components/ui/select-field';
@@ -23,11 +27,19 @@ function drillOf(take: ReviewTake): Drill | null {
   }
 }
 
-function RemarkForm({ take, drill }: { take: ReviewTake; drill: Drill }) {
+function RemarkForm({
+  take,
+  drill,
+  pin,
+  setPin,
+}: {
+  take: ReviewTake;
+  drill: Drill;
+  pin: string;
+  setPin: (pin: string) => void;
+}) {
   const create = useCreateRemark(take.id);
   const [body, setBody] = useState('');
-  const firstMiss = take.score.results.findIndex((r) => r.verdict !== 'hit');
-  const [pin, setPin] = useState(firstMiss >= 0 ? String(firstMiss) : '');
   const options = [
     { value: '', label: 'Not pinned: the whole take' },
     ...take.score.results.map((r, i) => ({ value: String(i), label: `${noteLabel(drill.notes, i)}: ${r.verdict}` })),
@@ -40,7 +52,8 @@ function RemarkForm({ take, drill }: { take: ReviewTake; drill: Drill }) {
   return (
     <form onSubmit={onSubmit} className="grid gap-3" aria-label="Leave a remark">
       <SelectField
-        label="Pin to a note"
+        id="sf-pin-note"
+        label="Pin to a note (or choose one above)"
         value={pin}
         onChange={(e) => setPin(e.target.value)}
         options={options}
@@ -49,6 +62,7 @@ function RemarkForm({ take, drill }: { take: ReviewTake; drill: Drill }) {
       <label className="grid gap-1 font-semibold">
         Remark
         <textarea
+          id="sf-remark-body"
           value={body}
           onChange={(e) => setBody(e.target.value)}
           rows={3}
@@ -78,6 +92,12 @@ export function TakeReview({ takeId, viewerId }: { takeId: string; viewerId: str
   const take = data?.take;
   const drill = useMemo(() => (take ? drillOf(take) : null), [take]);
   const replay = useTakeReplay(drill, take?.played ?? []);
+  const readings = useMemo(() => (take && drill ? readNotes(drill, take) : []), [take, drill]);
+  const [chosen, setChosen] = useState<number | null | undefined>(undefined);
+  const pinnedNotes = useMemo(
+    () => new Set((remarks.data?.remarks ?? []).flatMap((r) => (r.noteIndex === null ? [] : [r.noteIndex]))),
+    [remarks.data],
+  );
   const marks: NoteMarks = useMemo(() => {
     const m = new Map<number, string>();
     for (const [i, r] of (take?.score.results ?? []).entries()) m.set(i, `sf-mark-${r.verdict}`);
@@ -90,6 +110,10 @@ export function TakeReview({ takeId, viewerId }: { takeId: string; viewerId: str
   if (error) return <FormMessage tone="error">{error.message}</FormMessage>;
   if (!take) return null;
   const mine = take.playerId === viewerId;
+  // Until someone chooses, the teacher's remark is pinned to the first slip.
+  const firstSlip = readings.find((r) => r.verdict !== 'hit')?.index ?? null;
+  const selected = chosen === undefined ? (mine ? null : firstSlip) : chosen;
+  const choose = (i: number) => setChosen(i);
   const counts: Record<string, number> = {};
   for (const r of take.score.results) counts[r.verdict] = (counts[r.verdict] ?? 0) + 1;
   return (
@@ -106,11 +130,16 @@ export function TakeReview({ takeId, viewerId }: { takeId: string; viewerId: str
         </p>
       </header>
       {drill ? (
-        <DrillStaff
-          drill={drill}
-          marks={marks}
-          label={`The take's drill with each note's verdict; pinned notes are ringed`}
-        />
+        // A click on a drawn note chooses it, as the note strip below does (the keyboard's way there).
+        // biome-ignore lint/a11y/useKeyWithClickEvents lint/a11y/noStaticElementInteractions: the note strip is the keyboard route to the same choice
+        <div onClick={(e) => noteOf(e.target, choose)} className="cursor-pointer" data-testid="review-staff">
+          <DrillStaff
+            drill={drill}
+            marks={marks}
+            current={selected}
+            label={`The take's drill with each note's verdict; pinned notes are ringed; the chosen note is lit`}
+          />
+        </div>
       ) : (
         <FormMessage tone="error">This take's drill could not be rebuilt.</FormMessage>
       )}
@@ -126,14 +155,40 @@ export function TakeReview({ takeId, viewerId }: { takeId: string; viewerId: str
           Download MIDI
         </a>
       </div>
+      {drill ? (
+        <>
+          <NoteStrip readings={readings} selected={selected} onSelect={choose} pinned={pinnedNotes} />
+          <SlipList
+            readings={readings}
+            extras={take.score.extras.length}
+            meanOffsetMs={take.score.meanOffsetMs}
+            selected={selected}
+            onSelect={choose}
+            actionLabel={mine ? 'Show remarks here' : 'Pin a remark here'}
+          />
+        </>
+      ) : null}
       <section className="grid gap-3" aria-labelledby="remarks-heading">
         <h2 id="remarks-heading" className="text-lead font-bold">
           Remarks
         </h2>
         {remarks.data && drill ? (
-          <RemarkThread takeId={take.id} remarks={remarks.data.remarks} notes={drill.notes} canAnswer={mine} />
+          <RemarkThread
+            takeId={take.id}
+            remarks={remarks.data.remarks}
+            notes={drill.notes}
+            canAnswer={mine}
+            highlight={selected}
+          />
         ) : null}
-        {!mine && drill ? <RemarkForm take={take} drill={drill} /> : null}
+        {!mine && drill ? (
+          <RemarkForm
+            take={take}
+            drill={drill}
+            pin={selected === null ? '' : String(selected)}
+            setPin={(v) => setChosen(v === '' ? null : Number(v))}
+          />
+        ) : null}
       </section>
     </div>
   );
