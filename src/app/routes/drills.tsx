@@ -132,7 +132,7 @@ export function DrillsRoute() {
         {drill ? (
           <>
             <KeyCycleNav cycle={cycle} index={index} onChange={setKeyIndex} />
-            <DrillStaff drill={drill} current={playing} />
+            <DrillStaff drill={drill} current={playing} lengthNotice />
             <RangeView drill={drill} aChromas={aChromas} />
           </>
         ) : null}

@@ -1,16 +1,25 @@
-import type { Drill } from '@shared/engine';
-import { instruments } from '@shared/engine';
-import { useEffect, useLayoutEffect, useRef, useState } from 'react';
+import { type Drill, instruments, type Notation, notate } from '@shared/engine';
+import { useEffect, useLayoutEffect, useMemo, useRef, useState } from 'react';
+import { type NoteMark, markFromClass } from './marks';
+import type { MarkLayer } from './marks';
+import { MarksLegend } from './marks-legend';
+import { ShortDrillNotice } from './short-drill-notice';
 import './notation.css';
 
-/** How a note is marked: a class set on its SVG group (e.g. 'sf-mark-hit'). */
+export type { NoteMark } from './marks';
+
+/** How a note is marked, as a class string ('sf-mark-hit', 'sf-mark-late sf-provisional'). */
 export type NoteMarks = ReadonlyMap<number, string>;
+/** How a note is marked: note index -> verdict and whether it is settled. */
+export type NoteVerdicts = ReadonlyMap<number, NoteMark>;
 
 interface Props {
   drill: Drill;
-  /** note index -> class, changed by toggling classes (no redraw) */
+  /** note index -> verdict; drawn as Sixfold's marks under the staff (no redraw) */
+  verdicts?: NoteVerdicts;
+  /** the same as class strings ('sf-mark-late sf-provisional'), as the practice pages keep them */
   marks?: NoteMarks;
-  /** the note being played, marked with 'sf-current' */
+  /** the note being played, shown by a band behind it */
   current?: number | null;
   /** fade the notes (for memorising) */
   faded?: boolean;
@@ -18,24 +27,56 @@ interface Props {
   label?: string;
   /** a fixed width in px (the printable pages); otherwise the container's */
   width?: number;
+  /** performance.now() of the take's first downbeat, set on the staff as data-downbeat-ms */
+  downbeatMs?: number | null;
+  /** say beside the staff when the drill is shorter than two bars or the range cut it short */
+  lengthNotice?: boolean;
   onRendered?: (noteCount: number) => void;
 }
 
 const renderer = () => import('./render-staff');
 
+function verdictsOf(verdicts: NoteVerdicts | undefined, marks: NoteMarks | undefined): Map<number, NoteMark> {
+  const out = new Map<number, NoteMark>(verdicts ?? []);
+  if (marks)
+    for (const [i, cls] of marks) {
+      const m = markFromClass(cls);
+      if (m && !out.has(i)) out.set(i, m);
+    }
+  return out;
+}
+
 /**
- * A drill in written pitch for its instrument: measure numbers, triplet brackets, the two
- * triads told apart. Drawn once per drill and width; marks and the current note only toggle
- * classes on the note elements, so a live take never redraws the staff.
+ * A drill in written pitch for its instrument, drawn from the engine's notation model. Drawn
+ * once per drill and width; verdicts and the current note are laid on without a redraw, so a
+ * live take never redraws the staff.
  */
-export function DrillStaff({ drill, marks, current, faded, label, width: fixedWidth, onRendered }: Props) {
+export function DrillStaff({
+  drill,
+  verdicts,
+  marks,
+  current,
+  faded,
+  label,
+  width: fixedWidth,
+  downbeatMs,
+  lengthNotice,
+  onRendered,
+}: Props) {
   const host = useRef<HTMLDivElement>(null);
-  const notes = useRef<SVGElement[]>([]);
-  const applied = useRef(new Map<number, string>());
+  const layer = useRef<MarkLayer | null>(null);
   const [measured, setMeasured] = useState(0);
   const [error, setError] = useState<string | null>(null);
   const [version, setVersion] = useState(0);
   const width = fixedWidth ?? measured;
+  const marksRow = verdicts !== undefined || marks !== undefined;
+  const notation = useMemo((): Notation | Error => {
+    try {
+      return notate(drill);
+    } catch (err) {
+      return err instanceof Error ? err : new Error('The notation could not be made');
+    }
+  }, [drill]);
 
   useLayoutEffect(() => {
     if (fixedWidth || !host.current) return;
@@ -56,17 +97,20 @@ export function DrillStaff({ drill, marks, current, faded, label, width: fixedWi
   onRenderedRef.current = onRendered;
   useEffect(() => {
     if (!host.current || width <= 0) return;
+    if (notation instanceof Error) {
+      setError(notation.message);
+      return;
+    }
     let cancelled = false;
     const target = host.current;
     renderer()
-      .then(({ renderStaff }) => (cancelled ? null : renderStaff(target, drill, width)))
+      .then(({ renderStaff }) => (cancelled ? null : renderStaff(target, drill, notation, width, { marksRow })))
       .then((r) => {
         if (cancelled || !r) return;
-        notes.current = r.notes;
-        applied.current = new Map();
+        layer.current = r.marks;
         setError(null);
         setVersion((v) => v + 1);
-        onRenderedRef.current?.(r.notes.length);
+        onRenderedRef.current?.(r.notes.filter(Boolean).length);
       })
       .catch((err: unknown) => {
         if (!cancelled) setError(err instanceof Error ? err.message : 'The notation could not be drawn');
@@ -74,35 +118,39 @@ export function DrillStaff({ drill, marks, current, faded, label, width: fixedWi
     return () => {
       cancelled = true;
     };
-  }, [drill, width]);
+  }, [drill, notation, width, marksRow]);
 
-  // Marks and the current note: toggle classes on what is already drawn (again after a redraw).
-  // Before paint: a mark from a note just played must be on screen in the very next frame.
+  // Marks and the current note on what is already drawn (again after a redraw). Before paint:
+  // a mark from a note just played must be on screen in the very next frame.
   // biome-ignore lint/correctness/useExhaustiveDependencies: version changes when the staff is redrawn
   useLayoutEffect(() => {
-    const want = new Map(marks ?? []);
-    if (current !== null && current !== undefined) want.set(current, `${want.get(current) ?? ''} sf-current`.trim());
-    for (const [i, cls] of applied.current) {
-      if (want.get(i) !== cls) notes.current[i]?.classList.remove(...cls.split(' '));
-    }
-    for (const [i, cls] of want) {
-      if (applied.current.get(i) !== cls) notes.current[i]?.classList.add(...cls.split(' '));
-    }
-    applied.current = want;
-  }, [marks, current, version]);
+    const l = layer.current;
+    if (!l) return;
+    l.setAll(verdictsOf(verdicts, marks));
+    l.setCurrent(current ?? null);
+  }, [verdicts, marks, current, version]);
 
   const inst = instruments[drill.spec.instrument];
+  const staves = notation instanceof Error ? [] : notation.staves;
   const name =
     label ??
-    `${drill.spec.pair.join(' / ')} for ${inst.label}, written pitch, ${drill.notes.length} notes in ${drill.measures} measures`;
+    `${drill.spec.pair.join(' / ')} for ${inst.label}, written pitch${staves.length > 1 ? ' on a grand staff' : ''}, ${drill.notes.length} notes in ${drill.measures} measures`;
   return (
     <figure
-      className={`sf-staff m-0 min-w-0 ${faded ? 'sf-faded' : ''}`}
+      className={`sf-staff m-0 grid min-w-0 gap-2 ${faded ? 'sf-faded' : ''}`}
       aria-label={name}
       data-testid="drill-staff"
       data-version={version}
+      data-staves={staves.join(' ')}
+      data-downbeat-ms={downbeatMs ?? undefined}
     >
-      <div ref={host} className="min-h-24 w-full" style={fixedWidth ? { width: fixedWidth } : undefined} />
+      {lengthNotice ? <ShortDrillNotice drill={drill} /> : null}
+      <div
+        ref={host}
+        className="min-h-24 w-full"
+        style={fixedWidth ? { width: fixedWidth, maxWidth: '100%' } : undefined}
+      />
+      {marksRow ? <MarksLegend /> : null}
       {error ? (
         <p role="alert" className="text-ember-700 dark:text-ember-100">
           {error}

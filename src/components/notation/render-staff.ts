@@ -1,25 +1,20 @@
 /**
- * Draws a drill with VexFlow (loaded only with this module, as its own chunk). The fonts are
- * the @vexflow-fonts files shipped with the app; nothing is fetched from another host.
+ * Draws a drill's notation model (the engine's notate(drill)) with VexFlow, loaded only with this
+ * module as its own chunk. It draws exactly what the model says: its staves and clefs, ottava
+ * lines, printed accidentals, beams, triplets, rests, measure numbers and chord symbols; it adds
+ * the a/b tag over each cell and, when asked, a row for verdict marks under each line.
+ * The fonts are the @vexflow-fonts files shipped with the app; nothing is fetched from another host.
  */
 import academicoUrl from '@vexflow-fonts/academico/academico.woff2?url';
 import bravuraUrl from '@vexflow-fonts/bravura/bravura.woff2?url';
-import type { Drill, DrillNote } from '@shared/engine';
-import { instruments } from '@shared/engine';
+import type { Drill, Notation } from '@shared/engine';
+import VexFlow, { BarlineType, Font, Formatter, Renderer, Stave, StaveConnector } from 'vexflow/core';
+import { drawCellTag, drawChordSymbol, drawOttava } from './lanes';
+import { MarkLayer, type NoteGeometry } from './marks';
+import { type BuiltStaffMeasure, buildStaffMeasure, type DrawnEvent } from './measure';
+import { BRACE_ROOM, planSystems, type SystemPlan } from './layout';
+import { vexClef } from './pitch';
 import { aChromasOf, triadOf } from './triad-of';
-import VexFlow, {
-  Accidental,
-  Annotation,
-  Beam,
-  Font,
-  Formatter,
-  Renderer,
-  Stave,
-  StaveNote,
-  type Tickable,
-  Tuplet,
-  Voice,
-} from 'vexflow/core';
 
 let fontsReady: Promise<void> | null = null;
 
@@ -31,240 +26,375 @@ export function loadNotationFonts(): Promise<void> {
   return fontsReady;
 }
 
+export interface RenderOptions {
+  /** keep a row under each line for verdict marks */
+  marksRow?: boolean;
+}
+
 export interface RenderedStaff {
-  /** note index -> the note's SVG group (data-note-index on it), for marks without a redraw */
+  /** note index -> the note's SVG group (data-index on it) */
   notes: SVGElement[];
   height: number;
+  /** verdict marks and the current note, set without a redraw */
+  marks: MarkLayer;
 }
 
-const NOTE_RE = /^([A-Ga-g])(#{1,2}|b{1,2})?(-?\d+)$/;
-const ALTER: Record<string, number> = { '': 0, '#': 1, '##': 2, b: -1, bb: -2 };
-const ACC_TEXT: Record<number, string> = { [-2]: 'bb', [-1]: 'b', 0: 'n', 1: '#', 2: '##' };
+/** VexFlow puts a stave's top line this far below the stave's y. */
+const TOP_LINE = 40;
+const STAFF_HEIGHT = 40;
+const LEFT = 6;
 
-interface Group {
-  notes: StaveNote[];
-  /** rests that complete a partial group (inside its triplet bracket) */
-  rests: StaveNote[];
-  triplet: boolean;
+interface BuiltSystem {
+  /** [measure][staff] */
+  staves: Stave[][];
+  built: BuiltStaffMeasure[][];
 }
 
-const LETTERS = 'CDEFGAB';
-/** Diatonic steps from C0 of a spelled note ("Eb5" -> 5 * 7 + 2). */
-function diatonic(written: string): number {
-  const m = NOTE_RE.exec(written);
-  if (!m) return 34;
-  return Number(m[3]) * 7 + LETTERS.indexOf(m[1].toUpperCase());
+function buildSystem(notation: Notation, drill: Drill, plan: SystemPlan, staveYs: number[], x0: number): BuiltSystem {
+  const meter = drill.spec.meter;
+  const staves: Stave[][] = [];
+  const built: BuiltStaffMeasure[][] = [];
+  let x = x0;
+  plan.measures.forEach((mi, k) => {
+    const measure = notation.measures[mi];
+    const w = plan.widths[k];
+    const row = notation.staves.map((clef, s) => {
+      const stave = new Stave(x, staveYs[s], w);
+      if (k === 0) stave.addClef(vexClef(clef), 'default', clef === 'treble-8vb' ? '8vb' : undefined);
+      if (mi === 0) stave.addTimeSignature(`${meter[0]}/${meter[1]}`);
+      if (s === 0) stave.setMeasure(measure.number);
+      if (mi === notation.measures.length - 1) stave.setEndBarType(BarlineType.END);
+      return stave;
+    });
+    // Staves of a grand staff start their notes at the same x.
+    const start = Math.max(...row.map((s) => s.getNoteStartX()));
+    for (const s of row) s.setNoteStartX(start);
+    const parts = notation.staves.map((clef, s) =>
+      buildStaffMeasure(
+        measure.events.filter((e) => e.staff === s),
+        clef,
+        meter,
+      ),
+    );
+    parts.forEach((p, s) => {
+      p.voice.setStave(row[s]).preFormat();
+    });
+    const justify = row[0].getNoteEndX() - row[0].getNoteStartX() - Stave.defaultPadding;
+    const formatter = new Formatter();
+    for (const p of parts) formatter.joinVoices([p.voice]);
+    formatter.format(
+      parts.map((p) => p.voice),
+      justify,
+    );
+    for (const p of parts) for (const b of p.beams) b.postFormat();
+    staves.push(row);
+    built.push(parts);
+    x += w;
+  });
+  return { staves, built };
 }
 
-const measureQuarters = (meter: [number, number]) => (meter[0] * 4) / meter[1];
-
-/** Quarter notes per beam group: a dotted quarter in 6/8, else a quarter. */
-const groupQuarters = (meter: [number, number]) => (meter[1] === 8 && meter[0] % 3 === 0 ? 1.5 : 1);
-
-function durationCode(note: DrillNote): string {
-  const d = note.duration;
-  if (Math.abs(d - 0.25) < 1e-6) return '16';
-  if (Math.abs(d - 0.5) < 1e-6 || Math.abs(d - 1 / 3) < 1e-6) return '8';
-  if (Math.abs(d - 1) < 1e-6) return 'q';
-  return '8';
+/** How far a staff's drawing reaches above its top line and below its bottom line, in px. */
+function reach(parts: BuiltStaffMeasure[], topLine: number): { above: number; below: number } {
+  const bottomLine = topLine + STAFF_HEIGHT;
+  let top = topLine;
+  let bottom = bottomLine;
+  for (const p of parts) {
+    for (const { note, event } of [...p.notes, ...p.rests]) {
+      const ys = note.getYs();
+      top = Math.min(top, Math.min(...ys) - (event.accidental ? 14 : 6));
+      bottom = Math.max(bottom, Math.max(...ys) + 7);
+      if (event.kind === 'note') {
+        const { topY, baseY } = note.getStemExtents();
+        top = Math.min(top, topY - 4, baseY);
+        bottom = Math.max(bottom, topY + 4, baseY);
+      }
+    }
+    for (const t of p.tuplets) {
+      const y = t.getYPosition();
+      top = Math.min(top, y - 14);
+      bottom = Math.max(bottom, y + 14);
+    }
+  }
+  return { above: topLine - top, below: bottom - bottomLine };
 }
 
-/** Natural width of a measure: room for each note, more for one that carries an accidental. */
-function measureWidth(count: number): number {
-  return Math.max(110, 34 + count * 27);
+interface SystemLayout {
+  staveYs: number[];
+  /** lanes: y of the chord symbols' baseline, the cell tags' centre, marks row centre */
+  chordY: number;
+  cellY: number;
+  marksY: number;
+  /** per staff: y of an 8va line above it and an 8vb line below it */
+  ottavaUp: number[];
+  ottavaDown: number[];
+  bottom: number;
+}
+
+const hasOttava = (notation: Notation, plan: SystemPlan, staff: number, kind: 8 | -8) =>
+  plan.measures.some((mi) =>
+    notation.measures[mi].events.some((e) => e.staff === staff && e.kind === 'note' && e.ottava === kind),
+  );
+
+function layoutSystem(
+  notation: Notation,
+  plan: SystemPlan,
+  reaches: Array<{ above: number; below: number }>,
+  top: number,
+  marksRow: boolean,
+): SystemLayout {
+  const chords = plan.measures.some((mi) => notation.measures[mi].chord || notation.measures[mi].chords?.length);
+  const chordLane = chords ? 24 : 0;
+  const cellLane = 22;
+  const staveYs: number[] = [];
+  const ottavaUp: number[] = [];
+  const ottavaDown: number[] = [];
+  let cellY = 0;
+  let chordY = 0;
+  let prevBottom = 0;
+  notation.staves.forEach((_clef, s) => {
+    const up = hasOttava(notation, plan, s, 8) ? 20 : 0;
+    const down = hasOttava(notation, plan, s, -8) ? 20 : 0;
+    // Room over the staff: the notes' own reach, and at least the measure number's.
+    const above = Math.max(reaches[s].above, s === 0 ? 16 : 0);
+    let topLine: number;
+    if (s === 0) {
+      topLine = top + 8 + chordLane + cellLane + up + above;
+      cellY = topLine - above - up - 11;
+      chordY = cellY - 16;
+    } else {
+      topLine = Math.max(prevBottom + up + above + 18, prevBottom + 56);
+    }
+    ottavaUp.push(topLine - above - 10);
+    const bottomLine = topLine + STAFF_HEIGHT;
+    ottavaDown.push(bottomLine + reaches[s].below + 12);
+    prevBottom = bottomLine + reaches[s].below + down;
+    staveYs.push(topLine - TOP_LINE);
+  });
+  const marksY = prevBottom + 14;
+  return {
+    staveYs,
+    chordY,
+    cellY,
+    marksY,
+    ottavaUp,
+    ottavaDown,
+    bottom: prevBottom + (marksRow ? 30 : 8) + 14,
+  };
 }
 
 /**
- * Renders the drill in written pitch into `host` (replacing what was there), breaking measures
- * into systems that fit `width`. Each note's group gets data-note-index and data-triad; the
- * first note of each run of one triad gets a small "a" or "b" below it, so the two triads are
- * told apart without colour too.
+ * Renders the drill into `host` (replacing what was there), in lines that fit `width`. Each
+ * note's group carries data-index (into drill.notes), data-verdict, data-settled, data-written
+ * and its triad as a class.
  */
-export async function renderStaff(host: HTMLElement, drill: Drill, width: number): Promise<RenderedStaff> {
+export async function renderStaff(
+  host: HTMLElement,
+  drill: Drill,
+  notation: Notation,
+  width: number,
+  options: RenderOptions = {},
+): Promise<RenderedStaff> {
   await loadNotationFonts();
   host.replaceChildren();
-  const inst = instruments[drill.spec.instrument];
-  const clef = inst.clef;
-  const meter = drill.spec.meter;
-  const mq = measureQuarters(meter);
-  const gq = groupQuarters(meter);
-  const aChromas = aChromasOf(drill);
+  const grand = notation.staves.length > 1;
+  const x0 = LEFT + (grand ? BRACE_ROOM : 0);
+  const usable = Math.max(240, width - x0 - 6);
+  const plans = planSystems(notation.measures, notation.staves.length, usable);
 
-  const byMeasure: DrillNote[][] = Array.from({ length: drill.measures }, () => []);
-  drill.notes.forEach((n) => {
-    byMeasure[Math.min(drill.measures, Math.max(1, n.measure)) - 1].push(n);
-  });
-  const indexOf = new Map(drill.notes.map((n, i) => [n, i]));
-
-  // Systems: greedily fill the width, then stretch each full-enough system to the edge.
-  const clefRoom = 48;
-  const timeRoom = 30;
-  const usable = Math.max(260, width - 12);
-  const systems: { measures: number[]; widths: number[] }[] = [];
-  let current: { measures: number[]; widths: number[] } = { measures: [], widths: [] };
-  let used = 0;
-  const fullCount = Math.max(1, ...byMeasure.map((m) => m.length));
-  byMeasure.forEach((measureNotes, i) => {
-    // The last measure's rests take the room its missing notes would have.
-    const notes = i === byMeasure.length - 1 ? { length: fullCount } : measureNotes;
-    const extra = (current.measures.length === 0 ? clefRoom : 0) + (i === 0 ? timeRoom : 0);
-    const w = measureWidth(notes.length) + extra;
-    if (current.measures.length > 0 && used + w > usable) {
-      systems.push(current);
-      current = { measures: [], widths: [] };
-      used = 0;
-      const w2 = measureWidth(notes.length) + clefRoom;
-      current.measures.push(i);
-      current.widths.push(w2);
-      used = w2;
-      return;
-    }
-    current.measures.push(i);
-    current.widths.push(w);
-    used += w;
-  });
-  if (current.measures.length) systems.push(current);
-  for (const s of systems) {
-    const total = s.widths.reduce((a, b) => a + b, 0);
-    const fill = usable / total;
-    if (total / usable > 0.55 || systems.length === 1)
-      s.widths = s.widths.map((w) => Math.floor(w * Math.min(fill, systems.length === 1 ? 1.6 : fill)));
-  }
-
-  // Each system gets the room its highest and lowest notes need (ledger lines, stems, brackets).
-  const [topLine, bottomLine] = clef === 'bass' ? [26, 18] : [38, 30]; // diatonic steps of A3/G2, F5/E4
-  const staveYs: number[] = [];
+  // First pass: build each line at y = 0 to see how far its notes reach, then stack the lines.
+  const layouts: SystemLayout[] = [];
   let cursor = 0;
-  for (const system of systems) {
-    const steps = system.measures.flatMap((mi) => byMeasure[mi].map((n) => diatonic(n.written)));
-    const above = Math.max(0, Math.max(...steps, topLine) - topLine) * 5;
-    const below = Math.max(0, bottomLine - Math.min(...steps, bottomLine)) * 5;
-    // VexFlow draws the top line 40px below the stave's y, the bottom line 40px under that.
-    const y = cursor + 10 + above;
-    staveYs.push(y);
-    cursor = y + 80 + 50 + below;
+  for (const plan of plans) {
+    const trial = buildSystem(
+      notation,
+      drill,
+      plan,
+      notation.staves.map(() => 0),
+      x0,
+    );
+    const reaches = notation.staves.map((_c, s) =>
+      reach(
+        trial.built.map((parts) => parts[s]),
+        TOP_LINE,
+      ),
+    );
+    const layout = layoutSystem(notation, plan, reaches, cursor, Boolean(options.marksRow));
+    layouts.push(layout);
+    cursor = layout.bottom;
   }
-  const height = cursor + 10;
+  const height = Math.ceil(cursor + 4);
+
   const renderer = new Renderer(host as HTMLDivElement, Renderer.Backends.SVG);
   renderer.resize(width, height);
   const ctx = renderer.getContext();
   ctx.setFillStyle('currentColor');
   ctx.setStrokeStyle('currentColor');
-  const svg = host.querySelector('svg');
+  const svg = host.querySelector('svg') as SVGSVGElement;
   // The figure around the drawing carries the words; the drawing itself is decoration to a reader.
-  svg?.setAttribute('aria-hidden', 'true');
-  svg?.setAttribute('viewBox', `0 0 ${width} ${height}`);
+  svg.setAttribute('aria-hidden', 'true');
+  svg.setAttribute('viewBox', `0 0 ${width} ${height}`);
   // Scale with the page: the drawing keeps its proportions at any container width.
-  svg?.removeAttribute('width');
-  svg?.removeAttribute('height');
-  svg?.style.setProperty('width', '100%');
-  svg?.style.setProperty('height', 'auto');
+  svg.removeAttribute('width');
+  svg.removeAttribute('height');
+  svg.style.setProperty('width', '100%');
+  svg.style.setProperty('height', 'auto');
 
-  const elements: SVGElement[] = new Array(drill.notes.length);
-  const styled: Array<{ note: StaveNote; index: number; triad: 'a' | 'b'; written: string }> = [];
-  let prevTriad: 'a' | 'b' | null = null;
+  const notes: SVGElement[] = new Array(drill.notes.length);
+  const geometry: NoteGeometry[] = new Array(drill.notes.length);
+  const aChromas = aChromasOf(drill);
+  const lanes = ctx.openGroup('sf-lanes') as SVGGElement;
+  ctx.closeGroup();
 
-  systems.forEach((system, si) => {
-    let x = 6;
-    const y = staveYs[si];
-    system.measures.forEach((mi, k) => {
-      const w = system.widths[k];
-      const stave = new Stave(x, y, w);
-      if (k === 0) stave.addClef(clef, 'default', drill.spec.instrument === 'guitar' ? '8vb' : undefined);
-      if (mi === 0) stave.addTimeSignature(`${meter[0]}/${meter[1]}`);
-      stave.setMeasure(mi + 1);
-      if (mi === drill.measures - 1) stave.setEndBarType(3); // final bar line
-      stave.setContext(ctx).draw();
-      x += w;
-
-      // Accidentals as written music shows them: one holds to the bar line, a natural cancels it.
-      const held = new Map<string, number>();
-      const groups = new Map<number, Group>();
-      const tickables: Tickable[] = [];
-      for (const n of byMeasure[mi]) {
-        const m = NOTE_RE.exec(n.written);
-        const letter = (m?.[1] ?? 'b').toLowerCase();
-        const acc = m?.[2] ?? '';
-        const octave = m?.[3] ?? '4';
-        const sn = new StaveNote({
-          keys: [`${letter}${acc}/${octave}`],
-          duration: durationCode(n),
-          clef,
-          autoStem: true,
-        });
-        const place = `${letter}${octave}`;
-        const alter = ALTER[acc] ?? 0;
-        if ((held.get(place) ?? 0) !== alter) sn.addModifier(new Accidental(ACC_TEXT[alter]), 0);
-        held.set(place, alter);
-        const index = indexOf.get(n) ?? 0;
-        const triad = triadOf(n, aChromas);
-        if (triad !== prevTriad) {
-          sn.addModifier(new Annotation(triad).setVerticalJustification(Annotation.VerticalJustify.BOTTOM), 0);
-          prevTriad = triad;
+  plans.forEach((plan, si) => {
+    const layout = layouts[si];
+    const { staves, built } = buildSystem(notation, drill, plan, layout.staveYs, x0);
+    // staves is [measure][staff]: the line's top staff and its bottom one.
+    const topLine = staves[0][0].getYForLine(0);
+    const systemBottomLine = staves[0][staves[0].length - 1].getYForLine(4);
+    staves.forEach((row, k) => {
+      for (const st of row) st.setContext(ctx).draw();
+      if (grand) {
+        const [upper, lower] = row;
+        if (k === 0) {
+          ctx.openGroup('sf-brace');
+          new StaveConnector(upper, lower).setType('brace').setContext(ctx).draw();
+          new StaveConnector(upper, lower).setType('singleLeft').setContext(ctx).draw();
+          ctx.closeGroup();
         }
-        styled.push({ note: sn, index, triad, written: n.written });
-        tickables.push(sn);
-        const inMeasure = n.beat - mi * mq;
-        const g = Math.floor(inMeasure / gq + 1e-6);
-        const group = groups.get(g) ?? { notes: [], rests: [], triplet: Math.abs(n.duration - 1 / 3) < 1e-6 };
-        group.notes.push(sn);
-        groups.set(g, group);
+        const last = plan.measures[k] === notation.measures.length - 1;
+        new StaveConnector(upper, lower)
+          .setType(last ? 'boldDoubleRight' : 'singleRight')
+          .setContext(ctx)
+          .draw();
       }
-      // Fill the last measure with rests: first the rest of a partial group, then whole beats.
-      const last = byMeasure[mi][byMeasure[mi].length - 1];
-      if (last) {
-        let usedQ = last.beat + last.duration - mi * mq;
-        const lastGroup = groups.get(Math.floor((last.beat - mi * mq) / gq + 1e-6));
-        while (lastGroup && usedQ + 1e-6 < Math.ceil(usedQ / gq - 1e-6) * gq && usedQ + 1e-6 < mq) {
-          const r = new StaveNote({
-            keys: [clef === 'bass' ? 'd/3' : 'b/4'],
-            duration: `${durationCode(last)}r`,
-            clef,
-          });
-          lastGroup.rests.push(r);
-          tickables.push(r);
-          usedQ += last.duration;
-        }
-        while (usedQ + 1 - 1e-6 <= mq) {
-          tickables.push(new StaveNote({ keys: [clef === 'bass' ? 'd/3' : 'b/4'], duration: 'qr', clef }));
-          usedQ += 1;
-        }
-        if (usedQ + 0.5 - 1e-6 <= mq) {
-          tickables.push(new StaveNote({ keys: [clef === 'bass' ? 'd/3' : 'b/4'], duration: '8r', clef }));
-          usedQ += 0.5;
-        }
-      }
-      const voice = new Voice({ numBeats: meter[0], beatValue: meter[1] }).setMode(Voice.Mode.SOFT);
-      voice.addTickables(tickables);
-      const beams: Beam[] = [];
-      const tuplets: Tuplet[] = [];
-      for (const group of groups.values()) {
-        if (group.triplet)
-          tuplets.push(
-            new Tuplet([...group.notes, ...group.rests], {
-              bracketed: true,
-              ratioed: false,
-              numNotes: 3,
-              notesOccupied: 2,
-            }),
+      built[k].forEach((p, s) => {
+        p.voice.draw(ctx, row[s]);
+        for (const b of p.beams) b.setContext(ctx).draw();
+        for (const t of p.tuplets) t.setContext(ctx).draw();
+      });
+    });
+
+    const drawn: DrawnEvent[] = built.flatMap((parts) => parts.flatMap((p) => p.notes));
+    for (const { event, note } of drawn) {
+      const i = event.noteIndex;
+      if (i === undefined || i < 0 || i >= drill.notes.length) continue;
+      const el = note.getSVGElement();
+      const begin = note.getNoteHeadBeginX();
+      const end = note.getNoteHeadEndX();
+      geometry[i] = { x: (begin + end) / 2, laneY: layout.marksY, top: topLine - 10, bottom: systemBottomLine + 10 };
+      if (!el) continue;
+      const triad = triadOf(drill.notes[i], aChromas);
+      el.setAttribute('data-index', String(i));
+      el.setAttribute('data-note-index', String(i));
+      el.setAttribute('data-written', event.written ?? drill.notes[i].written);
+      el.setAttribute('data-triad', triad);
+      el.setAttribute('data-verdict', '');
+      el.setAttribute('data-settled', 'false');
+      el.classList.add('sf-note', `sf-triad-${triad}`);
+      liftAccidentals(el);
+      notes[i] = el;
+    }
+
+    // Cell tags: one per run of notes of one cell (or, for scale patterns, of one triad) on this line.
+    const ordered = drawn
+      .filter((d) => d.event.noteIndex !== undefined)
+      .sort((a, b) => (a.event.noteIndex ?? 0) - (b.event.noteIndex ?? 0));
+    let run: DrawnEvent[] = [];
+    const flush = () => {
+      if (run.length === 0) return;
+      const first = drill.notes[run[0].event.noteIndex!];
+      drawCellTag(
+        lanes,
+        { x0: run[0].note.getNoteHeadBeginX(), x1: run[run.length - 1].note.getNoteHeadEndX() },
+        layout.cellY,
+        triadOf(first, aChromas),
+        first.cell,
+      );
+      run = [];
+    };
+    const keyOf = (d: DrawnEvent) => {
+      const n = drill.notes[d.event.noteIndex!];
+      return n.source === 'scale' ? triadOf(n, aChromas) : `${n.cell}:${n.source}`;
+    };
+    for (const d of ordered) {
+      if (run.length && keyOf(run[0]) !== keyOf(d)) flush();
+      run.push(d);
+    }
+    flush();
+
+    // Ottava lines, per staff, over runs of notes under one sign.
+    notation.staves.forEach((_clef, s) => {
+      const onStaff = built.flatMap((parts) => parts[s].notes);
+      let start = -1;
+      for (let j = 0; j <= onStaff.length; j++) {
+        const o = j < onStaff.length ? onStaff[j].event.ottava : 0;
+        const prev = start >= 0 ? onStaff[start].event.ottava : 0;
+        if (start >= 0 && o !== prev) {
+          const kind = prev as 8 | -8;
+          const last = onStaff[j - 1];
+          const next = nextEventOnStaff(notation, plan.measures[plan.measures.length - 1], s);
+          const closes = j < onStaff.length || !next || next.ottava !== kind;
+          drawOttava(
+            lanes,
+            { x0: onStaff[start].note.getNoteHeadBeginX() - 2, x1: last.note.getNoteHeadEndX() + 4 },
+            kind === 8 ? layout.ottavaUp[s] : layout.ottavaDown[s],
+            kind,
+            closes,
           );
-        if (group.notes.length > 1) beams.push(new Beam(group.notes));
+          start = -1;
+        }
+        if (start < 0 && o !== 0 && j < onStaff.length) start = j;
       }
-      new Formatter().joinVoices([voice]).formatToStave([voice], stave);
-      voice.draw(ctx, stave);
-      for (const b of beams) b.setContext(ctx).draw();
-      for (const t of tuplets) t.setContext(ctx).draw();
+    });
+
+    // Chord symbols: each over the event where it starts (or the measure's start).
+    plan.measures.forEach((mi, k) => {
+      const measure = notation.measures[mi];
+      const symbols = measure.chords?.length
+        ? measure.chords
+        : measure.chord
+          ? [{ start: 0, chord: measure.chord }]
+          : [];
+      const events = built[k].flatMap((p) => [...p.notes, ...p.rests]);
+      for (const c of symbols) {
+        const at = events.find((d) => Math.abs(d.event.start - c.start) < 1e-6);
+        const x = at ? at.note.getNoteHeadBeginX() : staves[k][0].getNoteStartX();
+        drawChordSymbol(lanes, x, layout.chordY, c.chord);
+      }
     });
   });
 
-  for (const { note, index, triad, written } of styled) {
-    const el = note.getSVGElement();
-    if (!el) continue;
-    el.setAttribute('data-note-index', String(index));
-    el.setAttribute('data-written', written);
-    el.setAttribute('data-triad', triad);
-    el.classList.add('sf-note', `sf-triad-${triad}`);
-    elements[index] = el;
+  const markGroup = ctx.openGroup('sf-marks') as SVGGElement;
+  ctx.closeGroup();
+  return { notes, height, marks: new MarkLayer(svg, notes, geometry, markGroup) };
+}
+
+/** The first note on a staff after a measure, to see whether an ottava line runs on. */
+function nextEventOnStaff(notation: Notation, measureIndex: number, staff: number) {
+  for (let mi = measureIndex + 1; mi < notation.measures.length; mi++) {
+    const e = notation.measures[mi].events.find((ev) => ev.staff === staff && ev.kind === 'note');
+    if (e) return e;
   }
-  return { notes: elements, height };
+  return undefined;
+}
+
+/** SMuFL's accidentals (flat, natural, sharp and their doubles) sit at U+E260..U+E26F. */
+const isAccidentalGlyph = (t: string | null) => {
+  const c = t?.codePointAt(0) ?? 0;
+  return c >= 0xe260 && c <= 0xe26f;
+};
+
+/**
+ * VexFlow draws a note's accidental inside its notehead group; move it out, so the sign is
+ * printed in the text colour (not the triad's) and can be found as .sf-accidental.
+ */
+function liftAccidentals(note: SVGElement): void {
+  for (const head of note.querySelectorAll('.vf-notehead')) {
+    for (const text of head.querySelectorAll('text')) {
+      if (!isAccidentalGlyph(text.textContent)) continue;
+      text.classList.add('sf-accidental');
+      note.appendChild(text);
+    }
+  }
 }

@@ -75,7 +75,12 @@ export function PrintEdition({
                   {titleOf(drill)}
                   {drill.spec.chord ? <span className="font-normal text-muted"> over {drill.spec.chord}</span> : null}
                 </h3>
-                <DrillStaff drill={drill} width={PAGE_WIDTH} onRendered={() => setDone((x) => Math.max(x, i + 1))} />
+                <DrillStaff
+                  drill={drill}
+                  width={PAGE_WIDTH}
+                  lengthNotice
+                  onRendered={() => setDone((x) => Math.max(x, i + 1))}
+                />
               </div>
             ) : null;
           })}

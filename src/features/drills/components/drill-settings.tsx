@@ -2,9 +2,9 @@ import { type InstrumentId, instruments, PRESET_IDS, presets } from '@shared/eng
 import { type CustomPattern, type FieldErrors, METERS } from '@shared/schemas/drills';
 import { SelectField } from '@/components/ui/select-field';
 import { TextField } from '@/components/ui/text-field';
-import { keyLabel } from '@/components/midi/keyboard-diagram';
 import type { Draft } from '../hooks/use-drill-draft';
 import { NEW_TRIAD_PATTERN } from './pattern-form';
+import { RangeFields } from './range-fields';
 
 const INSTRUMENT_OPTIONS = (Object.keys(instruments) as InstrumentId[]).map((id) => ({
   value: id,
@@ -49,13 +49,12 @@ export function DrillSettings({
   fields: FieldErrors;
   savedPatterns: CustomPattern[];
 }) {
-  const range = draft.range ?? instruments[draft.instrument].range;
+  const range = draft.range ?? instruments[draft.instrument].drillRange;
   const patternOptions = [
     ...PRESET_IDS.map((id) => ({ value: id, label: presets[id].name })),
     ...savedPatterns.map((p) => ({ value: `saved:${p.id}`, label: `${p.name}${p.mine ? '' : ` — ${p.owner.name}`}` })),
     { value: 'custom', label: 'Custom: build one…' },
   ];
-  const setRange = (patch: Partial<{ low: number; high: number }>) => update({ range: { ...range, ...patch } });
   return (
     <section aria-labelledby="settings-heading" className="grid content-start gap-4">
       <h2 id="settings-heading" className="text-lead font-bold">
@@ -117,27 +116,12 @@ export function DrillSettings({
           options={INSTRUMENT_OPTIONS}
           onChange={(e) => update({ instrument: e.target.value as InstrumentId })}
         />
-        <TextField
-          className="min-w-0"
-          label="Lowest note (MIDI, sounding)"
-          type="number"
-          min={0}
-          max={127}
-          value={String(range.low)}
-          hint={keyLabel(range.low)}
-          errors={pick(fields, 'range.low', 'range')}
-          onChange={(e) => setRange({ low: Number(e.target.value) })}
-        />
-        <TextField
-          className="min-w-0"
-          label="Highest note (MIDI, sounding)"
-          type="number"
-          min={0}
-          max={127}
-          value={String(range.high)}
-          hint={keyLabel(range.high)}
-          errors={pick(fields, 'range.high')}
-          onChange={(e) => setRange({ high: Number(e.target.value) })}
+        <RangeFields
+          instrument={draft.instrument}
+          range={range}
+          onChange={(r) => update({ range: r })}
+          lowErrors={pick(fields, 'range.low', 'range')}
+          highErrors={pick(fields, 'range.high')}
         />
         <TextField
           className="min-w-0"

@@ -69,7 +69,7 @@ export function PrintCycle({ cycle, order }: { cycle: Drill[]; order: KeyOrder }
           ) : null}
           <div>
             <dt className="inline font-bold">Marks </dt>
-            <dd className="inline">“a” and “b” under a note: the triad that starts there</dd>
+            <dd className="inline">a boxed “a” or “b” over the notes: the triad they come from</dd>
           </div>
         </dl>
       </header>
@@ -85,7 +85,12 @@ export function PrintCycle({ cycle, order }: { cycle: Drill[]; order: KeyOrder }
               {i + 1}. {pairTitle(drill)}
               {drill.spec.chord ? <span className="font-normal text-muted"> over {drill.spec.chord}</span> : null}
             </h2>
-            <DrillStaff drill={drill} width={PAGE_WIDTH} onRendered={() => setDone((d) => Math.max(d, i + 1))} />
+            <DrillStaff
+              drill={drill}
+              width={PAGE_WIDTH}
+              lengthNotice
+              onRendered={() => setDone((d) => Math.max(d, i + 1))}
+            />
           </section>
         ) : null,
       )}

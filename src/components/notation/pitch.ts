@@ -1,0 +1,90 @@
+import type { Clef } from '@shared/engine';
+
+const NOTE_RE = /^([A-Ga-g])(#{1,2}|b{1,2})?(-?\d+)$/;
+const LETTERS = 'CDEFGAB';
+
+export interface SpelledPitch {
+  letter: string;
+  accidental: string;
+  octave: number;
+}
+
+/** Reads a spelled name with its octave ("Bb4"); a name that is not one reads as B4, the middle line. */
+export function parseWritten(written: string | undefined): SpelledPitch {
+  const m = NOTE_RE.exec(written ?? '');
+  if (!m) return { letter: 'B', accidental: '', octave: 4 };
+  return { letter: m[1].toUpperCase(), accidental: m[2] ?? '', octave: Number(m[3]) };
+}
+
+/** The octave a note is printed in: an 8va line prints it an octave lower than written, 8vb higher. */
+export function printedOctave(written: string | undefined, ottava: 0 | 8 | -8): SpelledPitch {
+  const p = parseWritten(written);
+  return { ...p, octave: p.octave - Math.sign(ottava) };
+}
+
+/** Diatonic steps from C0 ("E4" -> 30), as printed. */
+export function diatonicStep(p: SpelledPitch): number {
+  return p.octave * 7 + LETTERS.indexOf(p.letter);
+}
+
+/** VexFlow's key for a printed pitch ("eb/4"): only its letter and octave place the notehead. */
+export function vexKey(p: SpelledPitch): string {
+  return `${p.letter.toLowerCase()}${p.accidental}/${p.octave}`;
+}
+
+/** VexFlow's clef for ours: a treble-8vb part is placed like treble (the little 8 is drawn beside). */
+export function vexClef(clef: Clef): 'treble' | 'bass' {
+  return clef === 'bass' ? 'bass' : 'treble';
+}
+
+/** Diatonic step of the middle line: B4 on a treble staff, D3 on a bass staff. */
+export function middleLineStep(clef: Clef): number {
+  return clef === 'bass' ? 3 * 7 + 1 : 4 * 7 + 6;
+}
+
+/** A whole rest hangs from the line above the middle one. */
+export function wholeRestKey(clef: Clef): string {
+  return clef === 'bass' ? 'f/3' : 'd/5';
+}
+
+/** Where a rest sits: the middle of the staff. */
+export function restKey(clef: Clef): string {
+  return clef === 'bass' ? 'd/3' : 'b/4';
+}
+
+const CODES: Array<[number, string, number]> = [
+  [4, 'w', 0],
+  [3, 'h', 1],
+  [2, 'h', 0],
+  [1.5, 'q', 1],
+  [1, 'q', 0],
+  [0.75, '8', 1],
+  [0.5, '8', 0],
+  [0.375, '16', 1],
+  [0.25, '16', 0],
+  [0.125, '32', 0],
+];
+
+/**
+ * The printed value of a duration in quarter notes: a triplet member is printed as the value it
+ * stands for (a triplet eighth, 1/3 of a quarter, is printed as an eighth).
+ */
+export function printedValue(quarters: number, inTuplet: boolean): { code: string; dots: number } | null {
+  const q = inTuplet ? (quarters * 3) / 2 : quarters;
+  const hit = CODES.find(([d]) => Math.abs(d - q) < 1e-6);
+  return hit ? { code: hit[1], dots: hit[2] } : null;
+}
+
+/** Splits a gap into plain values, largest first (for the invisible notes that hold a staff's time). */
+export function splitGap(quarters: number): Array<{ code: string; dots: number }> {
+  const out: Array<{ code: string; dots: number }> = [];
+  let left = quarters;
+  for (const [d, code] of CODES) {
+    if (d === 3 || d === 1.5 || d === 0.75 || d === 0.375) continue;
+    while (left + 1e-6 >= d) {
+      out.push({ code, dots: 0 });
+      left -= d;
+    }
+  }
+  return out;
+}

@@ -1,0 +1,186 @@
+import { mkdirSync } from 'node:fs';
+import { join } from 'node:path';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { type DrillSpec, generateDrill, notate } from '../../shared/engine';
+import { type BrowserSession, openBrowser, signInThroughPage } from '../helpers/browser';
+import { createUser, type TestUser } from '../helpers/factories';
+import { startTestServer } from '../helpers/test-server';
+
+/** Screenshots for a person to look at (not compared by the test). */
+const shots = process.env.SHOTS_DIR ?? join(process.cwd(), 'tests', '.artifacts', 'notation');
+
+const ALTO: DrillSpec = {
+  pair: ['C', 'D'],
+  pattern: 'four-three',
+  direction: 'up',
+  instrument: 'alto-sax',
+  chord: 'D7',
+};
+const PIANO: DrillSpec = {
+  pair: ['F', 'Eb'],
+  pattern: 'weave',
+  direction: 'up-down',
+  instrument: 'piano',
+  range: { low: 43, high: 79 },
+};
+/** High on a wind controller: the top of it sits under an 8va line. */
+const HIGH_WIND: DrillSpec = {
+  pair: ['E', 'D'],
+  pattern: 'weave',
+  direction: 'up',
+  instrument: 'wind-controller',
+  range: { low: 67, high: 96 },
+};
+
+const drillsUrl = (base: string, spec: DrillSpec) =>
+  `${base}/drills?${new URLSearchParams({ spec: JSON.stringify(spec), order: 'chromatic' }).toString()}`;
+
+describe('the staff drawn from the notation model, in Chromium', () => {
+  let server: Awaited<ReturnType<typeof startTestServer>>;
+  let b: BrowserSession;
+  let player: TestUser;
+
+  beforeAll(async () => {
+    mkdirSync(shots, { recursive: true });
+    server = await startTestServer();
+    player = await createUser(server.db, { role: 'player', name: 'Ruth Okafor' });
+    b = await openBrowser(server.url);
+    await signInThroughPage(b.page, server.url, player);
+  });
+  afterAll(async () => {
+    await b?.close();
+    await server?.stop();
+  });
+
+  async function openDrill(spec: DrillSpec) {
+    const { page } = b;
+    await page.goto(drillsUrl(server.url, spec), { waitUntil: 'networkidle' });
+    const drill = generateDrill(spec);
+    await page.waitForFunction(
+      (n) => document.querySelectorAll('[data-testid="drill-staff"] [data-index]').length === n,
+      drill.notes.length,
+    );
+    return drill;
+  }
+
+  it('gives every drawn note its index, an empty verdict and settled=false', async () => {
+    const drill = await openDrill(ALTO);
+    const staff = b.page.getByTestId('drill-staff');
+    const attrs = await staff
+      .locator('[data-index]')
+      .evaluateAll((els) =>
+        els.map((el) => [
+          Number(el.getAttribute('data-index')),
+          el.getAttribute('data-verdict'),
+          el.getAttribute('data-settled'),
+        ]),
+      );
+    expect(attrs.map((a) => a[0]).sort((x, y) => Number(x) - Number(y))).toEqual(drill.notes.map((_n, i) => i));
+    expect(attrs.every((a) => a[1] === '' && a[2] === 'false')).toBe(true);
+    // What is printed is what the model says: the same count of accidentals, one per sign.
+    const printed = notate(drill).measures.flatMap((m) => m.events.filter((e) => e.accidental)).length;
+    expect(await staff.locator('.sf-accidental').count()).toBe(printed);
+    // The a/b tags sit in their own lane over the cells (one per cell, two where a line breaks
+    // inside it), not as text under notes.
+    const tagged = await staff.locator('.sf-cell').evaluateAll((els) => els.map((el) => el.getAttribute('data-cell')));
+    expect(new Set(tagged).size).toBe(new Set(drill.notes.map((n) => n.cell)).size);
+    expect(await staff.locator('.vf-annotation').count()).toBe(0);
+    for (const [w, name] of [
+      [1280, 'desktop'],
+      [390, 'phone'],
+    ] as const) {
+      await b.page.setViewportSize({ width: w, height: 900 });
+      await b.page.waitForTimeout(300);
+      await b.page.screenshot({ path: join(shots, `drills-alto-${name}.png`), fullPage: true });
+    }
+    await b.page.setViewportSize({ width: 1280, height: 900 });
+    expect(b.errors).toEqual([]);
+  });
+
+  it('draws piano on a grand staff: a brace, a treble and a bass staff', async () => {
+    const drill = await openDrill(PIANO);
+    const staff = b.page.getByTestId('drill-staff');
+    expect(await staff.getAttribute('data-staves')).toBe('treble bass');
+    // Two clefs at the start of every line, and the brace joining them.
+    expect(await staff.locator('.vf-clef').count()).toBeGreaterThanOrEqual(2);
+    expect(await staff.locator('.vf-sf-brace').count()).toBeGreaterThan(0);
+    // Notes below middle C sit on the bass staff (common practice for piano).
+    const notation = notate(drill);
+    const onBass = notation.measures.flatMap((m) => m.events.filter((e) => e.kind === 'note' && e.staff === 1));
+    expect(onBass.length).toBeGreaterThan(0);
+    await b.page.screenshot({ path: join(shots, 'drills-piano-desktop.png'), fullPage: true });
+  });
+
+  it('puts the top of a high wind-controller drill under an 8va line', async () => {
+    const drill = await openDrill(HIGH_WIND);
+    const notation = notate(drill);
+    const under = notation.measures.flatMap((m) => m.events.filter((e) => e.kind === 'note' && e.ottava === 8));
+    expect(under.length).toBeGreaterThan(0);
+    const staff = b.page.getByTestId('drill-staff');
+    expect(await staff.locator('[data-ottava="8va"]').count()).toBeGreaterThan(0);
+    expect(await staff.locator('.sf-ottava-text').first().textContent()).toBe('8va');
+    await b.page.screenshot({ path: join(shots, 'drills-wind-8va-desktop.png'), fullPage: true });
+  });
+
+  it('says beside the staff when the range leaves a drill shorter than two bars', async () => {
+    // Stacking E/D from G4 on a wind controller reaches its top in one bar.
+    const short: DrillSpec = { ...HIGH_WIND, pattern: 'stack' };
+    expect(generateDrill(short).measures).toBeLessThan(2);
+    await openDrill(short);
+    expect(await b.page.getByTestId('short-drill').textContent()).toMatch(/Only one bar/);
+    await openDrill(HIGH_WIND);
+    expect(await b.page.getByTestId('short-drill').count()).toBe(0);
+  });
+
+  it("takes the range as note names in the player's written pitch, with concert beside", async () => {
+    const { page } = b;
+    await openDrill(ALTO);
+    const low = page.getByTestId('range-low');
+    await low.fill('H3');
+    expect(await page.getByText('“H3” is not a note name').count()).toBe(1);
+    await low.fill('Bb');
+    expect(await page.getByText('needs an octave number').count()).toBe(1);
+    // Alto saxophone sounds a major sixth below written (common practice): written C#4 is concert E3, MIDI 52.
+    await low.fill('C#4');
+    await page.getByText('Sounds E3 concert (MIDI 52)').waitFor();
+    await page.waitForFunction(() => new URL(location.href).searchParams.get('spec')?.includes('"low":52'));
+  });
+
+  it('prints the key cycle through the same staff', async () => {
+    const { page } = b;
+    for (const [w, name] of [
+      [1280, 'desktop'],
+      [390, 'phone'],
+    ] as const) {
+      await page.setViewportSize({ width: w, height: 900 });
+      await page.goto(
+        `${server.url}/drills/print?${new URLSearchParams({ spec: JSON.stringify(ALTO), order: 'fourths' })}`,
+        { waitUntil: 'networkidle' },
+      );
+      await page.waitForFunction(() => document.querySelectorAll('[data-testid="print-key"] [data-index]').length > 0);
+      await page.getByRole('button', { name: 'Print' }).waitFor();
+      await page.waitForFunction(() => !(document.querySelector('button:disabled') as HTMLButtonElement | null));
+      expect(await page.getByTestId('print-key').count()).toBe(12);
+      await page.screenshot({ path: join(shots, `print-cycle-${name}.png`), fullPage: true });
+    }
+    await page.setViewportSize({ width: 1280, height: 900 });
+  });
+
+  it('shows the practice page staff with its marks row and key', async () => {
+    const { page } = b;
+    for (const [w, name] of [
+      [1280, 'desktop'],
+      [390, 'phone'],
+    ] as const) {
+      await page.setViewportSize({ width: w, height: 900 });
+      await page.goto(`${server.url}/practice?spec=${encodeURIComponent(JSON.stringify(ALTO))}&order=chromatic`, {
+        waitUntil: 'networkidle',
+      });
+      await page.waitForFunction(
+        () => document.querySelectorAll('[data-testid="drill-staff"] [data-index]').length > 0,
+      );
+      await page.screenshot({ path: join(shots, `practice-${name}.png`), fullPage: true });
+    }
+    await page.setViewportSize({ width: 1280, height: 900 });
+  });
+});
