@@ -1,6 +1,6 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { generateDrill } from '../../shared/engine';
+import { generateDrill, pairsForChord } from '../../shared/engine';
 import type { DrillSpec, PatternDef } from '../../shared/schemas/drills';
 import { type Client, createStudio, createUser, signedIn, type TestUser } from '../helpers/factories';
 import { createTestApp } from '../helpers/test-server';
@@ -28,6 +28,18 @@ describe('GET /api/drills/preview', () => {
     expect(res.body.drill.spec.instrument).toBe('alto-sax');
     expect(res.body.drill.notes.length).toBeGreaterThan(10);
   });
+
+  it.each(['G7alt', 'C7#9b13', 'F7#9', 'Cmaj7#11', 'Bbm7b5'])(
+    "previews the fit finder's first pair over %s",
+    async (chord) => {
+      const fit = pairsForChord(chord)[0];
+      const spec = { ...SPEC, pair: [fit.pair.a.symbol, fit.pair.b.symbol], chord };
+      const res = await preview(spec);
+      expect(res.status).toBe(200);
+      expect(res.body.drill.spec.chord).toBe(chord);
+      expect(res.body.drill.spec.pair).toEqual(spec.pair);
+    },
+  );
 
   it('takes a custom pattern given in full', async () => {
     const def: PatternDef = {

@@ -37,7 +37,7 @@ function NoteRoles({ fit }: { fit: ChordFit }) {
     .map((role) => ({ role, idx: fit.roles.flatMap((r, i) => (r === role ? [i] : [])) }))
     .filter((g) => g.idx.length > 0);
   return (
-    <span className="order-last grid basis-full gap-1" data-testid="fit-notes">
+    <span className="grid gap-1" data-testid="fit-notes">
       {groups.map(({ role, idx }) => (
         <span key={role} className="flex flex-wrap items-center gap-1" data-role={role}>
           <span className="w-24 text-caption text-muted">{ROLE_LABEL[role]}</span>
@@ -155,7 +155,7 @@ export function FitFinder({
                   setAll(false);
                 }}
               />
-              Show altered pairs ({alteredCount}): their scale leaves out the chord's fifth
+              Show altered pairs ({alteredCount}), whose scale leaves out the chord's fifth
             </label>
           ) : null}
           <p className="text-caption text-muted">
@@ -170,39 +170,40 @@ export function FitFinder({
             {shown.map((fit) => (
               <li
                 key={pairName(fit)}
-                className="flex flex-wrap items-center gap-x-3 gap-y-2 rounded-lg border border-line bg-surface p-3"
+                className="grid gap-2 rounded-lg border border-line bg-surface p-3"
                 data-testid="fit"
                 data-altered={fit.altered ? 'true' : undefined}
               >
-                <span className="w-6 text-caption font-bold text-muted">{fit.rank}</span>
-                <span className="min-w-24 font-bold">
-                  <span className="text-dusk-700 dark:text-dusk-100">{fit.pair.a.symbol}</span> /{' '}
-                  <span className="text-brass-700 dark:text-brass-300">{fit.pair.b.symbol}</span>
-                </span>
-                <span className="flex-1 text-caption text-muted">
-                  {fit.scale}
+                <span className="flex flex-wrap items-baseline gap-x-3 gap-y-1">
+                  <span className="w-6 text-caption font-bold text-muted">{fit.rank}</span>
+                  <span className="font-bold">
+                    <span className="text-dusk-700 dark:text-dusk-100">{fit.pair.a.symbol}</span> /{' '}
+                    <span className="text-brass-700 dark:text-brass-300">{fit.pair.b.symbol}</span>
+                  </span>
+                  <span className="text-caption text-muted">{fit.scale}</span>
                   {fit.altered ? (
                     <span
-                      className="ml-2 rounded border border-dusk-500 px-1.5 font-semibold text-dusk-700 dark:text-dusk-100"
+                      className="rounded border border-dusk-500 px-1.5 text-caption font-semibold text-dusk-700 dark:text-dusk-100"
                       data-testid="altered-mark"
-                      title="Altered: this pair's scale leaves out the chord's fifth"
+                      title="Altered sound: this pair's scale leaves out the chord's fifth"
                     >
-                      altered, no 5th
+                      leaves out the 5th
                     </span>
                   ) : null}
                 </span>
                 <NoteRoles fit={fit} />
-                <Button
-                  variant="quiet"
-                  onClick={() => hear(fit, found.chord)}
-                  aria-label={`${hearing === pairName(fit) ? 'Stop' : 'Hear'} the scale of ${pairName(fit)} over ${found.chord}`}
-                  aria-pressed={hearing === pairName(fit)}
-                >
-                  {hearing === pairName(fit) ? 'Stop' : 'Hear'}
-                </Button>
-                <Button variant="quiet" onClick={() => onPick(fit, found.chord)} aria-label={`Use ${pairName(fit)}`}>
-                  Use this pair
-                </Button>
+                <span className="flex flex-wrap gap-2">
+                  <Button
+                    variant="quiet"
+                    onClick={() => hear(fit, found.chord)}
+                    aria-label={`${hearing === pairName(fit) ? 'Stop' : 'Hear'} the scale of ${pairName(fit)} over ${found.chord}`}
+                  >
+                    {hearing === pairName(fit) ? 'Stop' : 'Hear'}
+                  </Button>
+                  <Button variant="quiet" onClick={() => onPick(fit, found.chord)} aria-label={`Use ${pairName(fit)}`}>
+                    Use this pair
+                  </Button>
+                </span>
               </li>
             ))}
           </ol>
