@@ -2,7 +2,6 @@ import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { AppProvider } from './app/provider';
 import { AppRouter } from './app/router';
-import { startTakeSync } from './lib/take-queue';
 import './index.css';
 
 const root = document.getElementById('root');
@@ -15,5 +14,6 @@ createRoot(root).render(
   </StrictMode>,
 );
 
-// Takes an earlier visit could not send go out now (and whenever the connection returns).
-startTakeSync();
+// Takes an earlier visit could not send go out now (and whenever the connection returns); the
+// queue's code loads after the first paint, so the first page does not wait for it.
+void import('./lib/take-queue').then((m) => m.startTakeSync());

@@ -4,15 +4,11 @@ import { createBrowserRouter, RouterProvider, type RouteObject } from 'react-rou
 import { RequireRole, VisitorsOnly } from './guards';
 import { RootLayout } from './root-layout';
 import { RouteError } from './route-error';
-import { ForgotPasswordRoute } from './routes/forgot-password';
-import { HomeRoute } from './routes/home';
 import { IndexRoute } from './routes/index';
 import { NotFoundRoute } from './routes/not-found';
-import { ResetPasswordRoute } from './routes/reset-password';
 import { SignInRoute } from './routes/sign-in';
-import { SignUpRoute } from './routes/sign-up';
 
-type Guard = 'public' | 'signed-in' | Role[];
+type Guard = 'public' | 'visitors' | 'signed-in' | Role[];
 
 /**
  * A page loaded on first visit (its own chunk), wrapped in the guard that mirrors the server's
@@ -29,6 +25,14 @@ function page<M extends Record<string, unknown>>(
     lazy: async () => {
       const Component = (await load())[name] as ComponentType;
       if (guard === 'public') return { element: <Component /> };
+      if (guard === 'visitors')
+        return {
+          element: (
+            <VisitorsOnly>
+              <Component />
+            </VisitorsOnly>
+          ),
+        };
       return {
         element: (
           <RequireRole roles={guard === 'signed-in' ? undefined : guard}>
@@ -58,24 +62,10 @@ const router = createBrowserRouter([
               </VisitorsOnly>
             ),
           },
-          {
-            path: '/sign-up',
-            element: (
-              <VisitorsOnly>
-                <SignUpRoute />
-              </VisitorsOnly>
-            ),
-          },
-          { path: '/forgot-password', element: <ForgotPasswordRoute /> },
-          { path: '/reset-password', element: <ResetPasswordRoute /> },
-          {
-            path: '/home',
-            element: (
-              <RequireRole>
-                <HomeRoute />
-              </RequireRole>
-            ),
-          },
+          page('/sign-up', () => import('./routes/sign-up'), 'SignUpRoute', 'visitors'),
+          page('/forgot-password', () => import('./routes/forgot-password'), 'ForgotPasswordRoute', 'public'),
+          page('/reset-password', () => import('./routes/reset-password'), 'ResetPasswordRoute', 'public'),
+          page('/home', () => import('./routes/home'), 'HomeRoute', 'signed-in'),
           page('/input', () => import('./routes/input-check'), 'InputCheckRoute', 'public'),
           page('/practice', () => import('./routes/practice'), 'PracticeRoute', ['player']),
           page('/account', () => import('./routes/account'), 'AccountRoute', 'signed-in'),

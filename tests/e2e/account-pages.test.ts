@@ -39,7 +39,7 @@ describe('sign-up, password reset, account settings and MIDI import in Chromium'
     expect(await violationsInBothThemes(page)).toEqual({ light: [], dark: [] });
     await page.getByRole('button', { name: 'Create account' }).click();
     // Nothing filled in: each field says what it needs, nothing is sent.
-    expect(await page.getByLabel('E-mail').getAttribute('aria-invalid')).toBe('true');
+    await page.locator('input[type="email"][aria-invalid="true"]').waitFor();
     await page.getByLabel('Your name').fill('Noor Haddad');
     await page.getByLabel('E-mail').fill(email);
     await page.getByLabel('Password').fill('a quiet fifth');
@@ -108,7 +108,7 @@ describe('sign-up, password reset, account settings and MIDI import in Chromium'
       expect(token, mail.text).toBeTruthy();
       await page.goto(`${server.url}/reset-password?token=${token}`, { waitUntil: 'networkidle' });
       expect(await seriousViolations(page)).toEqual([]);
-      await page.getByLabel('New password').fill('the third time');
+      await page.getByLabel('New password', { exact: true }).fill('the third time');
       await page.getByRole('button', { name: 'Set new password' }).click();
       await signInThroughPage(page, server.url, { email, password: 'the third time' });
       // The link works once.

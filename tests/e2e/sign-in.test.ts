@@ -32,6 +32,8 @@ describe('signing in through the page in Chromium', () => {
     await page.getByLabel('E-mail').fill('not-an-address');
     await page.getByRole('button', { name: 'Sign in' }).click();
     const email = page.getByLabel('E-mail');
+    // The form's schema loads on the first check, so the marks come a moment later.
+    await page.locator('input[type="email"][aria-invalid="true"]').waitFor();
     expect(await email.getAttribute('aria-invalid')).toBe('true');
     const describedBy = (await email.getAttribute('aria-describedby'))!;
     expect(await page.locator(`[id="${describedBy}"]`).textContent()).toMatch(/e-mail address/i);

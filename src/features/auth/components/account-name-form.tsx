@@ -1,37 +1,28 @@
-import { UpdateAccountInput, type User } from '@shared/schemas/auth';
-import { type FormEvent, useState } from 'react';
+import type { User } from '@shared/schemas/auth';
+import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { FormMessage } from '@/components/ui/form-message';
 import { TextField } from '@/components/ui/text-field';
+import { useSchemaForm } from '@/components/form/use-schema-form';
 import { useUpdateAccount } from '../api/account';
-import { useFormErrors } from '../hooks/use-form-errors';
 
 export function AccountNameForm({ user }: { user: User }) {
-  const [name, setName] = useState(user.name);
   const [saved, setSaved] = useState(false);
-  const { fields, formError, check, fromError } = useFormErrors(UpdateAccountInput);
+  const form = useSchemaForm(() => import('@shared/schemas/auth').then((m) => m.UpdateAccountInput), {
+    defaultValues: { name: user.name },
+  });
   const update = useUpdateAccount();
 
-  function submit(e: FormEvent) {
-    e.preventDefault();
+  const submit = form.handleSubmit((input) => {
     setSaved(false);
-    const input = check({ name });
-    if (!input) return;
-    update.mutate(input, { onSuccess: () => setSaved(true), onError: fromError });
-  }
+    update.mutate(input, { onSuccess: () => setSaved(true), onError: form.fromError });
+  });
 
   return (
     <form onSubmit={submit} noValidate className="grid gap-4" aria-label="Your name">
       {saved ? <FormMessage tone="success">Saved.</FormMessage> : null}
-      {formError ? <FormMessage tone="error">{formError}</FormMessage> : null}
-      <TextField
-        label="Name"
-        name="name"
-        autoComplete="name"
-        value={name}
-        errors={fields.name}
-        onChange={(e) => setName(e.target.value)}
-      />
+      {form.formError ? <FormMessage tone="error">{form.formError}</FormMessage> : null}
+      <TextField label="Name" autoComplete="name" errors={form.errorsOf('name')} {...form.register('name')} />
       <p className="text-caption text-muted">Your e-mail is {user.email}; your teacher and studio see this name.</p>
       <Button type="submit" disabled={update.isPending} className="justify-self-start">
         Save name

@@ -1,57 +1,50 @@
-import { ChangePasswordInput } from '@shared/schemas/auth';
-import { type FormEvent, useState } from 'react';
+import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { FormMessage } from '@/components/ui/form-message';
 import { TextField } from '@/components/ui/text-field';
+import { useSchemaForm } from '@/components/form/use-schema-form';
 import { useChangePassword } from '../api/account';
-import { useFormErrors } from '../hooks/use-form-errors';
 
 const empty = { currentPassword: '', newPassword: '' };
 
 export function ChangePasswordForm() {
-  const [values, setValues] = useState(empty);
   const [saved, setSaved] = useState(false);
-  const { fields, formError, check, fromError } = useFormErrors(ChangePasswordInput);
+  const form = useSchemaForm(() => import('@shared/schemas/auth').then((m) => m.ChangePasswordInput), {
+    defaultValues: empty,
+  });
   const change = useChangePassword();
 
-  function submit(e: FormEvent) {
-    e.preventDefault();
+  const submit = form.handleSubmit((input) => {
     setSaved(false);
-    const input = check(values);
-    if (!input) return;
     change.mutate(input, {
       onSuccess: () => {
         setSaved(true);
-        setValues(empty);
+        form.reset(empty);
       },
-      onError: fromError,
+      onError: form.fromError,
     });
-  }
+  });
 
   return (
     <form onSubmit={submit} noValidate className="grid gap-4" aria-label="Change password">
       {saved ? (
         <FormMessage tone="success">Password changed. Other browsers signed in as you were signed out.</FormMessage>
       ) : null}
-      {formError ? <FormMessage tone="error">{formError}</FormMessage> : null}
+      {form.formError ? <FormMessage tone="error">{form.formError}</FormMessage> : null}
       <TextField
         label="Current password"
-        name="currentPassword"
         type="password"
         autoComplete="current-password"
-        value={values.currentPassword}
-        errors={fields.currentPassword}
-        onChange={(e) => setValues({ ...values, currentPassword: e.target.value })}
+        errors={form.errorsOf('currentPassword')}
+        {...form.register('currentPassword')}
       />
       <TextField
         label="New password"
-        name="newPassword"
         type="password"
         autoComplete="new-password"
         hint="At least 8 characters."
-        value={values.newPassword}
-        errors={fields.newPassword}
-        onChange={(e) => setValues({ ...values, newPassword: e.target.value })}
+        errors={form.errorsOf('newPassword')}
+        {...form.register('newPassword')}
       />
       <Button type="submit" disabled={change.isPending} className="justify-self-start">
         Change password

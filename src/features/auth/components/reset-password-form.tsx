@@ -1,24 +1,21 @@
-import { PasswordResetConfirmInput } from '@shared/schemas/auth';
-import { type FormEvent, useState } from 'react';
+import { useState } from 'react';
 import { Link } from 'react-router-dom';
 import { Button } from '@/components/ui/button';
 import { FormMessage } from '@/components/ui/form-message';
 import { TextField } from '@/components/ui/text-field';
+import { useSchemaForm } from '@/components/form/use-schema-form';
 import { useConfirmPasswordReset } from '../api/password-reset';
-import { useFormErrors } from '../hooks/use-form-errors';
 
 export function ResetPasswordForm({ token }: { token: string }) {
-  const [password, setPassword] = useState('');
   const [done, setDone] = useState(false);
-  const { fields, formError, check, fromError } = useFormErrors(PasswordResetConfirmInput);
+  const form = useSchemaForm(() => import('@shared/schemas/auth').then((m) => m.PasswordResetConfirmInput), {
+    defaultValues: { token, password: '' },
+  });
+  const tokenErrors = form.errorsOf('token');
   const confirm = useConfirmPasswordReset();
-
-  function submit(e: FormEvent) {
-    e.preventDefault();
-    const input = check({ token, password });
-    if (!input) return;
-    confirm.mutate(input, { onSuccess: () => setDone(true), onError: fromError });
-  }
+  const submit = form.handleSubmit((input) =>
+    confirm.mutate(input, { onSuccess: () => setDone(true), onError: form.fromError }),
+  );
 
   if (done) {
     return (
@@ -36,10 +33,10 @@ export function ResetPasswordForm({ token }: { token: string }) {
 
   return (
     <form onSubmit={submit} noValidate className="grid gap-4" aria-label="Choose a new password">
-      {formError ? <FormMessage tone="error">{formError}</FormMessage> : null}
-      {fields.token ? (
+      {form.formError ? <FormMessage tone="error">{form.formError}</FormMessage> : null}
+      {tokenErrors ? (
         <FormMessage tone="error">
-          {fields.token.join(' ')}{' '}
+          {tokenErrors.join(' ')}{' '}
           <Link to="/forgot-password" className="underline">
             Ask for a new link
           </Link>
@@ -47,13 +44,11 @@ export function ResetPasswordForm({ token }: { token: string }) {
       ) : null}
       <TextField
         label="New password"
-        name="password"
         type="password"
         autoComplete="new-password"
         hint="At least 8 characters."
-        value={password}
-        errors={fields.password}
-        onChange={(e) => setPassword(e.target.value)}
+        errors={form.errorsOf('password')}
+        {...form.register('password')}
       />
       <Button type="submit" disabled={confirm.isPending}>
         {confirm.isPending ? 'Saving…' : 'Set new password'}

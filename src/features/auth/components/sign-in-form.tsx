@@ -1,44 +1,33 @@
-import { SignInInput } from '@shared/schemas/auth';
-import { type FormEvent, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { Button } from '@/components/ui/button';
 import { FormMessage } from '@/components/ui/form-message';
 import { TextField } from '@/components/ui/text-field';
+import { useSchemaForm } from '@/components/form/use-schema-form';
 import { useSignIn } from '../api/sign-in';
-import { useFormErrors } from '../hooks/use-form-errors';
 
 export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
-  const [values, setValues] = useState({ email: '', password: '' });
-  const { fields, formError, check, fromError } = useFormErrors(SignInInput);
+  const form = useSchemaForm(() => import('@shared/schemas/auth').then((m) => m.SignInInput), {
+    defaultValues: { email: '', password: '' },
+  });
   const signIn = useSignIn();
-
-  function submit(e: FormEvent) {
-    e.preventDefault();
-    const input = check(values);
-    if (!input) return;
-    signIn.mutate(input, { onSuccess: onSignedIn, onError: fromError });
-  }
+  const submit = form.handleSubmit((input) => signIn.mutate(input, { onSuccess: onSignedIn, onError: form.fromError }));
 
   return (
     <form onSubmit={submit} noValidate className="grid gap-4" aria-label="Sign in">
-      {formError ? <FormMessage tone="error">{formError}</FormMessage> : null}
+      {form.formError ? <FormMessage tone="error">{form.formError}</FormMessage> : null}
       <TextField
         label="E-mail"
-        name="email"
         type="email"
         autoComplete="email"
-        value={values.email}
-        errors={fields.email}
-        onChange={(e) => setValues({ ...values, email: e.target.value })}
+        errors={form.errorsOf('email')}
+        {...form.register('email')}
       />
       <TextField
         label="Password"
-        name="password"
         type="password"
         autoComplete="current-password"
-        value={values.password}
-        errors={fields.password}
-        onChange={(e) => setValues({ ...values, password: e.target.value })}
+        errors={form.errorsOf('password')}
+        {...form.register('password')}
       />
       <Button type="submit" disabled={signIn.isPending}>
         {signIn.isPending ? 'Signing in…' : 'Sign in'}
