@@ -12,7 +12,7 @@ export interface NoteEvent {
   velocity: number;
   /** DOMHighResTimeStamp of the event, on performance.now()'s clock */
   timeStamp: number;
-  source: 'midi' | 'screen' | 'keys';
+  source: 'midi' | 'screen' | 'keys' | 'mic';
   deviceId: string | null;
 }
 
@@ -156,6 +156,11 @@ export class NoteInput {
   /** The on-screen keyboard's way in. */
   screenNote(type: 'on' | 'off', midi: number, timeStamp: number, velocity = 90) {
     this.emit({ type, midi, velocity: type === 'on' ? velocity : 0, timeStamp, source: 'screen', deviceId: null });
+  }
+
+  /** The microphone's way in (src/lib/mic-input.ts): notes heard, on performance.now()'s clock. */
+  micNote(type: 'on' | 'off', midi: number, timeStamp: number, velocity = 90) {
+    this.emit({ type, midi, velocity: type === 'on' ? velocity : 0, timeStamp, source: 'mic', deviceId: null });
   }
 
   /** The computer keyboard's way in: call from keydown / keyup. Returns true when it was a note key. */

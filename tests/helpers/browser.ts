@@ -22,9 +22,23 @@ export interface BrowserSession {
  */
 export async function openBrowser(
   appUrl: string,
-  opts: { fakeMidi?: boolean; midiOptions?: unknown } = {},
+  opts: {
+    fakeMidi?: boolean;
+    midiOptions?: unknown;
+    /** a WAV file Chromium plays as its (fake) microphone, once, from when a page opens it; permission granted */
+    fakeAudioCapture?: string;
+  } = {},
 ): Promise<BrowserSession> {
   const profile = mkdtempSync(join(tmpdir(), 'sixfold-chromium-'));
+  // Chromium's switches for a fake capture device fed from a file, with the permission prompt answered yes.
+  const audioArgs = opts.fakeAudioCapture
+    ? [
+        '--use-fake-device-for-media-stream',
+        '--use-fake-ui-for-media-stream',
+        `--use-file-for-fake-audio-capture=${opts.fakeAudioCapture}%noloop`,
+        '--autoplay-policy=no-user-gesture-required',
+      ]
+    : [];
   const context = await chromium.launchPersistentContext(profile, {
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
     headless: true,
@@ -38,6 +52,7 @@ export async function openBrowser(
       '--disable-background-networking',
       '--disable-component-update',
       '--disable-sync',
+      ...audioArgs,
     ],
   });
   if (opts.midiOptions !== undefined) {

@@ -1,5 +1,6 @@
 import { sql } from 'drizzle-orm';
 import type { DrillSpec, PlayedNote, ScoreOptions } from '../../../shared/engine';
+import type { InputKind } from '../../../shared/schemas/takes';
 import type { Db } from '../../db/client';
 import { type TakeRow, takes } from '../../db/schema/takes';
 import { AppError } from '../../errors';
@@ -17,6 +18,7 @@ export interface CreateTakeArgs {
   measures?: [number, number] | null;
   stoppedAtMs?: number | null;
   assignmentId?: string | null;
+  inputKind?: InputKind | null;
 }
 
 /**
@@ -43,6 +45,7 @@ export async function createTake(db: Db, args: CreateTakeArgs): Promise<{ take: 
         measureFrom: args.measures?.[0] ?? null,
         measureTo: args.measures?.[1] ?? null,
         stoppedAtMs: args.stoppedAtMs ?? null,
+        inputKind: args.inputKind ?? null,
         played: args.played,
         score,
         key: scored.key,
@@ -72,6 +75,8 @@ export async function createTake(db: Db, args: CreateTakeArgs): Promise<{ take: 
       position: Math.round(n.beatInMeasure * 12) / 12,
       verdict: score.results[i].verdict,
       offset_ms: score.results[i].offsetMs,
+      key: scored.noteKeys?.[i].key ?? null,
+      pair: scored.noteKeys?.[i].pair ?? null,
     }));
     if (rows.length > 0) {
       // One statement for every note: the rows travel as one JSON parameter.
@@ -79,9 +84,10 @@ export async function createTake(db: Db, args: CreateTakeArgs): Promise<{ take: 
         INSERT INTO take_notes (take_id, idx, player_id, midi, beat, measure, position, meter, verdict, offset_ms,
                                 key, pattern, pair, instrument, played_at)
         SELECT ${args.id}, x.idx, ${args.playerId}, x.midi, x.beat, x.measure, x.position, ${meter}, x.verdict, x.offset_ms,
-               ${scored.key}, ${scored.pattern}, ${scored.pair}, ${drill.spec.instrument}, ${args.startedAt.toISOString()}
+               COALESCE(x.key, ${scored.key}), ${scored.pattern}, COALESCE(x.pair, ${scored.pair}), ${drill.spec.instrument},
+               ${args.startedAt.toISOString()}
         FROM jsonb_to_recordset(${JSON.stringify(rows)}::jsonb)
-          AS x(idx int, midi int, beat real, measure int, position real, verdict text, offset_ms real)`);
+          AS x(idx int, midi int, beat real, measure int, position real, verdict text, offset_ms real, key text, pair text)`);
     }
     await climbTempo(
       tx,

@@ -39,5 +39,6 @@ export async function importTake(db: Db, args: ImportTakeArgs) {
     played: shifted,
     options: { tempo, mode: args.mode ?? 'timed' },
     startedAt: args.now ?? new Date(),
+    inputKind: 'file',
   });
 }

@@ -13,6 +13,7 @@ export function presentTake(row: TakeRow) {
         ? ([row.measureFrom, row.measureTo] as [number, number])
         : null,
     stoppedAtMs: row.stoppedAtMs,
+    inputKind: row.inputKind,
     played: row.played,
     score: row.score,
     key: row.key,

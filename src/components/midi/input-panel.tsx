@@ -1,15 +1,55 @@
+import { useEffect } from 'react';
+import { useMicrophone } from '@/hooks/use-microphone';
 import type { InputStatus, NoteInput } from '@/lib/midi-input';
+import { MicPanel } from './mic-panel';
 
 const CHANNELS = Array.from({ length: 16 }, (_, i) => i + 1);
+const MICROPHONE = 'microphone';
 
-/** Where notes come from: the MIDI device and channel, or why MIDI is not there. */
-export function InputPanel({ input, status }: { input: NoteInput; status: InputStatus }) {
-  const ready = status.state === 'ready';
+/**
+ * Where notes come from: the MIDI device and channel, or why MIDI is not there. With
+ * `microphone`, the microphone is one more choice (asked for only when picked); when it is
+ * refused or missing the panel says why and the keyboards and MIDI go on working.
+ */
+export function InputPanel({
+  input,
+  status,
+  microphone = false,
+}: {
+  input: NoteInput;
+  status: InputStatus;
+  microphone?: boolean;
+}) {
+  const { mic, status: micStatus, on: micOn } = useMicrophone();
+  // The microphone is let go when the page that offered it closes.
+  useEffect(() => (microphone ? () => mic.stop() : undefined), [microphone, mic]);
+  const micProblem = microphone && 'message' in micStatus && micStatus.state !== 'listening';
+  const ready = status.state === 'ready' || microphone;
   const problem =
-    status.state === 'unsupported' ||
-    status.state === 'denied' ||
-    status.state === 'unavailable' ||
-    status.state === 'failed';
+    micProblem ||
+    (!micOn &&
+      (status.state === 'unsupported' ||
+        status.state === 'denied' ||
+        status.state === 'unavailable' ||
+        status.state === 'failed'));
+  const pick = (value: string) => {
+    if (value === MICROPHONE) {
+      input.selectDevice(null);
+      void mic.start();
+      return;
+    }
+    mic.stop();
+    input.selectDevice(value || null);
+  };
+  const message = micOn
+    ? micStatus.state === 'listening'
+      ? micStatus.message
+      : 'Waiting for the microphone… (the browser may ask you to allow it)'
+    : micProblem && 'message' in micStatus
+      ? micStatus.message
+      : status.state === 'idle' || status.state === 'starting'
+        ? 'Looking for MIDI devices…'
+        : status.message;
   return (
     <section aria-labelledby="input-heading" className="rounded-card border border-line bg-raised p-4">
       <h2 id="input-heading" className="text-lead font-bold">
@@ -18,44 +58,50 @@ export function InputPanel({ input, status }: { input: NoteInput; status: InputS
       {ready ? (
         <div className="mt-3 flex flex-wrap gap-4">
           <label className="flex flex-col text-caption font-semibold">
-            MIDI device
+            {microphone ? 'Play with' : 'MIDI device'}
             <select
               className="mt-1 min-w-56 rounded-md border border-line bg-surface px-2 py-1.5 text-body"
-              value={status.selected ?? ''}
-              onChange={(e) => input.selectDevice(e.target.value || null)}
+              value={micOn ? MICROPHONE : status.state === 'ready' ? (status.selected ?? '') : ''}
+              onChange={(e) => pick(e.target.value)}
             >
               <option value="">None (keyboards only)</option>
-              {status.devices.map((d) => (
-                <option key={d.id} value={d.id}>
-                  {d.name}
-                </option>
-              ))}
+              {status.state === 'ready'
+                ? status.devices.map((d) => (
+                    <option key={d.id} value={d.id}>
+                      {d.name}
+                    </option>
+                  ))
+                : null}
+              {microphone ? <option value={MICROPHONE}>Microphone (an acoustic instrument)</option> : null}
             </select>
           </label>
-          <label className="flex flex-col text-caption font-semibold">
-            Channel
-            <select
-              className="mt-1 rounded-md border border-line bg-surface px-2 py-1.5 text-body"
-              value={String(input.channel)}
-              onChange={(e) => input.setChannel(e.target.value === 'all' ? 'all' : Number(e.target.value))}
-            >
-              <option value="all">All channels</option>
-              {CHANNELS.map((c) => (
-                <option key={c} value={c}>
-                  {c}
-                </option>
-              ))}
-            </select>
-          </label>
+          {micOn ? null : (
+            <label className="flex flex-col text-caption font-semibold">
+              Channel
+              <select
+                className="mt-1 rounded-md border border-line bg-surface px-2 py-1.5 text-body"
+                value={String(input.channel)}
+                onChange={(e) => input.setChannel(e.target.value === 'all' ? 'all' : Number(e.target.value))}
+              >
+                <option value="all">All channels</option>
+                {CHANNELS.map((c) => (
+                  <option key={c} value={c}>
+                    {c}
+                  </option>
+                ))}
+              </select>
+            </label>
+          )}
         </div>
       ) : null}
+      {micStatus.state === 'listening' ? <MicPanel mic={mic} /> : null}
       <p
         role="status"
         data-testid="input-status"
-        data-state={status.state}
+        data-state={micOn || micProblem ? `mic-${micStatus.state}` : status.state}
         className={`mt-3 text-body ${problem ? 'text-ember-700 dark:text-ember-100' : 'text-muted'}`}
       >
-        {status.state === 'idle' || status.state === 'starting' ? 'Looking for MIDI devices…' : status.message}
+        {message}
       </p>
       <p className="mt-2 text-caption text-muted">
         Computer keyboard: A S D F G H J K L play the white keys from C, W E T Y U O P the black keys; Z and X move an

@@ -1,6 +1,6 @@
 import { keepPreviousData, queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { ListTakesQuery, ListTakesResponse } from '@shared/schemas/history';
-import type { CreateTakeInput } from '@shared/schemas/takes';
+import type { CreateTakeInput, InputKind } from '@shared/schemas/takes';
 import type { DrillSpec, PlayedNote, ScoreOptions, TakeScore } from '@shared/engine';
 import { ApiError, api } from '@/lib/api-client';
 
@@ -14,6 +14,8 @@ export interface TakeDetail {
   options: ScoreOptions;
   measures: [number, number] | null;
   stoppedAtMs: number | null;
+  /** what it was played on; null for takes stored before this was recorded */
+  inputKind: InputKind | null;
   played: PlayedNote[];
   score: TakeScore;
   key: string;

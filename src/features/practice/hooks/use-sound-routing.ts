@@ -20,6 +20,8 @@ export function useSoundRouting() {
 
   useEffect(() => {
     const offNote = getNoteInput().onNote((e) => {
+      // An acoustic instrument is heard already, and the microphone would hear the echo.
+      if (e.source === 'mic') return;
       if (hear.outputId) sendNote(hear.outputId, e.type, e.midi, e.velocity);
       else if (e.type === 'on') {
         void synth.current.ensure();

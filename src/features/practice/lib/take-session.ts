@@ -13,6 +13,7 @@ import {
   type TakeScore,
   type Verdict,
 } from '@shared/engine';
+import type { InputKind } from '@shared/schemas/takes';
 import type { NoteEvent } from '@/lib/midi-input';
 
 /**
@@ -39,7 +40,16 @@ export interface FinishedTake {
   /** the expected notes scored (fewer when stopped early) */
   expected: DrillNote[];
   stoppedAtMs: number | null;
+  /** what most of the notes came from (null when nothing was played) */
+  inputKind: InputKind | null;
 }
+
+const KIND_OF_SOURCE: Record<NoteEvent['source'], InputKind> = {
+  midi: 'midi',
+  mic: 'microphone',
+  keys: 'keyboard',
+  screen: 'keyboard',
+};
 
 /**
  * How late an input event may reach the page after its own timestamp before any lag has been
@@ -73,6 +83,8 @@ export class TakeSession {
   /** missed marks not shown yet: their match window is still open on the safe clock */
   private held = new Set<number>();
   private shownMarks: ReadonlyMap<number, LiveMark> = new Map();
+  /** notes played from each kind of input */
+  private kinds = new Map<InputKind, number>();
 
   constructor(
     readonly drill: Drill,
@@ -139,6 +151,8 @@ export class TakeSession {
     }
     // A note before the count-in began is not part of the take.
     if (timeMs < -60000) return false;
+    const kind = KIND_OF_SOURCE[e.source];
+    this.kinds.set(kind, (this.kinds.get(kind) ?? 0) + 1);
     const note: PlayedNote = { midi: e.midi, timeMs: Math.round(timeMs * 100) / 100, velocity: e.velocity };
     this.open.set(e.midi, note);
     let at = this.played.length;
@@ -206,7 +220,16 @@ export class TakeSession {
     this.results = new Map(score.results.map((r, i) => [i, { result: r, settled: true }]));
     this.held.clear();
     this.shownMarks = new Map(score.results.map((r, i) => [i, { verdict: r.verdict, settled: true }]));
-    this.finished = { drill: this.drill, options: this.options, played: this.played, score, expected, stoppedAtMs };
+    const inputKind = [...this.kinds].sort((a, b) => b[1] - a[1])[0]?.[0] ?? null;
+    this.finished = {
+      drill: this.drill,
+      options: this.options,
+      played: this.played,
+      score,
+      expected,
+      stoppedAtMs,
+      inputKind,
+    };
     return this.finished;
   }
 
@@ -252,9 +275,4 @@ export class TakeSession {
     this.shownMarks = next;
     return true;
   }
-}
-
-/** The staff class for a note's mark; provisional marks are drawn lighter. */
-export function markClass(mark: LiveMark): string {
-  return `sf-mark-${mark.verdict}${mark.settled ? '' : ' sf-provisional'}`;
 }
