@@ -4,7 +4,9 @@ import { useEffect, useMemo, useRef, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { InputPanel } from '@/components/midi/input-panel';
 import { Button } from '@/components/ui/button';
+import { useMicrophone } from '@/hooks/use-microphone';
 import { useNoteInput } from '@/hooks/use-note-input';
+import { MIC_DEVICE_NAME } from '@/lib/mic-input';
 import { useSetLatency } from '../api/settings';
 import { useSuggestedTempo } from '../api/tempo';
 import { useDrillCycle } from '../hooks/use-drill-cycle';
@@ -61,8 +63,10 @@ export function PracticeRoom({ baseSpec, settings, initialOptions, assignmentId,
   const ladder = useLadder(fullDrill, opts.ladder);
   const { drill, step } = ladder;
 
-  const deviceName =
-    status.state === 'ready' && status.selected
+  const microphone = useMicrophone();
+  const deviceName = microphone.on
+    ? MIC_DEVICE_NAME
+    : status.state === 'ready' && status.selected
       ? (status.devices.find((d) => d.id === status.selected)?.name ?? 'MIDI device')
       : 'Computer keyboard';
   const latencyMs = settings.latency[deviceName] ?? 0;
@@ -287,7 +291,7 @@ export function PracticeRoom({ baseSpec, settings, initialOptions, assignmentId,
 
       <PracticeControls value={opts} onChange={setOpts} disabled={running} hasChord={!!spec.chord} />
       <div className="grid gap-4 md:grid-cols-2">
-        <InputPanel input={input} status={status} />
+        <InputPanel input={input} status={status} microphone />
         <HearYourself value={sound.hear} onChange={sound.setHear} />
       </div>
       <PracticeDefaults settings={settings} />

@@ -36,6 +36,7 @@ export function useTakeQueue() {
         startedAt,
         measures,
         stoppedAtMs: take.stoppedAtMs,
+        inputKind: take.inputKind,
         assignmentId,
       }).then(() => queryClient.invalidateQueries({ queryKey: tempoKey(fullDrill.spec) }));
     },
