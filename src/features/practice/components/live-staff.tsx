@@ -1,12 +1,13 @@
 import type { Drill } from '@shared/engine';
-import { useMemo } from 'react';
 import { DrillStaff } from '@/components/notation/drill-staff';
 import { type LiveMarks, useLiveMarks } from '../lib/live-marks';
-import { markClass } from '../lib/take-session';
 
-/** The staff of the running take: the only part of the page a played note re-renders. */
-export function LiveStaff({ drill, live }: { drill: Drill; live: LiveMarks }) {
+/**
+ * The staff of the running take: the only part of the page a played note re-renders. During a
+ * take the staff carries the first downbeat's performance.now() time (data-downbeat-ms), so a
+ * test or a tool can line its own clock up with the marks.
+ */
+export function LiveStaff({ drill, live, downbeatMs }: { drill: Drill; live: LiveMarks; downbeatMs: number | null }) {
   const { marks, current } = useLiveMarks(live, drill);
-  const classes = useMemo(() => new Map([...marks].map(([i, m]) => [i, markClass(m)])), [marks]);
-  return <DrillStaff drill={drill} marks={classes} current={current} />;
+  return <DrillStaff drill={drill} verdicts={marks} current={current} downbeatMs={downbeatMs} />;
 }

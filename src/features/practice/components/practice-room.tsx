@@ -11,6 +11,7 @@ import { useSetLatency } from '../api/settings';
 import { useSuggestedTempo } from '../api/tempo';
 import { useDrillCycle } from '../hooks/use-drill-cycle';
 import { useLadder } from '../hooks/use-ladder';
+import { useLoop } from '../hooks/use-loop';
 import { useReplay } from '../hooks/use-replay';
 import { usePracticeTake } from '../hooks/use-practice-take';
 import { useSoundRouting } from '../hooks/use-sound-routing';
@@ -22,6 +23,7 @@ import { KeyButtons } from './key-buttons';
 import { LatencyCalibration } from './latency-calibration';
 import { LiveKeyboard } from './live-keyboard';
 import { LiveStaff } from './live-staff';
+import { LoopPanel } from './loop-panel';
 import { type PracticeOptions, PracticeControls } from './practice-controls';
 import { FramedName } from './pitch-label';
 import { PracticeDefaults } from './practice-defaults';
@@ -61,7 +63,16 @@ export function PracticeRoom({ baseSpec, settings, initialOptions, assignmentId,
   );
   const { cycle, keyIndex, setKeyIndex, nextKey, fullDrill } = useDrillCycle(spec, opts.order, wantedKey);
   const ladder = useLadder(fullDrill, opts.ladder);
-  const { drill, step } = ladder;
+  const passage = useLoop(fullDrill, opts.tempo);
+  const looping = passage.loop !== null && passage.drill !== null;
+  // A looped passage, else the ladder's step, else the whole drill.
+  const drill = looping ? passage.drill : ladder.drill;
+  const step = looping ? null : ladder.step;
+  const measures: [number, number] | null = passage.loop
+    ? [passage.loop.from, passage.loop.to]
+    : step
+      ? [step[0], step[1]]
+      : null;
 
   const microphone = useMicrophone();
   const deviceName = microphone.on
@@ -88,13 +99,21 @@ export function PracticeRoom({ baseSpec, settings, initialOptions, assignmentId,
   const take = usePracticeTake((finished, session) => {
     if (!fullDrill || !options) return;
     void save({
-      fullDrill,
+      spec: { ...fullDrill.spec, tempo: finished.drill.spec.tempo },
       take: finished,
-      options,
+      options: finished.options,
       originPerf: session.origin,
-      measures: step ? [step[0], step[1]] : null,
+      measures,
       assignmentId,
     });
+    if (looping) {
+      // Every pass played to the end is followed by the next, at the tempo the climb gives.
+      if (finished.stoppedAtMs === null) {
+        passage.afterTake(finished);
+        autoStart.current = true;
+      }
+      return;
+    }
     if (opts.ladder) ladder.afterTake(finished);
     if (finished.stoppedAtMs === null && (opts.loop || opts.runOn)) {
       autoStart.current = true;
@@ -109,7 +128,8 @@ export function PracticeRoom({ baseSpec, settings, initialOptions, assignmentId,
     take.start({
       drill,
       options,
-      countInMeasures: opts.countIn,
+      // A loop counts every pass in, so the player can breathe and find the tempo.
+      countInMeasures: looping ? Math.max(1, opts.countIn) : opts.countIn,
       click: opts.click,
       pad: opts.pad && !!drill.spec.chord,
       latencyMs,
@@ -186,11 +206,12 @@ export function PracticeRoom({ baseSpec, settings, initialOptions, assignmentId,
         onPick={(i) => {
           setKeyIndex(i);
           ladder.restart();
+          passage.end();
           take.reset();
         }}
       />
 
-      {opts.ladder && step ? (
+      {!looping && opts.ladder && step ? (
         <p
           data-testid="ladder-step"
           data-step={ladder.ladder.step}
@@ -206,7 +227,7 @@ export function PracticeRoom({ baseSpec, settings, initialOptions, assignmentId,
       ) : null}
 
       <div className={`rounded-card border border-line bg-raised p-4 sf-fade-${fade}`}>
-        {drill ? <LiveStaff drill={drill} live={take.live} /> : null}
+        {drill ? <LiveStaff drill={drill} live={take.live} downbeatMs={running ? take.origin : null} /> : null}
         {drill ? (
           <div className="mt-3">
             <LiveKeyboard
@@ -263,6 +284,23 @@ export function PracticeRoom({ baseSpec, settings, initialOptions, assignmentId,
         ))}
       </div>
 
+      {fullDrill ? (
+        <LoopPanel
+          measures={fullDrill.measures}
+          targetTempo={opts.tempo}
+          loop={passage.loop}
+          disabled={running}
+          onStart={(from, to, tempo) => {
+            take.reset();
+            passage.start(from, to, tempo);
+          }}
+          onEnd={() => {
+            passage.end();
+            take.reset();
+          }}
+        />
+      ) : null}
+
       {take.finished ? (
         <TakeResults
           drill={take.finished.drill}
@@ -278,7 +316,7 @@ export function PracticeRoom({ baseSpec, settings, initialOptions, assignmentId,
           }
           onReplay={() => take.finished && replay.play(take.finished.drill, take.finished.played)}
           climb={
-            climb && !step && take.finished.stoppedAtMs === null
+            climb && !measures && take.finished.stoppedAtMs === null
               ? {
                   tempo: climb.tempo,
                   verdict: climb.lastVerdict,

@@ -1,4 +1,4 @@
-import type { Drill, ScoreOptions } from '@shared/engine';
+import type { DrillSpec, ScoreOptions } from '@shared/engine';
 import { useQueryClient } from '@tanstack/react-query';
 import { useCallback, useEffect, useState } from 'react';
 import { onQueueChange, type QueueState, saveTake } from '@/lib/take-queue';
@@ -6,8 +6,8 @@ import { tempoKey } from '../api/tempo';
 import type { FinishedTake } from '../lib/take-session';
 
 export interface TakeToSave {
-  /** the whole drill the take belongs to (a ladder step or a loop is a passage of it) */
-  fullDrill: Drill;
+  /** the whole drill the take belongs to, at the take's tempo (a ladder step or a loop pass is a passage of it) */
+  spec: DrillSpec;
   take: FinishedTake;
   options: ScoreOptions;
   /** the take session's performance.now() origin, turned into the take's wall-clock start */
@@ -26,11 +26,11 @@ export function useTakeQueue() {
   useEffect(() => onQueueChange(setQueue), []);
 
   const save = useCallback(
-    ({ fullDrill, take, options, originPerf, measures, assignmentId }: TakeToSave) => {
+    ({ spec, take, options, originPerf, measures, assignmentId }: TakeToSave) => {
       const startedAt = new Date(Date.now() - (performance.now() - originPerf)).toISOString();
       return saveTake({
         id: crypto.randomUUID(),
-        spec: fullDrill.spec,
+        spec,
         played: take.played,
         options,
         startedAt,
@@ -38,7 +38,7 @@ export function useTakeQueue() {
         stoppedAtMs: take.stoppedAtMs,
         inputKind: take.inputKind,
         assignmentId,
-      }).then(() => queryClient.invalidateQueries({ queryKey: tempoKey(fullDrill.spec) }));
+      }).then(() => queryClient.invalidateQueries({ queryKey: tempoKey(spec) }));
     },
     [queryClient],
   );

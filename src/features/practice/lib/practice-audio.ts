@@ -56,6 +56,8 @@ export async function startBacking(
   const [beats] = drill.spec.meter;
   const beatUnit = 4 / drill.spec.meter[1];
   const secPerUnit = (60 / drill.spec.tempo) * beatUnit;
+  // The last moment anything scheduled still sounds: nothing may be torn down before it.
+  let lastAt = Tone.now();
   for (const e of events) {
     const at = zero + e.time;
     if (at < Tone.now()) continue;
@@ -65,19 +67,29 @@ export async function startBacking(
         if (beatInBar !== 1 && beatInBar !== 3) continue;
       }
       clickSynth.triggerAttackRelease(e.accent ? 1760 : 1320, 0.02, at, e.accent ? 1 : 0.6);
+      lastAt = Math.max(lastAt, at + 0.05);
     } else if (e.kind === 'pad') {
       pad.triggerAttackRelease(e.midis.map(hz), e.duration, at, 0.5);
+      lastAt = Math.max(lastAt, at + e.duration + 0.5);
     }
   }
   return {
     stop() {
       const now = Tone.now();
+      // Silent at once; torn down only once everything scheduled has passed. Disposing a synth
+      // with notes still scheduled leaves the audio graph to disconnect nodes that are gone
+      // (the browser throws InvalidAccessError).
+      clickSynth.volume.value = Number.NEGATIVE_INFINITY;
+      pad.volume.value = Number.NEGATIVE_INFINITY;
       clickSynth.triggerRelease(now);
       pad.releaseAll(now);
-      setTimeout(() => {
-        clickSynth.dispose();
-        pad.dispose();
-      }, 600);
+      setTimeout(
+        () => {
+          clickSynth.dispose();
+          pad.dispose();
+        },
+        Math.max(0.6, lastAt - now + 1) * 1000,
+      );
     },
   };
 }
