@@ -2,9 +2,10 @@ import { useSearchParams } from 'react-router-dom';
 import type { MapFilters } from '@/features/maps/api/maps';
 import { BeatMap } from '@/features/maps/components/beat-map';
 import { KeyMap } from '@/features/maps/components/key-map';
-import { PracticeCalendar } from '@/features/maps/components/practice-calendar';
+import { PracticeLog } from '@/features/maps/components/practice-log';
 import { ProgressCharts } from '@/features/maps/components/progress-charts';
 import { RangeMap } from '@/features/maps/components/range-map';
+import { WeeklyByDrill } from '@/features/maps/components/weekly-by-drill';
 
 /** The text filters match exactly, so each shows an example of what it takes. */
 const FILTER_EXAMPLES = { instrument: 'piano', pattern: 'four-three', pair: 'D/C' } as const;
@@ -28,7 +29,8 @@ export function ProgressRoute() {
       <header>
         <h1 className="text-display">Progress</h1>
         <p className="mt-2 text-muted">
-          Darker cells: more notes not hit. Hover or focus a cell for its numbers; each map also reads as a table.
+          On the maps, darker cells mean more notes not hit; a key with no notes yet is hatched, apart from any score.
+          Hover or focus a cell or bar for its figures; each map also reads as a table.
         </p>
       </header>
       <form className="flex flex-wrap gap-3" aria-label="Filter the maps" onSubmit={(e) => e.preventDefault()}>
@@ -58,8 +60,9 @@ export function ProgressRoute() {
       <KeyMap filters={filters} />
       <RangeMap filters={filters} />
       <BeatMap filters={filters} />
+      <WeeklyByDrill filters={filters} />
       <ProgressCharts filters={filters} />
-      <PracticeCalendar filters={filters} />
+      <PracticeLog filters={filters} ownGoal={!filters.player} />
     </section>
   );
 }

@@ -5,6 +5,7 @@ import { useLeaveStudio, useStudio } from '@/features/studios/api/studios';
 import { AssignmentForm } from '@/features/studios/components/assignment-form';
 import { InviteForm } from '@/features/studios/components/invite-form';
 import { MyAssignments } from '@/features/studios/components/my-assignments';
+import { StudioAssignments } from '@/features/studios/components/studio-assignments';
 import { StudioBoard } from '@/features/studios/components/studio-board';
 
 /** A studio: the teacher's table, invites and new assignments; a player's assignments and a way out. */
@@ -55,6 +56,7 @@ export function StudioDetailRoute() {
         </p>
       </header>
       <StudioBoard studioId={studio.id} />
+      <StudioAssignments studioId={studio.id} />
       <Card className="grid gap-3">
         <h2 className="text-lead font-bold">New assignment</h2>
         <AssignmentForm studioId={studio.id} />

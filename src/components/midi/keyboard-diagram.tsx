@@ -1,4 +1,4 @@
-import { memo, type PointerEvent } from 'react';
+import { memo, type PointerEvent, useEffect, useRef } from 'react';
 
 const BLACK = new Set([1, 3, 6, 8, 10]);
 const NAMES = ['C', 'C#', 'D', 'D#', 'E', 'F', 'F#', 'G', 'G#', 'A', 'A#', 'B'];
@@ -48,6 +48,17 @@ export const KeyboardDiagram = memo(function KeyboardDiagram({
     const left = whiteX.get(m - 1);
     if (left !== undefined) blacks.push({ midi: m, x: left + w * 0.68 });
   }
+  // On a narrow screen the keys keep a size a finger can find; the drawing scrolls sideways
+  // instead (starting on middle C when that is drawn), so it never shrinks to slivers.
+  const minWidth = whites.length * (onNote ? 20 : 14);
+  const scroller = useRef<HTMLDivElement>(null);
+  const c4 = whiteX.get(60);
+  // biome-ignore lint/correctness/useExhaustiveDependencies: only a new span moves the view, not new marks
+  useEffect(() => {
+    const el = scroller.current;
+    if (!el || c4 === undefined || el.scrollWidth <= el.clientWidth) return;
+    el.scrollLeft = (c4 / width) * el.scrollWidth - el.clientWidth / 3;
+  }, [low, high]);
   const outside = (m: number) => (reach ? m < reach.low || m > reach.high : false);
   const handlers = (midi: number) =>
     onNote
@@ -62,63 +73,66 @@ export const KeyboardDiagram = memo(function KeyboardDiagram({
         }
       : {};
   return (
-    <svg
-      viewBox={`0 0 ${width} ${height}`}
-      className="h-auto w-full touch-none select-none"
-      role={onNote ? 'group' : 'img'}
-      aria-label={label}
-      preserveAspectRatio="xMidYMid meet"
-    >
-      {whites.map((m) => {
-        const mark = marks?.get(m);
-        return (
-          <rect
-            key={m}
-            x={whiteX.get(m)}
-            y={0}
-            width={w - 1}
-            height={height}
-            rx={3}
-            data-midi={m}
-            className={`${mark ? mark.className : outside(m) ? 'fill-line' : 'fill-white'} stroke-ink-300`}
-            aria-label={mark ? `${keyLabel(m)}: ${mark.label}` : undefined}
-            {...handlers(m)}
-          >
-            {mark ? <title>{`${keyLabel(m)}: ${mark.label}`}</title> : null}
-          </rect>
-        );
-      })}
-      {blacks.map(({ midi, x }) => {
-        const mark = marks?.get(midi);
-        return (
-          <rect
-            key={midi}
-            x={x}
-            y={0}
-            width={w * 0.64}
-            height={height * 0.6}
-            rx={2}
-            data-midi={midi}
-            className={`${mark ? mark.className : outside(midi) ? 'fill-ink-300' : 'fill-ink-900'} stroke-ink-900`}
-            {...handlers(midi)}
-          >
-            {mark ? <title>{`${keyLabel(midi)}: ${mark.label}`}</title> : null}
-          </rect>
-        );
-      })}
-      {whites
-        .filter((m) => m % 12 === 0)
-        .map((m) => (
-          <text
-            key={`c${m}`}
-            x={(whiteX.get(m) ?? 0) + w / 2}
-            y={height - 6}
-            textAnchor="middle"
-            className="pointer-events-none fill-ink-500 text-[9px]"
-          >
-            {keyLabel(m)}
-          </text>
-        ))}
-    </svg>
+    <div ref={scroller} className="overflow-x-auto">
+      <svg
+        viewBox={`0 0 ${width} ${height}`}
+        style={{ minWidth }}
+        className="h-auto w-full touch-none select-none"
+        role={onNote ? 'group' : 'img'}
+        aria-label={label}
+        preserveAspectRatio="xMidYMid meet"
+      >
+        {whites.map((m) => {
+          const mark = marks?.get(m);
+          return (
+            <rect
+              key={m}
+              x={whiteX.get(m)}
+              y={0}
+              width={w - 1}
+              height={height}
+              rx={3}
+              data-midi={m}
+              className={`${mark ? mark.className : outside(m) ? 'fill-line' : 'fill-white'} stroke-ink-300`}
+              aria-label={mark ? `${keyLabel(m)}: ${mark.label}` : undefined}
+              {...handlers(m)}
+            >
+              {mark ? <title>{`${keyLabel(m)}: ${mark.label}`}</title> : null}
+            </rect>
+          );
+        })}
+        {blacks.map(({ midi, x }) => {
+          const mark = marks?.get(midi);
+          return (
+            <rect
+              key={midi}
+              x={x}
+              y={0}
+              width={w * 0.64}
+              height={height * 0.6}
+              rx={2}
+              data-midi={midi}
+              className={`${mark ? mark.className : outside(midi) ? 'fill-ink-300' : 'fill-ink-900'} stroke-ink-900`}
+              {...handlers(midi)}
+            >
+              {mark ? <title>{`${keyLabel(midi)}: ${mark.label}`}</title> : null}
+            </rect>
+          );
+        })}
+        {whites
+          .filter((m) => m % 12 === 0)
+          .map((m) => (
+            <text
+              key={`c${m}`}
+              x={(whiteX.get(m) ?? 0) + w / 2}
+              y={height - 6}
+              textAnchor="middle"
+              className="pointer-events-none fill-ink-500 text-[9px]"
+            >
+              {keyLabel(m)}
+            </text>
+          ))}
+      </svg>
+    </div>
   );
 });

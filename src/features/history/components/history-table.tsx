@@ -3,6 +3,7 @@ import { KEYS, TAKE_SORTS } from '@shared/schemas/history';
 import { type ColumnDef, flexRender, getCoreRowModel, type SortingState, useReactTable } from '@tanstack/react-table';
 import { Link, useSearchParams } from 'react-router-dom';
 import { type TakeListParams, useTakes } from '../api/takes';
+import { TableScroll } from '@/components/ui/table-scroll';
 
 const when = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 
@@ -110,8 +111,8 @@ export function HistoryTable() {
         ))}
       </form>
       {error ? <p role="alert">{error.message}</p> : null}
-      <div className="overflow-x-auto rounded-card border border-line bg-raised" aria-busy={isFetching}>
-        <table className="w-full text-left text-body" data-testid="history-table">
+      <TableScroll label="Takes, scrolls sideways">
+        <table className="w-full text-left text-body" data-testid="history-table" aria-busy={isFetching}>
           <caption className="sr-only">Takes, {data ? `${data.total} in all` : 'loading'}</caption>
           <thead className="border-b border-line text-caption uppercase tracking-wider text-muted">
             {table.getHeaderGroups().map((hg) => (
@@ -157,7 +158,7 @@ export function HistoryTable() {
         </table>
         {isPending ? <p className="p-4 text-muted">Loading takes…</p> : null}
         {data && data.total === 0 ? <p className="p-4 text-muted">No takes match.</p> : null}
-      </div>
+      </TableScroll>
       <nav className="flex items-center gap-3" aria-label="Pages">
         <button
           type="button"

@@ -1,4 +1,4 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { MapQuery } from '@shared/schemas/maps';
 import type {
   BeatMapResponse,
@@ -7,7 +7,9 @@ import type {
   NextResponse,
   RangeMapResponse,
   TimelineResponse,
+  WeeklyResponse,
 } from '@shared/schemas/maps';
+import type { SettingsResponse } from '@shared/schemas/settings';
 import { api } from '@/lib/api-client';
 
 export const mapsKey = ['maps'] as const;
@@ -38,3 +40,17 @@ export const useTimeline = (f: MapFilters) =>
 export const useCalendar = (f: MapFilters) =>
   useQuery(mapQuery<CalendarResponse>('calendar', { ...f, tz: localTimeZone() } as MapFilters));
 export const useWhatNext = () => useQuery(mapQuery<NextResponse>('next', {}));
+export const useWeekly = (f: MapFilters) =>
+  useQuery(mapQuery<WeeklyResponse>('weekly', { ...f, tz: localTimeZone() } as MapFilters));
+
+/** The player sets (or clears, with null) their weekly minutes goal; the practice log redraws. */
+export function useSetWeeklyGoal() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (weeklyMinutesGoal: number | null) => api.put<SettingsResponse>('/api/settings', { weeklyMinutesGoal }),
+    onSuccess: (data) => {
+      queryClient.setQueryData(['settings'], data);
+      void queryClient.invalidateQueries({ queryKey: [...mapsKey, 'calendar'] });
+    },
+  });
+}

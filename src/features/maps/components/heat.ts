@@ -25,3 +25,6 @@ export const HEAT_CSS = Array.from(
 export const pct = (rate: number) => `${Math.round(rate * 100)}%`;
 export const cellWords = (what: string, c: { notes: number; errors: number; rate: number }) =>
   `${what}: ${pct(c.rate)} not hit (${c.errors} of ${c.notes} notes)`;
+
+/** Keys with no notes yet: hatched, so they stand apart from every step of the scale. */
+export const NO_DATA_CSS = `.sf-nodata{fill:url(#sf-nodata-hatch)}`;

@@ -1,8 +1,10 @@
 import { KEYS } from '@shared/schemas/history';
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
+import { TableScroll } from '@/components/ui/table-scroll';
 import { type MapFilters, useKeyMap } from '../api/maps';
 import { cellWords, heatColour, pct } from './heat';
+import { HeatLegend } from './heat-legend';
 import { MapFrame, MapTable } from './map-table';
 
 /** Error rate per key x pattern; each cell opens its takes in the history. */
@@ -26,8 +28,9 @@ export function KeyMap({ filters, historyBase = '/history' }: { filters: MapFilt
           rows={cells.map((c) => [c.key, c.pattern, c.notes, c.errors, pct(c.rate)])}
         />
       ) : null}
+      {cells.length > 0 && !tableView ? <HeatLegend noData="dashed" /> : null}
       {cells.length > 0 && !tableView ? (
-        <div className="overflow-x-auto">
+        <TableScroll label="Key map, scrolls sideways">
           <table className="border-separate border-spacing-1 text-caption" data-testid="key-map">
             <caption className="sr-only">Key map: error rate per key (columns) and pattern (rows)</caption>
             <thead>
@@ -54,7 +57,7 @@ export function KeyMap({ filters, historyBase = '/history' }: { filters: MapFilt
                       return (
                         <td
                           key={k}
-                          className="h-10 w-12 rounded border border-dashed border-line"
+                          className="h-10 w-12 rounded border border-dashed border-muted"
                           title={`${k}, ${p}: not played`}
                         />
                       );
@@ -77,7 +80,7 @@ export function KeyMap({ filters, historyBase = '/history' }: { filters: MapFilt
               ))}
             </tbody>
           </table>
-        </div>
+        </TableScroll>
       ) : null}
     </MapFrame>
   );

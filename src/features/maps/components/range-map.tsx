@@ -2,7 +2,8 @@ import { instruments, type InstrumentId } from '@shared/engine';
 import { useState } from 'react';
 import { type KeyMark, KeyboardDiagram, keyLabel } from '@/components/midi/keyboard-diagram';
 import { type MapFilters, useRangeMap } from '../api/maps';
-import { cellWords, HEAT_CSS, heatColour, heatStep, pct } from './heat';
+import { cellWords, HEAT_CSS, heatColour, heatStep, NO_DATA_CSS, pct } from './heat';
+import { HeatLegend, NoDataPattern } from './heat-legend';
 import { MapFrame, MapTable } from './map-table';
 
 /** Error rate per pitch, drawn on a keyboard over the instrument's range. */
@@ -15,12 +16,16 @@ export function RangeMap({ filters }: { filters: MapFilters }) {
   const played = cells.map((c) => c.midi);
   const low = Math.min(inst?.range.low ?? 127, ...played);
   const high = Math.max(inst?.range.high ?? 0, ...played);
-  const marks = new Map<number, KeyMark>(
-    cells.map((c) => [c.midi, { className: `sf-heat-${heatStep(c.rate)}`, label: cellWords('', c).slice(2) }]),
-  );
+  const start = low - (low % 12);
+  const marks = new Map<number, KeyMark>();
+  // Every key drawn without notes is hatched, so no plain key is read as a score.
+  for (let m = start; m <= high; m++) marks.set(m, { className: 'sf-nodata stroke-ink-300', label: 'no notes yet' });
+  for (const c of cells)
+    marks.set(c.midi, { className: `sf-heat-${heatStep(c.rate)}`, label: cellWords('', c).slice(2) });
   return (
     <MapFrame title="Range map" tableView={tableView} onToggle={() => setTableView((v) => !v)}>
-      <style>{HEAT_CSS}</style>
+      <style>{`${HEAT_CSS}\n${NO_DATA_CSS}`}</style>
+      <NoDataPattern />
       {error ? <p role="alert">{error.message}</p> : null}
       {data && cells.length === 0 ? <p className="text-muted">No notes match these filters yet.</p> : null}
       {cells.length > 0 && tableView ? (
@@ -32,8 +37,9 @@ export function RangeMap({ filters }: { filters: MapFilters }) {
       ) : null}
       {cells.length > 0 && !tableView ? (
         <div className="grid gap-2" data-testid="range-map">
+          <HeatLegend noData="hatched" />
           <KeyboardDiagram
-            low={low - (low % 12)}
+            low={start}
             high={high}
             marks={marks}
             reach={inst?.range}

@@ -1,5 +1,10 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { AssignmentResponse, AssignmentsResponse, CreateAssignmentInput } from '@shared/schemas/assignments';
+import type {
+  AssignmentResponse,
+  AssignmentsResponse,
+  AssignmentWeeklyResponse,
+  CreateAssignmentInput,
+} from '@shared/schemas/assignments';
 import type { SavedDrillsResponse } from '@shared/schemas/drills';
 import { api } from '@/lib/api-client';
 import { studiosKey } from './studios';
@@ -46,4 +51,16 @@ export function practiceLink(
   const q = new URLSearchParams({ drill: a.savedDrillId, assignment: a.id, tempo: String(a.targetTempo) });
   if (key) q.set('key', key);
   return `/practice?${q.toString()}`;
+}
+
+/** Week over week for one assignment: the teacher gets every player, a player themselves. */
+export function useAssignmentWeekly(id: string) {
+  const tz = Intl.DateTimeFormat().resolvedOptions().timeZone || 'UTC';
+  return useQuery({
+    queryKey: ['assignments', id, 'weekly', tz],
+    queryFn: () =>
+      api.get<AssignmentWeeklyResponse>(
+        `/api/assignments/${encodeURIComponent(id)}/weekly?tz=${encodeURIComponent(tz)}`,
+      ),
+  });
 }

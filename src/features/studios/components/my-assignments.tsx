@@ -1,5 +1,6 @@
 import { Link } from 'react-router-dom';
 import { practiceLink, useMyAssignments } from '../api/assignments';
+import { AssignmentTrend, creditRule } from './assignment-trend';
 import { dueFormat, pct, StatusBadge } from './status-badge';
 
 /** A player's assignments, open and overdue first, each started in one click. */
@@ -8,7 +9,7 @@ export function MyAssignments() {
   if (isPending) return <p className="text-muted">Looking up your assignments…</p>;
   if (error)
     return (
-      <p role="alert" className="text-ember-700">
+      <p role="alert" className="text-ember-700 dark:text-ember-100">
         {error.message}
       </p>
     );
@@ -31,6 +32,15 @@ export function MyAssignments() {
                 {pct(a.targetAccuracy)} · {a.keysMet.length}/{a.keys.length} {a.keys.length === 1 ? 'key' : 'keys'}
               </p>
               {a.note ? <p className="mt-1 text-body">{a.note}</p> : null}
+              <p className="mt-1 text-caption text-muted" data-testid="credit-rule">
+                {creditRule(a)}
+              </p>
+              <details className="mt-2">
+                <summary className="cursor-pointer text-caption font-semibold">Week over week</summary>
+                <div className="mt-2">
+                  <AssignmentTrend assignmentId={a.id} />
+                </div>
+              </details>
             </div>
             {href && a.status !== 'met' ? (
               <Link

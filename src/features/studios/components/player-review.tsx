@@ -1,5 +1,7 @@
 import { Link } from 'react-router-dom';
 import { useStudioPlayer } from '../api/board';
+import { TableScroll } from '@/components/ui/table-scroll';
+import { AssignmentTrend, creditRule } from './assignment-trend';
 import { dueFormat, pct, StatusBadge } from './status-badge';
 
 const when = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
@@ -10,7 +12,7 @@ export function PlayerReview({ studioId, playerId }: { studioId: string; playerI
   if (isPending) return <p className="text-muted">Loading…</p>;
   if (error)
     return (
-      <p role="alert" className="text-ember-700">
+      <p role="alert" className="text-ember-700 dark:text-ember-100">
         {error.message}
       </p>
     );
@@ -32,11 +34,15 @@ export function PlayerReview({ studioId, playerId }: { studioId: string; playerI
       <section className="grid gap-2">
         <h2 className="text-lead font-bold">Assignments</h2>
         {data.assignments.length === 0 ? <p className="text-muted">None set yet.</p> : null}
-        <ul className="grid gap-1">
+        <ul className="grid gap-3">
           {data.assignments.map((a) => (
-            <li key={a.id}>
-              {a.status ? <StatusBadge status={a.status} /> : null} {a.title} · due{' '}
-              {dueFormat.format(new Date(a.dueAt))} · {a.keysMet.length}/{a.keys.length} keys
+            <li key={a.id} className="grid gap-1 rounded-card border border-line bg-raised p-3">
+              <span>
+                {a.status ? <StatusBadge status={a.status} /> : null} {a.title} · due{' '}
+                {dueFormat.format(new Date(a.dueAt))} · {a.keysMet.length}/{a.keys.length} keys
+              </span>
+              <span className="text-caption text-muted">{creditRule(a)}</span>
+              <AssignmentTrend assignmentId={a.id} playerId={playerId} />
             </li>
           ))}
         </ul>
@@ -44,34 +50,47 @@ export function PlayerReview({ studioId, playerId }: { studioId: string; playerI
       <section className="grid gap-2">
         <h2 className="text-lead font-bold">Takes</h2>
         {data.takes.length === 0 ? <p className="text-muted">No takes yet.</p> : null}
-        <table className="w-full text-left text-body" data-testid="player-takes">
-          <thead className="text-caption text-muted">
-            <tr>
-              <th className="py-1">When</th>
-              <th>Drill</th>
-              <th>Tempo</th>
-              <th>Accuracy</th>
-              <th>Remarks</th>
-            </tr>
-          </thead>
-          <tbody>
-            {data.takes.map((t) => (
-              <tr key={t.id} className="border-t border-line">
-                <td className="py-1">
-                  <Link className="underline" to={`/takes/${t.id}`}>
-                    {when.format(new Date(t.startedAt))}
-                  </Link>
-                </td>
-                <td>
-                  {t.pair} · {t.pattern} · {t.key}
-                </td>
-                <td>{t.tempo}</td>
-                <td>{pct(t.accuracy)}</td>
-                <td>{t.remarkCount || ''}</td>
+        <TableScroll label="Their takes, scrolls sideways">
+          <table className="w-full text-left text-body" data-testid="player-takes">
+            <caption className="sr-only">Takes</caption>
+            <thead className="text-caption text-muted">
+              <tr>
+                <th scope="col" className="px-3 py-2">
+                  When
+                </th>
+                <th scope="col" className="px-3 py-2">
+                  Drill
+                </th>
+                <th scope="col" className="px-3 py-2">
+                  Tempo
+                </th>
+                <th scope="col" className="px-3 py-2">
+                  Accuracy
+                </th>
+                <th scope="col" className="px-3 py-2">
+                  Remarks
+                </th>
               </tr>
-            ))}
-          </tbody>
-        </table>
+            </thead>
+            <tbody>
+              {data.takes.map((t) => (
+                <tr key={t.id} className="border-t border-line">
+                  <td className="whitespace-nowrap px-3 py-2">
+                    <Link className="underline" to={`/takes/${t.id}`}>
+                      {when.format(new Date(t.startedAt))}
+                    </Link>
+                  </td>
+                  <td className="whitespace-nowrap px-3 py-2">
+                    {t.pair} · {t.pattern} · {t.key}
+                  </td>
+                  <td className="px-3 py-2 tabular-nums">{t.tempo}</td>
+                  <td className="px-3 py-2 tabular-nums">{pct(t.accuracy)}</td>
+                  <td className="px-3 py-2">{t.remarkCount || ''}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </TableScroll>
       </section>
     </div>
   );

@@ -1,34 +1,13 @@
 import { Link } from 'react-router-dom';
+import { TrendBars, trendDomain } from '@/components/charts/trend-bars';
+import { TableScroll } from '@/components/ui/table-scroll';
 import { useBoard } from '../api/board';
 import { dueFormat, pct, StatusBadge } from './status-badge';
 
 const dayFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium' });
 
-/** Six weeks of mean accuracy as small bars, oldest first; an empty week is a dot. */
-/** Bars start at 50% accuracy: a working studio lives between 80% and 100%, where the change is. */
-const TREND_FLOOR = 0.5;
-
-function Trend({ weeks }: { weeks: (number | null)[] }) {
-  const known = weeks.filter((w): w is number => w !== null);
-  const label = known.length
-    ? `Accuracy by week, oldest first (bars from 50% to 100%): ${weeks.map((w) => pct(w)).join(', ')}`
-    : 'No takes in six weeks';
-  return (
-    <span className="inline-flex h-6 items-end gap-0.5" role="img" aria-label={label} title={label}>
-      {weeks.map((w, i) => (
-        <span
-          key={i}
-          className={w === null ? 'h-1 w-2 rounded-sm bg-line' : 'w-2 rounded-sm bg-brass-500'}
-          style={
-            w === null
-              ? undefined
-              : { height: `${Math.max(8, ((Math.max(TREND_FLOOR, w) - TREND_FLOOR) / (1 - TREND_FLOOR)) * 100)}%` }
-          }
-        />
-      ))}
-    </span>
-  );
-}
+/** The board's weeks count back from now in sevens of days, oldest first. */
+const WEEK_LABELS = ['5 weeks ago', '4 weeks ago', '3 weeks ago', '2 weeks ago', 'last week', 'the last 7 days'];
 
 /** Players x assignments: each status, last practice and the accuracy trend (the teacher's table). */
 export function StudioBoard({ studioId }: { studioId: string }) {
@@ -36,13 +15,18 @@ export function StudioBoard({ studioId }: { studioId: string }) {
   if (isPending) return <p className="text-muted">Loading the studio table…</p>;
   if (error)
     return (
-      <p role="alert" className="text-ember-700">
+      <p role="alert" className="text-ember-700 dark:text-ember-100">
         {error.message}
       </p>
     );
   if (data.rows.length === 0) return <p className="text-muted">No players yet: invite them by e-mail below.</p>;
+  // One scale for every row, from the figures in the table, so rows compare at a glance.
+  const domain = trendDomain(
+    data.rows.flatMap((r) => r.trend),
+    { minSpan: 0.1, floor: 0, ceiling: 1 },
+  );
   return (
-    <div className="overflow-x-auto rounded-card border border-line bg-raised">
+    <TableScroll label="Players and assignments, scrolls sideways">
       <table className="w-full text-left text-body" data-testid="studio-board">
         <caption className="sr-only">Players and assignments</caption>
         <thead className="border-b border-line text-caption text-muted">
@@ -84,7 +68,13 @@ export function StudioBoard({ studioId }: { studioId: string }) {
                 {r.lastPracticeAt ? dayFormat.format(new Date(r.lastPracticeAt)) : 'Not yet'}
               </td>
               <td className="whitespace-nowrap px-3 py-2">
-                <Trend weeks={r.trend} />{' '}
+                <TrendBars
+                  values={r.trend}
+                  labels={WEEK_LABELS}
+                  format={(v) => pct(v)}
+                  what={`${r.player.name}'s accuracy`}
+                  domain={domain}
+                />{' '}
                 <span className="ml-2 text-caption text-muted">
                   {r.takesThisWeek} {r.takesThisWeek === 1 ? 'take' : 'takes'} this week
                 </span>
@@ -93,6 +83,6 @@ export function StudioBoard({ studioId }: { studioId: string }) {
           ))}
         </tbody>
       </table>
-    </div>
+    </TableScroll>
   );
 }
