@@ -1,9 +1,10 @@
 import { mkdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { type DrillSpec, generateDrill, notate } from '../../shared/engine';
+import { randomUUID } from 'node:crypto';
+import { type DrillSpec, generateDrill, notate, type PlayedNote, type Verdict } from '../../shared/engine';
 import { type BrowserSession, openBrowser, signInThroughPage } from '../helpers/browser';
-import { createUser, type TestUser } from '../helpers/factories';
+import { createUser, signedIn, type TestUser } from '../helpers/factories';
 import { startTestServer } from '../helpers/test-server';
 
 /** Screenshots for a person to look at (not compared by the test). */
@@ -144,6 +145,66 @@ describe('the staff drawn from the notation model, in Chromium', () => {
     await low.fill('C#4');
     await page.getByText('Sounds E3 concert (MIDI 52)').waitFor();
     await page.waitForFunction(() => new URL(location.href).searchParams.get('spec')?.includes('"low":52'));
+  });
+
+  it('marks a stored take with a shape per verdict, readable in both themes', async () => {
+    const { page } = b;
+    // At 100 bpm the hit window is 75 ms and the match window 150 ms (the scorer's defaults).
+    const spec: DrillSpec = { ...ALTO, tempo: 100, range: { low: 52, high: 72 } };
+    const drill = generateDrill(spec);
+    const plan: Verdict[] = ['hit', 'early', 'late', 'wrong', 'missed'];
+    const played: PlayedNote[] = [];
+    drill.notes.forEach((n, i) => {
+      const t = n.beat * 600;
+      const want = plan[i % plan.length];
+      if (want === 'missed') return;
+      const offset = want === 'early' ? -115 : want === 'late' ? 115 : 0;
+      played.push({ midi: want === 'wrong' ? n.midi + 1 : n.midi, timeMs: t + offset, velocity: 80 });
+    });
+    const api = await signedIn(server.app, player);
+    const res = await api.post('/api/takes', {
+      id: randomUUID(),
+      spec,
+      played,
+      options: { tempo: 100, mode: 'timed' },
+      startedAt: new Date().toISOString(),
+    });
+    expect(res.status).toBe(201);
+    const take = res.body.take as { id: string };
+    const stored = (await api.get(`/api/takes/${take.id}`)).body.take as {
+      score: { results: Array<{ verdict: Verdict }> };
+    };
+    await page.goto(`${server.url}/takes/${take.id}`, { waitUntil: 'networkidle' });
+    await page.waitForFunction(
+      (n) =>
+        document.querySelectorAll('[data-testid="drill-staff"] [data-verdict]:not([data-verdict=""])').length === n,
+      drill.notes.length,
+    );
+    const drawn = await page
+      .locator('[data-testid="drill-staff"] [data-index]')
+      .evaluateAll((els) =>
+        els
+          .map(
+            (el) =>
+              [
+                Number(el.getAttribute('data-index')),
+                el.getAttribute('data-verdict'),
+                el.getAttribute('data-settled'),
+              ] as const,
+          )
+          .sort((x, y) => x[0] - y[0]),
+      );
+    expect(drawn.map((d) => d[1])).toEqual(stored.score.results.map((r) => r.verdict));
+    expect(drawn.every((d) => d[2] === 'true')).toBe(true);
+    // Every verdict the take holds is drawn by its own shape under the note.
+    const verdicts = new Set(stored.score.results.map((r) => r.verdict));
+    expect(verdicts.size).toBeGreaterThanOrEqual(4);
+    for (const v of verdicts) expect(await page.locator(`.vf-sf-marks .sf-mark-${v}`).count()).toBeGreaterThan(0);
+    const staff = page.getByTestId('drill-staff').first();
+    await staff.screenshot({ path: join(shots, 'take-marks-light.png') });
+    await page.evaluate(() => document.documentElement.classList.add('dark'));
+    await staff.screenshot({ path: join(shots, 'take-marks-dark.png') });
+    await page.evaluate(() => document.documentElement.classList.remove('dark'));
   });
 
   it('prints the key cycle through the same staff', async () => {

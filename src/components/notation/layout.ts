@@ -59,3 +59,9 @@ export function planSystems(measures: NotatedMeasure[], staves: number, usable: 
   }
   return systems;
 }
+
+/** The narrowest line that holds the drill's busiest measure, a little tighter than its natural width. */
+export function narrowestLine(notation: { staves: unknown[]; measures: NotatedMeasure[] }): number {
+  const widest = Math.max(96, ...notation.measures.map((m) => naturalWidth(m, notation.staves.length)));
+  return widest * 0.85 + CLEF_ROOM + TIME_ROOM;
+}

@@ -12,7 +12,7 @@ import VexFlow, { BarlineType, Font, Formatter, Renderer, Stave, StaveConnector 
 import { drawCellTag, drawChordSymbol, drawOttava } from './lanes';
 import { MarkLayer, type NoteGeometry } from './marks';
 import { type BuiltStaffMeasure, buildStaffMeasure, type DrawnEvent } from './measure';
-import { BRACE_ROOM, planSystems, type SystemPlan } from './layout';
+import { BRACE_ROOM, narrowestLine, planSystems, type SystemPlan } from './layout';
 import { vexClef } from './pitch';
 import { aChromasOf, triadOf } from './triad-of';
 
@@ -192,14 +192,17 @@ export async function renderStaff(
   host: HTMLElement,
   drill: Drill,
   notation: Notation,
-  width: number,
+  givenWidth: number,
   options: RenderOptions = {},
 ): Promise<RenderedStaff> {
   await loadNotationFonts();
   host.replaceChildren();
   const grand = notation.staves.length > 1;
   const x0 = LEFT + (grand ? BRACE_ROOM : 0);
-  const usable = Math.max(240, width - x0 - 6);
+  // On a narrow screen, lay out at least one measure at a readable spacing and let the drawing
+  // scale down to the width (a squeezed bar would run its accidentals and brackets together).
+  const width = Math.max(givenWidth, Math.ceil(narrowestLine(notation) + x0 + 6));
+  const usable = width - x0 - 6;
   const plans = planSystems(notation.measures, notation.staves.length, usable);
 
   // First pass: build each line at y = 0 to see how far its notes reach, then stack the lines.
