@@ -11,6 +11,7 @@ const sections: Array<[string, () => Promise<{ run: () => Promise<void> }>]> = [
   ['takes-load', () => import('./takes-load')],
   ['live-marks', () => import('./live-marks')],
   ['listening', () => import('./listening')],
+  ['bundle', () => import('./bundle')],
 ];
 
 const only = process.argv.slice(2);

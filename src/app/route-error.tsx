@@ -1,5 +1,5 @@
-import { useEffect } from 'react';
-import { isRouteErrorResponse, Link, useRouteError } from 'react-router-dom';
+import { Component, type ErrorInfo, type ReactNode, useEffect } from 'react';
+import { Link } from 'react-router-dom';
 
 /** Set once per tab: a page chunk that failed to load gets one reload, never a loop. */
 const RELOAD_KEY = 'sixfold:chunk-reload';
@@ -14,11 +14,10 @@ export function isChunkLoadError(error: unknown): boolean {
 
 /**
  * What the reader sees when a page throws while rendering or its code fails to load: plain
- * words, a reload and a way home, instead of the router's developer page. A chunk that failed
- * to load reloads the page once by itself (a new deploy renamed it).
+ * words, a reload and a way home, instead of a blank screen. A chunk that failed to load
+ * reloads the page once by itself (a new deploy renamed it).
  */
-export function RouteError() {
-  const error = useRouteError();
+export function RouteError({ error }: { error: unknown }) {
   const chunk = isChunkLoadError(error);
 
   useEffect(() => {
@@ -28,11 +27,10 @@ export function RouteError() {
     window.location.reload();
   }, [chunk]);
 
-  const status = isRouteErrorResponse(error) ? error.status : null;
   return (
     <main className="mx-auto max-w-lg px-4 py-16 text-center" role="alert">
       <p className="text-caption font-bold uppercase tracking-[0.2em] text-muted">
-        {chunk ? 'New version' : status ? `Error ${status}` : 'Something went wrong'}
+        {chunk ? 'New version' : 'Something went wrong'}
       </p>
       <h1 className="mt-2 text-title">
         {chunk ? 'Sixfold was updated while this page was open.' : 'This page stopped on a wrong note.'}
@@ -59,4 +57,21 @@ export function RouteError() {
       </div>
     </main>
   );
+}
+
+/** Catches a render error or a failed page load below it and shows {@link RouteError}. */
+export class RouteErrorBoundary extends Component<{ children: ReactNode }, { error: unknown }> {
+  state: { error: unknown } = { error: null };
+
+  static getDerivedStateFromError(error: unknown) {
+    return { error };
+  }
+
+  componentDidCatch(error: unknown, info: ErrorInfo) {
+    console.warn('[sixfold] a page failed', error, info.componentStack);
+  }
+
+  render() {
+    return this.state.error ? <RouteError error={this.state.error} /> : this.props.children;
+  }
 }
