@@ -31,10 +31,33 @@ const ROLE_STYLE: Record<NoteRole, string> = {
   other: 'border-line text-muted',
 };
 
+/** Functions from the root up, so each group reads as the chord is built. */
+const FUNCTION_ORDER = [
+  '1',
+  'b9',
+  '9',
+  '#9',
+  'b3',
+  '3',
+  '11',
+  '#11',
+  'b5',
+  '5',
+  '#5',
+  'b13',
+  '6',
+  '13',
+  'bb7',
+  'b7',
+  '7',
+];
+
 /** The pair's notes in the chord's spelling, chord tones apart from tensions. */
 function NoteRoles({ fit }: { fit: ChordFit }) {
+  const byDegree = (i: number, j: number) =>
+    FUNCTION_ORDER.indexOf(fit.functions[i]) - FUNCTION_ORDER.indexOf(fit.functions[j]);
   const groups = (['chord-tone', 'tension', 'other'] as const)
-    .map((role) => ({ role, idx: fit.roles.flatMap((r, i) => (r === role ? [i] : [])) }))
+    .map((role) => ({ role, idx: fit.roles.flatMap((r, i) => (r === role ? [i] : [])).sort(byDegree) }))
     .filter((g) => g.idx.length > 0);
   return (
     <span className="grid gap-1" data-testid="fit-notes">
