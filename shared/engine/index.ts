@@ -12,3 +12,4 @@ export * from './files';
 export * from './scoring';
 export { takeToMidi } from './files/take-midi';
 export { notate } from './notation';
+export { beatGroups, isCompound, quarterTempo } from './patterns/timing';

@@ -1,18 +1,14 @@
-import { XMLParser } from 'fast-xml-parser';
 import { type MidiData, parseMidi, writeMidi } from 'midi-file';
 import MidiWriter from 'midi-writer-js';
-import { Note } from 'tonal';
 import { describe, expect, it } from 'vitest';
 import {
   type Drill,
   EngineError,
   drillToMidi,
-  drillToMusicXml,
   generateDrill,
   instruments,
   MAX_FILE_NOTES,
   midiToPlayed,
-  sliceDrill,
 } from '../../shared/engine';
 import { countNoteOns } from '../../shared/engine/files/note-ons';
 import { MAX_PLAYED_NOTES } from '../../shared/schemas/takes';
@@ -371,64 +367,4 @@ describe('midiToPlayed counts the notes before reading a file', () => {
   });
 });
 
-describe('drillToMusicXml, read back by fast-xml-parser', () => {
-  const parser = new XMLParser({ ignoreAttributes: false, isArray: (name) => ['measure', 'note'].includes(name) });
-  type XmlNote = {
-    pitch?: { step: string; alter?: number; octave: number };
-    rest?: unknown;
-    accidental?: string;
-    duration: number;
-  };
-
-  function read(xml: string) {
-    const doc = parser.parse(xml);
-    const part = doc['score-partwise'].part;
-    const measures: { note?: XmlNote[]; attributes?: Record<string, unknown>; '@_number': string }[] = part.measure;
-    const notes = measures.flatMap((m) => m.note ?? []);
-    return { doc, measures, notes, pitched: notes.filter((n) => n.pitch) };
-  }
-  const midiOf = (p: NonNullable<XmlNote['pitch']>) =>
-    (Number(p.octave) + 1) * 12 + (Note.chroma(p.step) ?? 0) + Number(p.alter ?? 0);
-
-  it.each([
-    ['piano', 0],
-    ['alto-sax', -9],
-    ['tenor-sax', -14],
-    ['guitar', -12],
-    ['trombone', 0],
-  ] as const)('%s: written pitches, one per note, accidentals on altered notes', (instrument, transposition) => {
-    const drill = generateDrill({ pair: ['B', 'C'], pattern: 'weave', direction: 'up-down', instrument });
-    const { doc, measures, pitched } = read(drillToMusicXml(drill));
-    expect(doc['score-partwise']['@_version']).toBe('4.0'); // MusicXML 4.0: partwise score
-    expect(measures).toHaveLength(drill.measures);
-    expect(pitched).toHaveLength(drill.notes.length);
-    pitched.forEach((n, i) => {
-      // MusicXML 4.0: <pitch> is written pitch for a transposing part; written = concert - transposition
-      expect(midiOf(n.pitch!)).toBe(drill.notes[i].midi - transposition);
-      if (Number(n.pitch!.alter ?? 0) !== 0) expect(n.accidental).toBeDefined();
-    });
-    // MusicXML 4.0: <clef> with sign F for bass clef, G for treble
-    const clef = (measures[0].attributes as { clef: { sign: string } }).clef.sign;
-    expect(clef).toBe(instrument === 'trombone' ? 'F' : 'G');
-    expect(instruments[instrument].transposition).toBe(transposition);
-  });
-
-  it('fills every measure to the meter, triplets across a 7/8 bar line tied', () => {
-    const drill = generateDrill({ pair: ['F', 'Eb'], pattern: 'weave', direction: 'up', start: 65, meter: [7, 8] });
-    const xml = drillToMusicXml(drill);
-    const { doc, measures } = read(xml);
-    const divisions = Number((measures[0].attributes as { divisions: number }).divisions);
-    for (const m of measures) {
-      const total = (m.note ?? []).reduce((s, n) => s + Number(n.duration), 0);
-      expect(total).toBe((divisions * 4 * 7) / 8); // MusicXML 4.0: <duration> in divisions per quarter
-    }
-    expect(xml).toContain('<tie type="start"/>');
-    expect(doc['score-partwise']['part-list']['score-part']['part-name']).toBe('Piano');
-  });
-
-  it("keeps a slice's measure numbers", () => {
-    const drill = generateDrill({ pair: ['F', 'B'], pattern: 'four-three', direction: 'up', start: 57 });
-    const { measures } = read(drillToMusicXml(sliceDrill(drill, 2, 3)));
-    expect(measures.map((m) => m['@_number'])).toEqual(['2', '3']);
-  });
-});
+// drillToMusicXml is tested in musicxml.test.ts: it is now drawn from notate(drill).

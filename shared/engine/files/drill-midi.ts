@@ -1,5 +1,6 @@
 import { instruments } from '../instruments';
 import type { Drill } from '../types';
+import { quarterTempo } from '../patterns/timing';
 import { smfWith, toUnit } from './smf';
 
 /** Velocity of the drill's notes (MIDI 0-127). */
@@ -16,7 +17,8 @@ const VELOCITY = 96;
  */
 export function drillToMidi(drill: Drill): Uint8Array {
   const { tempo, meter, instrument } = drill.spec;
-  const file = smfWith('Sixfold', tempo, meter);
+  // the tempo counts the meter's beat (a dotted quarter in 6/8): the file counts quarters
+  const file = smfWith('Sixfold', quarterTempo(tempo, meter), meter);
   const ppq = file.header.ppq;
   // a marker per chord of a progression, in the conductor track (Standard MIDI Files 1.0: FF 06)
   for (const c of drill.changes ?? []) {

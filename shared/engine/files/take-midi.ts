@@ -1,4 +1,5 @@
 import type { Drill, PlayedNote } from '../types';
+import { quarterTempo } from '../patterns/timing';
 import { type MidiFile, smfWith, toUnit } from './smf';
 
 /** Velocity of the drill's notes, and of played notes that came without one (MIDI 0-127). */
@@ -60,9 +61,11 @@ function addTrack(file: MidiFile, name: string, channel: number, spans: Span[]):
 export function takeToMidi(take: { drill: Drill; played: PlayedNote[] }): Uint8Array {
   const { drill, played } = take;
   const { tempo, meter } = drill.spec;
-  const file = smfWith('Sixfold take', tempo, meter);
+  // the tempo counts the meter's beat (a dotted quarter in 6/8): the file counts quarters
+  const bpm = quarterTempo(tempo, meter);
+  const file = smfWith('Sixfold take', bpm, meter);
   const ppq = file.header.ppq;
-  const ticksPerMs = (tempo / 60000) * ppq;
+  const ticksPerMs = (bpm / 60000) * ppq;
   // a played note with no recorded length sounds for a sixteenth
   const defaultTicks = ppq / 4;
   const drillSpans: Span[] = drill.notes

@@ -98,7 +98,8 @@ export function notate(drill: Drill): Notation {
     events.sort((x, y) => x.start - y.start || x.staff - y.staff);
     const measure: NotatedMeasure = { number, events };
     if (changes.length > 0) {
-      const from = (number - 1) * barLength;
+      // changes count beats from the drill's own start, as its notes do (a slice re-bases both)
+      const from = slot * barLength;
       const to = from + barLength;
       const at = changes.find((c) => c.startBeat <= from + 1e-9 && from < c.startBeat + c.beats - 1e-9);
       const starting = changes.filter((c) => c.startBeat >= from - 1e-9 && c.startBeat < to - 1e-9);

@@ -1,7 +1,8 @@
-import { Chord } from 'tonal';
+import { Chord, Interval, Note } from 'tonal';
 import { EngineError } from '../errors';
 import { movePair, semitoneInterval } from '../theory/pair-spelling';
 import { chromaOf, rootSpelling } from '../theory/spelling';
+import { parseTriad } from '../theory/triads';
 import type { Drill, DrillSpec, KeyOrder } from '../types';
 import { moveChanges } from './changes';
 import { cellsToFit, generateDrill } from './generate';
@@ -14,6 +15,23 @@ function moveChord(chord: string, semitones: number): string {
   if (!tonic) return chord;
   const moved = rootSpelling(chromaOf(tonic) + semitones) + type;
   return bass ? `${moved}/${rootSpelling(chromaOf(bass) + semitones)}` : moved;
+}
+
+/**
+ * A chord moved with its pair: it keeps the interval it had to a's root (so F7 over F/Eb moves
+ * to C#7 over C#/B, never Db7), unless that needs a double sharp or flat.
+ */
+function moveChordWithPair(chord: string, semitones: number, fromA: string, toA: string): string {
+  const [tonic, type, bass] = Chord.tokenize(chord);
+  if (!tonic) return chord;
+  const plain = (n: string) => n !== '' && Math.abs(Note.get(n).alt) <= 1;
+  const follow = (name: string) => {
+    const moved = Note.transpose(toA, Interval.distance(fromA, name));
+    return plain(moved) ? moved : rootSpelling(chromaOf(name) + semitones);
+  };
+  if (!plain(fromA) || !plain(toA)) return moveChord(chord, semitones);
+  const root = follow(tonic);
+  return bass ? `${root}${type}/${follow(bass)}` : root + type;
 }
 
 /**
@@ -37,8 +55,15 @@ export function inAllKeys(spec: DrillSpec, order: KeyOrder = 'chromatic'): Drill
       ...spec,
       // the drill's own key keeps the names as typed; every other key spells the moved pair as a unit
       pair: spec.pair && (shift === 0 ? [spec.pair[0], spec.pair[1]] : movePair(spec.pair, semitoneInterval(shift))),
-      chord: spec.chord === undefined ? undefined : moveChord(spec.chord, shift),
     };
+    if (spec.chord !== undefined) {
+      moved.chord =
+        shift === 0
+          ? spec.chord
+          : spec.pair && moved.pair
+            ? moveChordWithPair(spec.chord, shift, parseTriad(spec.pair[0]).root, parseTriad(moved.pair[0]).root)
+            : moveChord(spec.chord, shift);
+    }
     if (spec.chord === undefined) delete moved.chord;
     if (spec.pair === undefined) delete moved.pair;
     // a progression moves chord by chord, pinned pairs with it (its own key keeps the names as typed)

@@ -28,14 +28,13 @@ const cache = new Map<string, Ladder>();
 /**
  * The written pitch classes of a pair on an instrument, a's three then b's: the whole pair moved
  * by the instrument's interval and spelled as one unit, so every interval keeps its name (concert
- * F#/E on a B-flat instrument reads Ab/Gb, B major on alto sax Ab C Eb). Octave transpositions
- * (guitar) keep the concert names as they are.
+ * F#/E on a B-flat instrument reads Ab/Gb, B major on alto sax Ab C Eb). The rule holds at
+ * concert pitch too: Dbdim/D, typed with a double flat (Db Fb Abb), is written C#dim/D.
  *
  * @example
  * writtenPairPitchClasses(parseTriad('F#'), parseTriad('E'), -2) // [['Ab', 'C', 'Eb'], ['Gb', 'Bb', 'Db']]
  */
 export function writtenPairPitchClasses(a: Triad, b: Triad, transposition: number): [string[], string[]] {
-  if (transposition % 12 === 0) return [a.pitchClasses, b.pitchClasses];
   const [wa, wb] = movePair([a.symbol, b.symbol], semitoneInterval(-transposition));
   return [parseTriad(wa).pitchClasses, parseTriad(wb).pitchClasses];
 }
