@@ -47,7 +47,7 @@ export function MicPanel({ mic }: { mic: MicInput }) {
         >
           <div
             ref={bar}
-            className="h-full w-0 bg-ink-300 transition-[width] duration-75 data-[open=true]:bg-reed-500"
+            className="h-full w-0 bg-ink-300 data-[open=true]:bg-reed-500"
           />
           <div className="absolute inset-y-0 w-0.5 bg-ember-500" style={{ left: pct(gate) }} title="gate" />
         </div>
