@@ -5,7 +5,15 @@ import type { AssignmentStatus, PlayerProgress } from '../../../shared/schemas/a
 import type { Db } from '../../db/client';
 
 /** The shape of a stored take's drill from its columns (pair "D/C", pattern name, direction, instrument). */
-export function takeShape(t: { pair: string; pattern: string; direction: string; instrument: string }): string | null {
+export function takeShape(t: {
+  pair: string;
+  pattern: string;
+  direction: string;
+  instrument: string;
+  /** a progression drill's changes and choruses, from the take's spec */
+  changes?: DrillSpec['changes'] | null;
+  choruses?: number | null;
+}): string | null {
   const [a, b] = t.pair.split('/');
   if (!a || !b) return null;
   try {
@@ -14,6 +22,7 @@ export function takeShape(t: { pair: string; pattern: string; direction: string;
       pattern: t.pattern as DrillSpec['pattern'],
       direction: t.direction as DrillSpec['direction'],
       instrument: t.instrument as DrillSpec['instrument'],
+      ...(t.changes ? { changes: t.changes, choruses: t.choruses ?? undefined } : {}),
     });
   } catch {
     return null;
@@ -52,9 +61,12 @@ export async function assignmentProgress(
     pair: string | null;
     direction: string | null;
     instrument: string | null;
+    changes: DrillSpec['changes'] | null;
+    choruses: number | null;
   }>(sql`
     SELECT DISTINCT a.id AS assignment_id, m.player_id, a.spec, a.keys, a.due_at < now() AS past_due,
-           t.key, t.pattern, t.pair, coalesce(t.spec->>'direction', 'up') AS direction, t.instrument
+           t.key, t.pattern, t.pair, coalesce(t.spec->>'direction', 'up') AS direction, t.instrument,
+           t.spec->'changes' AS changes, (t.spec->>'choruses')::int AS choruses
     FROM assignments a
     JOIN studio_members m ON m.studio_id = a.studio_id
     LEFT JOIN takes t ON t.player_id = m.player_id
@@ -82,7 +94,14 @@ export async function assignmentProgress(
       want = drillShape({ ...r.spec, pattern: r.spec.pattern as DrillSpec['pattern'] });
       shapes.set(r.assignment_id, want);
     }
-    const shape = takeShape({ pair: r.pair, pattern: r.pattern, direction: r.direction, instrument: r.instrument });
+    const shape = takeShape({
+      pair: r.pair,
+      pattern: r.pattern,
+      direction: r.direction,
+      instrument: r.instrument,
+      changes: r.changes,
+      choruses: r.choruses,
+    });
     if (shape === want) row.met.add(r.key);
   }
   for (const row of rows.values()) {

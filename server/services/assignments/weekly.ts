@@ -48,17 +48,20 @@ export async function assignmentWeekly(
     pair: string;
     instrument: string;
     direction: string;
+    changes: DrillSpec['changes'] | null;
+    choruses: number | null;
     takes: number;
     accuracy: number;
     tempo: number;
   }>(sql`
     SELECT t.player_id, to_char(date_trunc('week', t.started_at AT TIME ZONE ${tz})::date, 'YYYY-MM-DD') AS week,
            t.pattern, t.pair, t.instrument, coalesce(t.spec->>'direction', 'up') AS direction,
+           t.spec->'changes' AS changes, (t.spec->>'choruses')::int AS choruses,
            count(*)::int AS takes, avg(t.accuracy)::float8 AS accuracy, max(t.tempo)::float8 AS tempo
     FROM takes t
     WHERE t.player_id IN (${ids}) AND t.key = ANY (SELECT unnest(keys) FROM assignments WHERE id = ${a.id}::uuid) AND t.measure_from IS NULL
       AND (t.started_at AT TIME ZONE ${tz})::date >= ${weeks[0]}::date
-    GROUP BY 1, 2, 3, 4, 5, 6`);
+    GROUP BY 1, 2, 3, 4, 5, 6, 7, 8`);
   const want = drillShape(a.spec as DrillSpec);
   // Merge the pairs of one week (each key is its own pair): accuracy weighted by takes.
   const merged = new Map<string, { week: string; takes: number; accuracy: number; tempo: number }[]>();

@@ -1,4 +1,4 @@
-import { drillKey, patternName } from '../../../shared/practice/drill-identity';
+import { chordKey, drillKey, patternName } from '../../../shared/practice/drill-identity';
 import { type DrillSpec as SpecInput, generateChecked } from '../../../shared/schemas/drills';
 import { AppError } from '../../errors';
 import {
@@ -24,6 +24,8 @@ export interface ScoredTake {
   key: string;
   pattern: string;
   pair: string;
+  /** over a progression, each expected note's chord's key and pair (the key map counts every chord) */
+  noteKeys: { key: string; pair: string }[] | null;
 }
 
 const clamp = (v: number, lo: number, hi: number) => Math.min(hi, Math.max(lo, v));
@@ -73,5 +75,13 @@ export function scoreRawTake(input: {
     key: drillKey(drill.spec),
     pattern: patternName(drill.spec),
     pair: `${drill.spec.pair[0]}/${drill.spec.pair[1]}`,
+    noteKeys: drill.changes ? chordKeysOf(drill, expected) : null,
   };
+}
+
+/** Each note's chord: its root as the key, its pair as the pair. */
+function chordKeysOf(drill: Drill, notes: DrillNote[]): { key: string; pair: string }[] {
+  const byChord = (drill.changes ?? []).map((c) => ({ key: chordKey(c.chord), pair: `${c.pair[0]}/${c.pair[1]}` }));
+  const first = byChord[0];
+  return notes.map((n) => byChord[n.chordIndex ?? 0] ?? first);
 }

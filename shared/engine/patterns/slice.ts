@@ -17,5 +17,18 @@ export function sliceDrill(drill: Drill, from: number, to: number): Drill {
   const notes = drill.notes
     .filter((n) => n.measure >= from && n.measure <= to)
     .map((n) => ({ ...n, beat: n.beat - offset }));
-  return { spec: drill.spec, notes, measures: to - from + 1 };
+  if (!drill.changes) return { spec: drill.spec, notes, measures: to - from + 1 };
+  // over a progression: the chords under those measures, cut to them and re-based the same way
+  const end = to * measureLength(drill.spec.meter);
+  const changes: NonNullable<Drill['changes']> = [];
+  const index = new Map<number, number>();
+  drill.changes.forEach((c, i) => {
+    const s = Math.max(c.startBeat, offset);
+    const e = Math.min(c.startBeat + c.beats, end);
+    if (e - s <= 1e-9) return;
+    index.set(i, changes.length);
+    changes.push({ ...c, startBeat: s - offset, beats: e - s });
+  });
+  for (const n of notes) if (n.chordIndex !== undefined) n.chordIndex = index.get(n.chordIndex);
+  return { spec: drill.spec, notes, measures: to - from + 1, changes };
 }

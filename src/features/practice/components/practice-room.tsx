@@ -26,6 +26,7 @@ import { LiveStaff } from './live-staff';
 import { LoopPanel } from './loop-panel';
 import { type PracticeOptions, PracticeControls } from './practice-controls';
 import { FramedName } from './pitch-label';
+import { ProgressionName } from './progression-name';
 import { PracticeDefaults } from './practice-defaults';
 import { TakeResults } from './take-results';
 import '../practice.css';
@@ -131,7 +132,7 @@ export function PracticeRoom({ baseSpec, settings, initialOptions, assignmentId,
       // A loop counts every pass in, so the player can breathe and find the tempo.
       countInMeasures: looping ? Math.max(1, opts.countIn) : opts.countIn,
       click: opts.click,
-      pad: opts.pad && !!drill.spec.chord,
+      pad: opts.pad && !!(drill.spec.chord || drill.changes),
       latencyMs,
       volumeDb: sound.hear.volumeDb,
     });
@@ -170,7 +171,11 @@ export function PracticeRoom({ baseSpec, settings, initialOptions, assignmentId,
           <p className="text-muted" data-testid="drill-summary">
             {drill ? (
               <>
-                <FramedName written={frame.pair(drill.spec.pair).join(' / ')} concert={drill.spec.pair.join(' / ')} />
+                {drill.changes ? (
+                  <ProgressionName changes={drill.spec.changes ?? []} frame={frame} />
+                ) : (
+                  <FramedName written={frame.pair(drill.spec.pair).join(' / ')} concert={drill.spec.pair.join(' / ')} />
+                )}
                 {` · ${typeof drill.spec.pattern === 'string' ? drill.spec.pattern : drill.spec.pattern.name} · ${drill.spec.direction}`}
                 {drill.spec.chord ? (
                   <>
@@ -327,7 +332,7 @@ export function PracticeRoom({ baseSpec, settings, initialOptions, assignmentId,
         />
       ) : null}
 
-      <PracticeControls value={opts} onChange={setOpts} disabled={running} hasChord={!!spec.chord} />
+      <PracticeControls value={opts} onChange={setOpts} disabled={running} hasChord={!!(spec.chord || spec.changes)} />
       <div className="grid gap-4 md:grid-cols-2">
         <InputPanel input={input} status={status} microphone />
         <HearYourself value={sound.hear} onChange={sound.setHear} />

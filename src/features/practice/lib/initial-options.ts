@@ -17,7 +17,7 @@ export function initialOptions(
     countIn: 1,
     click: 'every-beat',
     swing: 0.5,
-    pad: !!spec.chord,
+    pad: !!(spec.chord || spec.changes),
     octaveTolerant: false,
     mode: 'timed',
     writtenPitchInput: settings.writtenPitchInput,
