@@ -92,9 +92,10 @@ export function PracticeRoom({ baseSpec, settings, initialOptions, assignmentId,
       mode: opts.mode,
       octaveTolerant: opts.octaveTolerant,
       swing: opts.swing,
-      inputTransposition: transposition + octave,
+      // A microphone hears concert pitch as it sounds: no written-pitch or octave setting applies.
+      inputTransposition: microphone.on ? 0 : transposition + octave,
     };
-  }, [opts, drill, settings.octaveShift]);
+  }, [opts, drill, settings.octaveShift, microphone.on]);
 
   const autoStart = useRef(false);
   const take = usePracticeTake((finished, session) => {
