@@ -12,8 +12,10 @@ import {
   type Notation,
   type PatternId,
   allPairs,
+  drillToMidi,
   generateDrill,
   instruments,
+  midiToPlayed,
   notate,
   sliceDrill,
 } from '../../shared/engine';
@@ -239,6 +241,21 @@ describe('compound meters and meters a pattern cannot fill', () => {
       [2.5, 0.5, 1, 6],
       [3, 0.5, 2, 1],
     ]);
+  });
+
+  it('counts the tempo in dotted quarters in 6/8: the MIDI file plays 80 of them a minute', () => {
+    const drill = generateDrill({
+      pair: ['F', 'Eb'],
+      pattern: 'weave',
+      direction: 'up',
+      start: 65,
+      meter: [6, 8],
+      tempo: 80,
+    });
+    const played = midiToPlayed(drillToMidi(drill));
+    // 80 dotted quarters a minute are 120 quarters: the second beat (three eighths in) is at 750 ms
+    expect(played[3].timeMs).toBeCloseTo(750, 0);
+    expect(played[6].timeMs).toBeCloseTo(1500, 0);
   });
 
   it.each([

@@ -111,6 +111,17 @@ export function spellPairAsUnit(p: PairRoots): PairRoots {
  * movePair(['F#', 'E'], '2M') // ['Ab', 'Gb']   (concert F#/E read on a B-flat instrument)
  */
 export function movePair(symbols: [string, string], interval: string): [string, string] {
+  const key = `${symbols[0]}|${symbols[1]}|${interval}`;
+  const hit = moveCache.get(key);
+  if (hit) return [hit[0], hit[1]];
+  const moved = movePairUncached(symbols, interval);
+  moveCache.set(key, moved);
+  return [moved[0], moved[1]];
+}
+
+const moveCache = new Map<string, [string, string]>();
+
+function movePairUncached(symbols: [string, string], interval: string): [string, string] {
   const parsed = symbols.map(splitSymbol) as [SplitSymbol, SplitSymbol];
   const moved = spellPairAsUnit({
     a: { root: Note.transpose(parsed[0].root, interval), quality: parsed[0].quality },
