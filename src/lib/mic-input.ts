@@ -126,7 +126,12 @@ export class MicInput {
     }
     this.setStatus({ state: 'starting' });
     // Made at once, inside the player's click, so the browser lets it sound.
-    const context = new AudioContext({ latencyHint: 'interactive' });
+    let context: AudioContext;
+    try {
+      context = new AudioContext({ latencyHint: 'interactive' });
+    } catch (err) {
+      return this.setStatus(describeMicFailure(err));
+    }
     const giveUp = (stream: MediaStream | null) => {
       for (const t of stream?.getTracks() ?? []) t.stop();
       void context.close().catch(() => undefined);
