@@ -59,7 +59,8 @@ export function specOf(d: Draft): DrillSpec {
     tempo: d.tempo,
     meter: d.meter,
     ...(d.range ? { range: d.range } : {}),
-    ...(d.chord.trim() ? { chord: d.chord.trim() } : {}),
+    // over a progression the chords are the changes themselves
+    ...(d.chord.trim() && !d.changes ? { chord: d.chord.trim() } : {}),
   };
 }
 
