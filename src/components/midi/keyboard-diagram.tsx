@@ -51,7 +51,7 @@ export const KeyboardDiagram = memo(function KeyboardDiagram({
   // On a narrow screen the keys keep a size a finger can find; the drawing scrolls sideways
   // instead (starting on middle C when that is drawn), so it never shrinks to slivers.
   const minWidth = whites.length * (onNote ? 20 : 14);
-  const scroller = useRef<HTMLDivElement>(null);
+  const scroller = useRef<HTMLElement>(null);
   const c4 = whiteX.get(60);
   // biome-ignore lint/correctness/useExhaustiveDependencies: only a new span moves the view, not new marks
   useEffect(() => {
@@ -73,7 +73,8 @@ export const KeyboardDiagram = memo(function KeyboardDiagram({
         }
       : {};
   return (
-    <div ref={scroller} className="overflow-x-auto">
+    // biome-ignore lint/a11y/noNoninteractiveTabindex: a sideways scroller must take focus so keys can scroll it
+    <section ref={scroller} className="overflow-x-auto" tabIndex={0} aria-label={`${label}, scrolls sideways`}>
       <svg
         viewBox={`0 0 ${width} ${height}`}
         style={{ minWidth }}
@@ -133,6 +134,6 @@ export const KeyboardDiagram = memo(function KeyboardDiagram({
             </text>
           ))}
       </svg>
-    </div>
+    </section>
   );
 });

@@ -232,7 +232,7 @@ export function PracticeRoom({ baseSpec, settings, initialOptions, assignmentId,
         </p>
       ) : null}
 
-      <div className={`rounded-card border border-line bg-raised p-4 sf-fade-${fade}`}>
+      <div className={`min-w-0 rounded-card border border-line bg-raised p-4 sf-fade-${fade}`}>
         {drill ? <LiveStaff drill={drill} live={take.live} downbeatMs={running ? take.origin : null} /> : null}
         {drill ? (
           <div className="mt-3">
