@@ -142,10 +142,11 @@ function layoutSystem(
   reaches: Array<{ above: number; below: number }>,
   top: number,
   marksRow: boolean,
+  tags: boolean,
 ): SystemLayout {
   const chords = plan.measures.some((mi) => notation.measures[mi].chord || notation.measures[mi].chords?.length);
   const chordLane = chords ? 24 : 0;
-  const cellLane = 22;
+  const cellLane = tags ? 22 : 0;
   const staveYs: number[] = [];
   const ottavaUp: number[] = [];
   const ottavaDown: number[] = [];
@@ -205,6 +206,7 @@ export async function renderStaff(
   const usable = width - x0 - 6;
   const plans = planSystems(notation.measures, notation.staves.length, usable);
 
+  const tagged = drill.notes.some((n) => n.source !== 'scale');
   // First pass: build each line at y = 0 to see how far its notes reach, then stack the lines.
   const layouts: SystemLayout[] = [];
   let cursor = 0;
@@ -222,7 +224,7 @@ export async function renderStaff(
         TOP_LINE,
       ),
     );
-    const layout = layoutSystem(notation, plan, reaches, cursor, Boolean(options.marksRow));
+    const layout = layoutSystem(notation, plan, reaches, cursor, Boolean(options.marksRow), tagged);
     layouts.push(layout);
     cursor = layout.bottom;
   }
@@ -299,9 +301,11 @@ export async function renderStaff(
       notes[i] = el;
     }
 
-    // Cell tags: one per run of notes of one cell (or, for scale patterns, of one triad) on this line.
+    // Cell tags: one per run of notes of one cell on this line. A scale pattern's cells are steps
+    // of the six-note scale, not triads: its notes keep their triad's colour and go untagged
+    // (a tag per note would bury the line in letters).
     const ordered = drawn
-      .filter((d) => d.event.noteIndex !== undefined)
+      .filter((d) => d.event.noteIndex !== undefined && drill.notes[d.event.noteIndex].source !== 'scale')
       .sort((a, b) => (a.event.noteIndex ?? 0) - (b.event.noteIndex ?? 0));
     let run: DrawnEvent[] = [];
     const flush = () => {
@@ -318,7 +322,7 @@ export async function renderStaff(
     };
     const keyOf = (d: DrawnEvent) => {
       const n = drill.notes[d.event.noteIndex!];
-      return n.source === 'scale' ? triadOf(n, aChromas) : `${n.cell}:${n.source}`;
+      return `${n.cell}:${n.source}`;
     };
     for (const d of ordered) {
       if (run.length && keyOf(run[0]) !== keyOf(d)) flush();

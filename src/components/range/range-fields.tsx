@@ -1,7 +1,7 @@
 import { type InstrumentId, instruments } from '@shared/engine';
 import { useEffect, useState } from 'react';
 import { TextField } from '@/components/ui/text-field';
-import { noteName, parseNoteName } from '../lib/note-names';
+import { noteName, parseNoteName } from '@/lib/note-names';
 
 interface Range {
   low: number;

@@ -4,7 +4,7 @@ import { SelectField } from '@/components/ui/select-field';
 import { TextField } from '@/components/ui/text-field';
 import type { Draft } from '../hooks/use-drill-draft';
 import { NEW_TRIAD_PATTERN } from './pattern-form';
-import { RangeFields } from './range-fields';
+import { RangeFields } from '@/components/range/range-fields';
 
 const INSTRUMENT_OPTIONS = (Object.keys(instruments) as InstrumentId[]).map((id) => ({
   value: id,

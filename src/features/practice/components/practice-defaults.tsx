@@ -1,6 +1,7 @@
 import { type InstrumentId, instruments } from '@shared/engine';
 import type { PlayerSettings } from '@shared/schemas/settings';
 import { type FormEvent, useEffect, useState } from 'react';
+import { RangeFields } from '@/components/range/range-fields';
 import { Button } from '@/components/ui/button';
 import { ApiError } from '@/lib/api-client';
 import { useUpdateSettings } from '../api/settings';
@@ -110,34 +111,13 @@ export function PracticeDefaults({ settings }: { settings: PlayerSettings }) {
             <PitchLabel frame={frame} midi={inst.range.high} />
           </label>
           {useRange ? (
-            <>
-              <label className="flex flex-col text-caption font-semibold">
-                <span>
-                  Lowest: <PitchLabel frame={frame} midi={range.low} />
-                </span>
-                <input
-                  className={`${field} w-24`}
-                  type="number"
-                  min={inst.range.low}
-                  max={inst.range.high}
-                  value={range.low}
-                  onChange={(e) => setDraft({ ...draft, range: { ...range, low: Number(e.target.value) } })}
-                />
-              </label>
-              <label className="flex flex-col text-caption font-semibold">
-                <span>
-                  Highest: <PitchLabel frame={frame} midi={range.high} />
-                </span>
-                <input
-                  className={`${field} w-24`}
-                  type="number"
-                  min={inst.range.low}
-                  max={inst.range.high}
-                  value={range.high}
-                  onChange={(e) => setDraft({ ...draft, range: { ...range, high: Number(e.target.value) } })}
-                />
-              </label>
-            </>
+            <RangeFields
+              instrument={draft.instrument}
+              range={range}
+              onChange={(r) => setDraft({ ...draft, range: r })}
+              lowErrors={errors['range.low'] ?? errors.range}
+              highErrors={errors['range.high']}
+            />
           ) : null}
         </fieldset>
         <div className="flex flex-wrap items-center gap-3">
