@@ -45,10 +45,7 @@ export function MicPanel({ mic }: { mic: MicInput }) {
           aria-hidden="true"
           className="relative mt-1 h-3 overflow-hidden rounded-full border border-line bg-surface"
         >
-          <div
-            ref={bar}
-            className="h-full w-0 bg-ink-300 data-[open=true]:bg-reed-500"
-          />
+          <div ref={bar} className="h-full w-0 bg-ink-300 data-[open=true]:bg-reed-500" />
           <div className="absolute inset-y-0 w-0.5 bg-ember-500" style={{ left: pct(gate) }} title="gate" />
         </div>
       </div>
