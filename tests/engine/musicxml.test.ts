@@ -254,7 +254,25 @@ describe.skipIf(!hasLilyPond)('musicxml2ly (LilyPond) imports the files with no 
     if (dir) rmSync(dir, { recursive: true, force: true });
   });
 
-  it.each(SPECS.slice(0, 5))('%s', (label, spec) => {
+  const LILY: [string, DrillSpec][] = [
+    ...SPECS.slice(0, 5),
+    [
+      'alto sax over changes',
+      {
+        changes: [
+          { chord: 'Dm7', beats: 4 },
+          { chord: 'G7alt', beats: 2 },
+          { chord: 'C#m7b5/G', beats: 2 },
+          { chord: 'Cmaj7#11', beats: 8 },
+        ],
+        pattern: 'weave',
+        direction: 'up',
+        instrument: 'alto-sax',
+      },
+    ],
+  ];
+
+  it.each(LILY)('%s', (label, spec) => {
     const file = join(dir, `${label.replace(/[^a-z0-9]+/gi, '-')}.musicxml`);
     writeFileSync(file, drillToMusicXml(generateDrill(spec)));
     const out = join(dir, 'out.ly');

@@ -114,6 +114,7 @@ function staffXml(
   barDivs: number,
   state: StaffState,
   isLastOfStaff: (e: NotatedEvent) => boolean,
+  before: (e: NotatedEvent) => string,
 ): string {
   const staffTag = staves > 1 ? `<staff>${staffIndex + 1}</staff>` : '';
   const voice = staffIndex + 1;
@@ -125,6 +126,7 @@ function staffXml(
     if (e.tuplet !== undefined) tupletMembers.set(e.tuplet, [...(tupletMembers.get(e.tuplet) ?? []), e]);
   }
   for (const e of events) {
+    out.push(before(e));
     if (e.ottava !== state.ottava && e.ottava !== 0) {
       // MusicXML 4.0: type "down" for an 8va line (shown an octave below the pitch), "up" for 8vb
       out.push(
@@ -192,11 +194,18 @@ function measureXml(
 ): string {
   const parts: string[] = [head];
   const chords = m.chords ?? (m.chord ? [{ start: 0, chord: m.chord }] : []);
-  for (const c of chords) parts.push(harmonyXml(c.chord, Math.round(c.start * DIVISIONS), ''));
   notation.staves.forEach((_, s) => {
     if (s > 0) parts.push(`<backup><duration>${barDivs}</duration></backup>`);
     const events = m.events.filter((e) => e.staff === s).sort((x, y) => x.start - y.start);
-    parts.push(staffXml(events, s, notation.staves.length, barDivs, states[s], (e) => endsOttava.has(e)));
+    // chord symbols go over the top staff, each just before the note or rest it starts on
+    const before = (e: NotatedEvent) =>
+      s > 0
+        ? ''
+        : chords
+            .filter((c) => c.start >= e.start - 1e-9 && c.start < e.start + e.duration - 1e-9)
+            .map((c) => harmonyXml(c.chord, Math.round((c.start - e.start) * DIVISIONS), ''))
+            .join('');
+    parts.push(staffXml(events, s, notation.staves.length, barDivs, states[s], (e) => endsOttava.has(e), before));
   });
   if (last) parts.push('<barline location="right"><bar-style>light-heavy</bar-style></barline>');
   return `<measure number="${m.number}">${parts.join('')}</measure>`;

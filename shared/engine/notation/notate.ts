@@ -38,7 +38,8 @@ const toTicks = (quarters: number): number => Math.round(quarters * TPQ);
  * 8va or 8vb line takes it back; only the piano's B7 and C8 still need five); an accidental holds to the
  * end of its bar on its staff and printed octave; beams group notes shorter than a quarter
  * within one beat and a triplet is one tuplet of three under one beam; rests sit on the beat
- * and fill every bar exactly, on every staff.
+ * and fill every bar exactly, on every staff (a staff with nothing in a bar gets one rest as
+ * long as the bar, drawn as a whole-bar rest). Events are sorted by start, then staff.
  *
  * @example
  * const n = notate(generateDrill({ pair: ['F', 'Eb'], pattern: 'weave', direction: 'up', start: 65 }));
@@ -106,17 +107,13 @@ export function notate(drill: Drill): Notation {
       const chord = at ?? starting[0];
       if (chord) measure.chord = chord.chord;
       if (starting.length > 0) {
-        measure.chords = starting.map((c) => ({ start: tidyTicks(toTicks(c.startBeat - from)), chord: c.chord }));
+        measure.chords = starting.map((c) => ({ start: toTicks(c.startBeat - from) / TPQ, chord: c.chord }));
       }
     }
     measures.push(measure);
   }
   inheritOttavaOnRests(measures, staves.length);
   return { staves, measures };
-}
-
-function tidyTicks(ticks: number): number {
-  return ticks / TPQ;
 }
 
 interface Change {
@@ -154,14 +151,16 @@ function beatsOf(meter: Meter): Beat[] {
 
 /**
  * Which whole empty beats one rest may cover, from each beat: in 4/4 beats 1-2 and 3-4 (a half
- * rest starts on 1 or 3), in 12/8 likewise by dotted quarters; 3/4 may join beats 1-2; 5/8 and
- * 7/8 keep each beat (common practice).
+ * rest starts on 1 or 3), in 12/8 likewise by dotted quarters; 3/4 and 9/8 may join beats 1-2;
+ * 5/4 beats 1-2 and 4-5; 5/8 and 7/8 keep each beat (common practice).
  */
 function mergeableFrom(beats: Beat[], meter: Meter): (i: number) => boolean {
   const even = beats.every((b) => b.length === beats[0].length);
   if (!even || beats.length < 3) return () => false;
   const compound = isCompound(meter);
   if (compound && beats.length === 3) return (i) => i === 0;
+  // 5/4 is felt 3+2: a half rest on 1 or on 4, never across beat 3's group
+  if (beats.length === 5) return (i) => i === 0 || i === 3;
   return (i) => i % 2 === 0 && i + 1 < beats.length;
 }
 
