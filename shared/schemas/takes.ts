@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { MAX_FILE_NOTES } from '../engine';
-import { DrillSpecInput } from './drills';
+import { DrillSpec, DrillSpecInput } from './drills';
 
 /**
  * The most notes one take may hold: far beyond any drill, small enough to score at once. The
@@ -60,3 +60,53 @@ export const CreateTakeInput = z
 export type CreateTakeInput = z.infer<typeof CreateTakeInput>;
 
 export const TakeIdParams = z.object({ id: z.uuid({ error: 'That is not a take id' }) });
+
+const Verdict = z.enum(['hit', 'early', 'late', 'wrong', 'missed']);
+
+/** One expected note's result, as the scorer gives it. */
+export const NoteResult = z.object({
+  verdict: Verdict,
+  playedIndex: z.number().int().nullable(),
+  offsetMs: z.number().nullable(),
+});
+
+/** A take's score: one result per expected note, the unmatched played notes, and the figures. */
+export const TakeScoreSchema = z.object({
+  results: z.array(NoteResult),
+  extras: z.array(z.number().int()),
+  accuracy: z.number().min(0).max(1),
+  meanOffsetMs: z.number().nullable(),
+  spreadMs: z.number().nullable(),
+});
+
+/**
+ * A stored take as the API answers it: the same shape for POST /api/takes, GET /api/takes/:id,
+ * the player's take page and the teacher's review. The server's presenter builds it; the
+ * browser reads it with this type; the API tests parse answers with it.
+ */
+export const Take = z.object({
+  id: z.uuid(),
+  playerId: z.uuid(),
+  assignmentId: z.uuid().nullable(),
+  spec: DrillSpec,
+  options: ScoreOptionsInput,
+  measures: z.tuple([z.number().int(), z.number().int()]).nullable(),
+  stoppedAtMs: z.number().nullable(),
+  /** what it was played on; null for takes stored before this was recorded */
+  inputKind: InputKind.nullable(),
+  played: z.array(PlayedNoteInput),
+  score: TakeScoreSchema,
+  key: z.string(),
+  pattern: z.string(),
+  pair: z.string(),
+  instrument: z.string(),
+  tempo: z.number(),
+  accuracy: z.number(),
+  meanOffsetMs: z.number().nullable(),
+  startedAt: z.iso.datetime({ offset: true }),
+  createdAt: z.iso.datetime({ offset: true }),
+});
+export type Take = z.infer<typeof Take>;
+
+export const TakeResponse = z.object({ take: Take });
+export type TakeResponse = z.infer<typeof TakeResponse>;

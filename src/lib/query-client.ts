@@ -11,3 +11,10 @@ export const queryClient = new QueryClient({
     },
   },
 });
+
+declare module '@tanstack/react-query' {
+  interface Register {
+    /** Every query and mutation fails with the API's typed error (status, code, fields). */
+    defaultError: ApiError;
+  }
+}

@@ -1,3 +1,4 @@
+import { TakeResponse } from '../../shared/schemas/takes';
 import { randomUUID } from 'node:crypto';
 import { parseMidi } from 'midi-file';
 import request from 'supertest';
@@ -54,7 +55,8 @@ describe('POST /api/takes', () => {
     const body = takeBody();
     const res = await p.post('/api/takes', body);
     expect(res.status).toBe(201);
-    const { take } = res.body;
+    // The answer holds to the one take contract the browser reads.
+    const { take } = TakeResponse.parse(res.body);
     expect(take.id).toBe(body.id);
     expect(take.playerId).toBe(player.id);
     expect(take.score.accuracy).toBe(1);
@@ -74,6 +76,8 @@ describe('POST /api/takes', () => {
     expect(first.status).toBe(201);
     expect(second.status).toBe(200);
     expect(second.body.take).toEqual(first.body.take);
+    const fetched = TakeResponse.parse((await p.get(`/api/takes/${body.id}`).expect(200)).body);
+    expect(fetched.take).toEqual(first.body.take);
     const rows = await ctx.pool.query('SELECT count(*)::int AS n FROM takes WHERE id = $1', [body.id]);
     expect(rows.rows[0].n).toBe(1);
   });

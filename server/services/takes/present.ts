@@ -1,7 +1,8 @@
+import type { Take } from '../../../shared/schemas/takes';
 import type { TakeRow } from '../../db/schema/takes';
 
 /** A take as the API shows it (the same shape for POST, GET and the history). */
-export function presentTake(row: TakeRow) {
+export function presentTake(row: TakeRow): Take {
   return {
     id: row.id,
     playerId: row.playerId,
@@ -28,4 +29,4 @@ export function presentTake(row: TakeRow) {
   };
 }
 
-export type PresentedTake = ReturnType<typeof presentTake>;
+export type PresentedTake = Take;

@@ -1,32 +1,13 @@
 import { keepPreviousData, queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { ListTakesQuery, ListTakesResponse } from '@shared/schemas/history';
-import type { CreateTakeInput, InputKind } from '@shared/schemas/takes';
-import type { DrillSpec, PlayedNote, ScoreOptions, TakeScore } from '@shared/engine';
+import type { CreateTakeInput, Take } from '@shared/schemas/takes';
 import { ApiError, api } from '@/lib/api-client';
+import { takeKeys, takeQueryOptions, useTake } from '@/lib/queries/take';
 
-export const takesKey = ['takes'] as const;
+export const takesKey = takeKeys.all;
 
-/** A stored take as GET /api/takes/:id shows it. */
-export interface TakeDetail {
-  id: string;
-  playerId: string;
-  spec: DrillSpec;
-  options: ScoreOptions;
-  measures: [number, number] | null;
-  stoppedAtMs: number | null;
-  /** what it was played on; null for takes stored before this was recorded */
-  inputKind: InputKind | null;
-  played: PlayedNote[];
-  score: TakeScore;
-  key: string;
-  pattern: string;
-  pair: string;
-  instrument: string;
-  tempo: number;
-  accuracy: number;
-  meanOffsetMs: number | null;
-  startedAt: string;
-}
+/** A stored take as GET /api/takes/:id shows it (the one shape every page reads). */
+export type TakeDetail = Take;
 
 export type TakeListParams = Partial<ListTakesQuery>;
 
@@ -43,7 +24,7 @@ export function fetchTakes(params: TakeListParams): Promise<ListTakesResponse> {
 
 export const takesQueryOptions = (params: TakeListParams) =>
   queryOptions({
-    queryKey: [...takesKey, 'list', params],
+    queryKey: takeKeys.list(params),
     queryFn: () => fetchTakes(params),
     placeholderData: keepPreviousData,
   });
@@ -53,15 +34,7 @@ export function useTakes(params: TakeListParams) {
   return useQuery(takesQueryOptions(params));
 }
 
-export const takeQueryOptions = (id: string) =>
-  queryOptions({
-    queryKey: [...takesKey, 'one', id],
-    queryFn: () => api.get<{ take: TakeDetail }>(`/api/takes/${encodeURIComponent(id)}`),
-  });
-
-export function useTake(id: string) {
-  return useQuery(takeQueryOptions(id));
-}
+export { takeQueryOptions, useTake };
 
 export function useDeleteTake() {
   const queryClient = useQueryClient();
