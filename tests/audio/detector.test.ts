@@ -1,4 +1,5 @@
 import { readFileSync } from 'node:fs';
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { createNoteDetector, detectNotes } from '../../shared/audio';
 import { EngineError, type PlayedNote } from '../../shared/engine';
@@ -77,6 +78,17 @@ describe('the streaming detector', () => {
       }
     });
   }
+
+  it('the same notes as detectNotes for any way of cutting the samples into blocks (property)', () => {
+    const f = fixture('bends');
+    const batch = detectNotes(f.samples, f.sampleRate);
+    fc.assert(
+      fc.property(fc.array(fc.integer({ min: 1, max: 5000 }), { minLength: 1, maxLength: 8 }), (sizes) => {
+        expect(streamed(f.samples, f.sampleRate, sizes)).toEqual(batch);
+      }),
+      { numRuns: 12 },
+    );
+  });
 
   it('answers a note once its onset is certain, and fills in its length when it ends', () => {
     const f = fixture('detached');
