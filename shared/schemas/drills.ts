@@ -241,6 +241,8 @@ function generateProgression(
         return fail('range', err);
       }
     }
+    if (/choose another meter/i.test(err.message)) return fail('meter', err);
+    if (/no pattern called|a pattern/i.test(err.message)) return fail('pattern', err);
     return fail('changes', err);
   }
 }

@@ -1,3 +1,4 @@
+import { drillMaterial } from '@shared/practice/drill-identity';
 import { type Drill, instruments, presets } from '@shared/engine';
 import type { KeyOrder } from '@shared/schemas/drills';
 import { useState } from 'react';
@@ -40,7 +41,7 @@ export function PrintCycle({ cycle, order }: { cycle: Drill[]; order: KeyOrder }
       <header className="sf-print-header border-b-2 border-text pb-3">
         <p className="text-caption font-bold uppercase tracking-[0.2em] text-muted">Sixfold · key cycle</p>
         <h1 className="text-title">
-          {first.spec.pair.join(' / ')} · {patternName}
+          {first.changes ? `Over ${drillMaterial(first.spec)}` : first.spec.pair.join(' / ')} · {patternName}
         </h1>
         <dl className="mt-2 grid grid-cols-2 gap-x-6 gap-y-1 text-caption sm:grid-cols-3">
           <div>

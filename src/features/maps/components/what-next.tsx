@@ -1,3 +1,4 @@
+import { drillMaterial } from '@shared/practice/drill-identity';
 import { Link } from 'react-router-dom';
 import { useWhatNext } from '../api/maps';
 import { pct } from './heat';
@@ -20,6 +21,7 @@ export function WhatNext() {
             <Link to={to} className="block rounded-card border border-line bg-raised p-4 hover:border-brass-500">
               <span className="block font-bold">
                 {item.key} · {item.pattern}
+                {item.spec?.changes ? ` · over ${drillMaterial(item.spec)}` : ''}
               </span>
               <span className="block text-caption text-muted">
                 {item.reason === 'weak'
