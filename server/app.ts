@@ -1,13 +1,16 @@
 import { existsSync } from 'node:fs';
 import { join } from 'node:path';
-import { fileURLToPath } from 'node:url';
 import express from 'express';
 import type { AppContext, AppDeps } from './context';
 import { mailerFromEnv } from './mail/mailer';
 import { loadUser } from './middleware/auth';
+import { cleanInput } from './middleware/clean-input';
 import { requireCsrf } from './middleware/csrf';
 import { errorHandler, notFoundApi } from './middleware/error-handler';
+import { requestLogger } from './middleware/request-log';
+import { securityHeaders } from './middleware/security-headers';
 import { sessionMiddleware } from './middleware/session';
+import { clientDir as clientDirFromEnv } from './paths';
 import { adminRouter } from './routes/admin';
 import { adminPurchasesRouter } from './routes/admin-purchases';
 import { assignmentsRouter } from './routes/assignments';
@@ -29,22 +32,23 @@ import { takesRouter } from './routes/takes';
 
 export type { AppContext, AppDeps } from './context';
 
-// CLIENT_DIR lets a second work tree or test run serve a build of its own.
-const clientDir = process.env.CLIENT_DIR ?? fileURLToPath(new URL('../dist/client', import.meta.url));
-
 /** The Express app: API under /api, the built client for everything else. */
 export function createApp(deps: AppDeps) {
   const ctx: AppContext = { ...deps, mailer: deps.mailer ?? mailerFromEnv(deps.env) };
   const { env, pool, db } = ctx;
+  const clientDir = clientDirFromEnv();
   const app = express();
   app.disable('x-powered-by');
   if (env.TRUST_PROXY === '1') app.set('trust proxy', 1);
+  app.use(requestLogger(env, deps.logStream));
+  app.use(securityHeaders(env, clientDir));
 
   // Raw bytes for the signature check, before the JSON parser; no session, no CSRF token.
   app.post('/api/payments/webhook', express.raw({ type: 'application/json', limit: '1mb' }), paymentsWebhook(ctx));
   app.use('/api', sessionMiddleware(env, pool));
   app.use('/api', express.json({ limit: '2mb' }));
-  app.use('/api', requireCsrf);
+  app.use('/api', cleanInput);
+  app.use('/api', requireCsrf(env));
   app.use('/api', loadUser(db));
 
   app.use('/api/health', healthRouter(ctx));

@@ -1,4 +1,5 @@
 import type pg from 'pg';
+import type { DestinationStream } from 'pino';
 import type { Db } from './db/client';
 import type { Env } from './env';
 import type { Mailer } from './mail/mailer';
@@ -10,6 +11,8 @@ export interface AppDeps {
   env: Env;
   /** defaults to SMTP as the environment says */
   mailer?: Mailer;
+  /** where request logs go (default stdout); tests read them */
+  logStream?: DestinationStream;
 }
 
 /** What every router receives: the deps with the mailer settled. */

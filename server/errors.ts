@@ -25,6 +25,9 @@ export class AppError extends Error {
     this.name = 'AppError';
   }
 
+  /** seconds, sent as Retry-After (rate limits, an unreachable database) */
+  retryAfter?: number;
+
   get status(): number {
     return errorStatus[this.code];
   }
@@ -33,3 +36,10 @@ export class AppError extends Error {
 export const notFound = (what = 'That') => new AppError('not_found', `${what} was not found`);
 export const forbidden = (message = 'Your role may not do this') => new AppError('forbidden', message);
 export const unauthenticated = () => new AppError('unauthenticated', 'Sign in first');
+
+/** A 429 that says when to come back (Retry-After, in whole seconds). */
+export function rateLimited(message: string, retryAfterSeconds: number): AppError {
+  const err = new AppError('rate_limited', message);
+  err.retryAfter = Math.max(1, Math.ceil(retryAfterSeconds));
+  return err;
+}

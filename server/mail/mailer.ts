@@ -49,8 +49,9 @@ export function createSmtpMailer(opts: {
 
 export function mailerFromEnv(env: Env): Mailer {
   return createSmtpMailer({
-    host: env.SMTP_HOST,
-    port: env.SMTP_PORT,
+    host: env.SMTP_HOST ?? '127.0.0.1',
+    // the mail-submission port (RFC 6409) when a relay is named without one
+    port: env.SMTP_PORT ?? 587,
     secure: env.SMTP_SECURE === '1',
     user: env.SMTP_USER,
     pass: env.SMTP_PASS,

@@ -1,7 +1,11 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { ZodError } from 'zod';
 import { EngineError } from '../../shared/engine/errors';
+import { classifyDbError } from '../db/errors';
 import { AppError } from '../errors';
+
+/** Seconds a client should wait before trying again while the database is unreachable. */
+export const DB_RETRY_AFTER_SECONDS = 5;
 
 /** Field errors keyed by dotted path, for a 400 that says which field was wrong and why. */
 export function zodFields(err: ZodError): Record<string, string[]> {
@@ -25,6 +29,7 @@ export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
     return;
   }
   if (err instanceof AppError) {
+    if (err.retryAfter) res.set('Retry-After', String(err.retryAfter));
     res
       .status(err.status)
       .json({ error: { code: err.code, message: err.message, ...(err.fields ? { fields: err.fields } : {}) } });
@@ -48,7 +53,31 @@ export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
     res.status(status).json({ error: { code: 'bad_request', message: String(err?.message ?? 'Bad request') } });
     return;
   }
-  console.error(err);
+  const dbFailure = classifyDbError(err);
+  if (dbFailure === 'unavailable') {
+    res.set('Retry-After', String(DB_RETRY_AFTER_SECONDS));
+    res.status(503).json({
+      error: {
+        code: 'unavailable',
+        message: 'The server is busy: its database cannot be reached just now. Try again in a few seconds.',
+      },
+    });
+    return;
+  }
+  if (dbFailure === 'bad_value') {
+    // A last net: the schemas catch these first and name the field.
+    res.status(400).json({
+      error: {
+        code: 'bad_request',
+        message:
+          'A value in the request does not fit (a number too large, a date that does not exist, or a character not allowed)',
+      },
+    });
+    return;
+  }
+  // The first line only: a failed query's message goes on to list its parameters.
+  const stack = typeof err?.stack === 'string' ? err.stack.split('\n').filter((l: string) => /^\s+at /.test(l)) : [];
+  console.error(`[error] ${err?.name ?? 'Error'}: ${String(err?.message ?? err).split('\n')[0]}\n${stack.join('\n')}`);
   res
     .status(500)
     .json({ error: { code: 'internal', message: 'Something went wrong on our side; nothing you sent was lost' } });

@@ -13,7 +13,18 @@ declare module 'express-session' {
 
 export const SESSION_COOKIE = 'sixfold.sid';
 
-/** Sessions in PostgreSQL (connect-pg-simple); the cookie is HttpOnly, SameSite=Lax, Secure over HTTPS. */
+/**
+ * Whether cookies carry Secure: always in production (COOKIE_SECURE=1, the default there; behind
+ * a TLS-ending proxy set TRUST_PROXY=1 so X-Forwarded-Proto is believed), never with 0 (a
+ * plain-HTTP trial), and otherwise whenever the request itself came over HTTPS.
+ */
+export function cookieSecure(env: Env, req?: Request): boolean {
+  if (env.COOKIE_SECURE === '1') return true;
+  if (env.COOKIE_SECURE === '0') return false;
+  return Boolean(req?.secure);
+}
+
+/** Sessions in PostgreSQL (connect-pg-simple); the cookie is HttpOnly, SameSite=Lax, Secure as above. */
 export function sessionMiddleware(env: Env, pool: pg.Pool) {
   const PgStore = connectPgSimple(session);
   return session({
@@ -23,11 +34,12 @@ export function sessionMiddleware(env: Env, pool: pg.Pool) {
     resave: false,
     saveUninitialized: false,
     rolling: true,
+    // With TRUST_PROXY the proxy's X-Forwarded-Proto says whether the visitor used HTTPS.
+    ...(env.TRUST_PROXY === '1' ? { proxy: true } : {}),
     cookie: {
       httpOnly: true,
       sameSite: 'lax',
-      // Secure whenever the request came over HTTPS (directly or through a trusted proxy).
-      secure: 'auto',
+      secure: env.COOKIE_SECURE === '1' ? true : env.COOKIE_SECURE === '0' ? false : 'auto',
       maxAge: 1000 * 60 * 60 * 24 * 14,
     },
   });

@@ -8,8 +8,9 @@ import {
   UpdateAccountInput,
 } from '../../shared/schemas/auth';
 import type { AppContext } from '../context';
-import { requireUser, signedIn } from '../middleware/auth';
-import { csrfTokenFor } from '../middleware/csrf';
+import { signedIn, requireUser } from '../middleware/auth';
+import { linkOrigin } from '../mail/link-origin';
+import { csrfTokenFor, issueCsrfToken } from '../middleware/csrf';
 import { destroySession, regenerateSession, SESSION_COOKIE, saveSession } from '../middleware/session';
 import { parseBody } from '../middleware/validate';
 import { changePassword } from '../services/auth/change-password';
@@ -18,14 +19,8 @@ import { requestPasswordReset } from '../services/auth/request-password-reset';
 import { signIn } from '../services/auth/sign-in';
 import { signUp } from '../services/auth/sign-up';
 import { updateAccount } from '../services/auth/update-account';
-
-/** Where e-mailed links point: PUBLIC_URL, or outside production the address the request came to. */
-function linkOrigin(req: Request, deps: AppContext): string | null {
-  if (deps.env.PUBLIC_URL) return deps.env.PUBLIC_URL;
-  // A Host header is the sender's to choose; in production only PUBLIC_URL is trusted.
-  if (deps.env.NODE_ENV === 'production') return null;
-  return `${req.protocol}://${req.get('host')}`;
-}
+import { type Limit, takeLimit } from '../services/rate-limit/take';
+import type { Env } from '../env';
 
 /** Starts a signed-in session under a new id (no session fixation) with a new CSRF token. */
 async function startSession(req: Request, userId: string) {
@@ -35,12 +30,25 @@ async function startSession(req: Request, userId: string) {
   await saveSession(req);
 }
 
+/** Reset mails one address may be sent in 15 minutes. */
+export const RESET_EMAIL_LIMIT = 3;
+
+/** Sign-ups from one source an hour (plain and through an invite). */
+export function signUpLimit(req: Request, env: Env): Limit {
+  return {
+    key: `sign-up-ip:${req.ip}`,
+    max: env.SIGN_UP_IP_LIMIT,
+    windowSeconds: 60 * 60,
+    message: 'Too many new accounts from here in the last hour',
+  };
+}
+
 export function authRouter(deps: AppContext) {
   const { db } = deps;
   const router = Router();
 
   router.get('/csrf', (req, res) => {
-    res.json({ token: csrfTokenFor(req) });
+    res.json({ token: issueCsrfToken(req, res, deps.env) });
   });
 
   router.get('/session', (req, res) => {
@@ -53,6 +61,7 @@ export function authRouter(deps: AppContext) {
 
   router.post('/sign-up', async (req, res) => {
     const input = parseBody(SignUpInput, req);
+    await takeLimit(db, signUpLimit(req, deps.env));
     const user = await signUp(db, input);
     await startSession(req, user.id);
     res.status(201).json({ user });
@@ -60,7 +69,7 @@ export function authRouter(deps: AppContext) {
 
   router.post('/sign-in', async (req, res) => {
     const input = parseBody(SignInInput, req);
-    const user = await signIn(db, { ...input, ip: req.ip ?? 'unknown' }, { ipLimit: deps.env.SIGN_IN_IP_LIMIT });
+    const user = await signIn(db, { ...input, ip: req.ip ?? 'unknown' }, { sourceLimit: deps.env.SIGN_IN_IP_LIMIT });
     await startSession(req, user.id);
     res.json({ user });
   });
@@ -84,7 +93,24 @@ export function authRouter(deps: AppContext) {
 
   router.post('/password-reset', async (req, res) => {
     const input = parseBody(PasswordResetInput, req);
-    await requestPasswordReset(db, deps.mailer, { ...input, origin: linkOrigin(req, deps) });
+    await takeLimit(db, {
+      key: `reset-ip:${req.ip}`,
+      max: deps.env.RESET_IP_LIMIT,
+      windowSeconds: 15 * 60,
+      message: 'Too many password-reset requests from here',
+    });
+    // Counted per address whether or not it has an account, so the answer tells nothing.
+    await takeLimit(db, {
+      key: `reset-email:${input.email}`,
+      max: RESET_EMAIL_LIMIT,
+      windowSeconds: 15 * 60,
+      message: 'A reset link was sent to this address a few times already; check the inbox (and spam folder)',
+    });
+    // The answer leaves before the account is looked up, so known and unknown addresses take
+    // the same time; the lookup and the mail go on in the background.
+    requestPasswordReset(db, deps.mailer, { ...input, origin: linkOrigin(req, deps.env) }).catch((err: unknown) => {
+      console.error('[mail] password reset failed:', err instanceof Error ? err.message : err);
+    });
     res.json({ ok: true });
   });
 

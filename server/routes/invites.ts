@@ -8,9 +8,11 @@ import { parseBody, parseParams } from '../middleware/validate';
 import { acceptInvite } from '../services/invites/accept';
 import { previewInvite } from '../services/invites/preview';
 import { signUpThroughInvite } from '../services/invites/sign-up';
+import { takeLimit } from '../services/rate-limit/take';
+import { signUpLimit } from './auth';
 
 /** The e-mailed invite link: look at it signed out, accept it signed in, or sign up through it. */
-export function invitesRouter({ db }: AppContext) {
+export function invitesRouter({ db, env }: AppContext) {
   const router = Router();
 
   router.get('/:token', async (req, res) => {
@@ -26,6 +28,7 @@ export function invitesRouter({ db }: AppContext) {
   router.post('/:token/sign-up', async (req, res) => {
     const { token } = parseParams(InviteTokenParams, req);
     const input = parseBody(InviteSignUpInput, req);
+    await takeLimit(db, signUpLimit(req, env));
     const user = await signUpThroughInvite(db, token, input);
     // Signed in under a new session id (no fixation), with a new CSRF token.
     await regenerateSession(req);

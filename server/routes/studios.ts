@@ -3,6 +3,7 @@ import { CreateAssignmentInput } from '../../shared/schemas/assignments';
 import { CreateInviteInput, CreateStudioInput, StudioParams, StudioPlayerParams } from '../../shared/schemas/studios';
 import type { AppContext } from '../context';
 import { linkOrigin } from '../mail/link-origin';
+import { takeLimit } from '../services/rate-limit/take';
 import { requireRole, signedIn, requireUser } from '../middleware/auth';
 import { parseBody, parseParams } from '../middleware/validate';
 import { createAssignment } from '../services/assignments/create';
@@ -66,6 +67,12 @@ export function studiosRouter(deps: AppContext) {
     const { id } = parseParams(StudioParams, req);
     await teacherAccess(db, requireUser(req), id);
     const input = parseBody(CreateInviteInput, req);
+    await takeLimit(db, {
+      key: `invites:${requireUser(req).id}`,
+      max: env.INVITE_LIMIT,
+      windowSeconds: 60 * 60,
+      message: `You have sent ${env.INVITE_LIMIT} invites in the last hour, the most one teacher may`,
+    });
     const invite = await createInvite(db, deps.mailer, requireUser(req), id, {
       ...input,
       origin: linkOrigin(req, env),

@@ -8,7 +8,10 @@ export const KeyName = z.enum(KEYS as unknown as [string, ...string[]], {
   error: 'A key is one of C Db D Eb E F F# G Ab A Bb B',
 });
 
-const Day = z.iso.date({ error: 'Dates are written YYYY-MM-DD' });
+// The database's dates start at year 1 (there is no year 0 in the calendar it uses).
+const Day = z.iso
+  .date({ error: 'Dates are written YYYY-MM-DD' })
+  .refine((d) => d >= '0001-01-01', { error: 'Dates start at 0001-01-01' });
 const Text = z.string().trim().min(1).max(80);
 
 /** Filters shared by the history list and the maps; days are whole UTC days, both ends included. */

@@ -11,8 +11,9 @@ import { startFakeCheckout } from '../../server/payments/fake-checkout';
  * nodemailer to a fake SMTP server on a free loopback port (started on the first e-mail),
  * which files it in the shared dev_outbox table.
  *
- * All tests reach the app from 127.0.0.1, so the per-IP sign-in limit is raised here; the
- * rate-limit test sets its own, with TRUST_PROXY=1 and an X-Forwarded-For of its own.
+ * All tests reach the app from 127.0.0.1, so the per-source limits (sign-in failures, sign-ups,
+ * reset requests) are raised here; the rate-limit test sets its own, with TRUST_PROXY=1 and an
+ * X-Forwarded-For of its own.
  */
 export function createTestApp(overrides: Record<string, string> = {}) {
   const url = process.env.TEST_DATABASE_URL;
@@ -22,6 +23,8 @@ export function createTestApp(overrides: Record<string, string> = {}) {
     NODE_ENV: 'test',
     DATABASE_URL: url,
     SIGN_IN_IP_LIMIT: '10000',
+    SIGN_UP_IP_LIMIT: '10000',
+    RESET_IP_LIMIT: '10000',
     ...overrides,
   });
   const { db, pool } = createDb(url, 4);

@@ -74,7 +74,10 @@ describe('GET /api/dev/outbox', () => {
   it('is absent in production', async () => {
     const prod = createTestApp({
       NODE_ENV: 'production',
+      LOG_LEVEL: 'silent',
       SESSION_SECRET: 'a-production-secret-for-tests',
+      PUBLIC_URL: 'https://sixfold.example',
+      SMTP_HOST: '127.0.0.1',
       STRIPE_SECRET_KEY: 'sk_test_production_check',
       STRIPE_WEBHOOK_SECRET: 'whsec_production_check',
     });

@@ -8,10 +8,12 @@ import { createTestApp } from '../helpers/test-server';
 const ctx = createTestApp();
 afterAll(() => ctx.close());
 
-function sessionCookie(res: request.Response): string | undefined {
+function cookieNamed(res: request.Response, name: string): string | undefined {
   const raw = res.headers['set-cookie'] as unknown as string[] | undefined;
-  return raw?.find((c) => c.startsWith('sixfold.sid='));
+  return raw?.find((c) => c.startsWith(`${name}=`));
 }
+
+const sessionCookie = (res: request.Response) => cookieNamed(res, 'sixfold.sid');
 
 describe('POST /api/auth/sign-up', () => {
   it('creates a player, signs them in, and never returns the hash', async () => {
@@ -97,13 +99,14 @@ describe('POST /api/auth/sign-in', () => {
     const proxied = createTestApp({ TRUST_PROXY: '1' });
     try {
       const user = await createUser(proxied.db);
-      // The cookie is Secure, so a client on plain HTTP would not send it back: carry it by hand.
+      // The cookies are Secure, so a client on plain HTTP would not send them back: carry them by hand.
       const csrf = await request(proxied.app).get('/api/auth/csrf').set('X-Forwarded-Proto', 'https');
-      expect(sessionCookie(csrf)).toMatch(/;\s*Secure/i);
+      const anonCookie = cookieNamed(csrf, 'sixfold.csrf');
+      expect(anonCookie).toMatch(/;\s*Secure/i);
       const res = await request(proxied.app)
         .post('/api/auth/sign-in')
         .set('X-Forwarded-Proto', 'https')
-        .set('Cookie', sessionCookie(csrf)!.split(';')[0])
+        .set('Cookie', anonCookie!.split(';')[0])
         .set('X-CSRF-Token', csrf.body.token)
         .send({ email: user.email, password: user.password });
       expect(res.status).toBe(200);
@@ -113,15 +116,43 @@ describe('POST /api/auth/sign-in', () => {
     }
   });
 
+  it('in production the cookies are always Secure (COOKIE_SECURE defaults to 1 there)', async () => {
+    const prod = createTestApp({
+      NODE_ENV: 'production',
+      LOG_LEVEL: 'silent',
+      TRUST_PROXY: '1',
+      SESSION_SECRET: 'a-production-secret-for-tests',
+      PUBLIC_URL: 'https://sixfold.example',
+      SMTP_HOST: '127.0.0.1',
+      STRIPE_SECRET_KEY: 'sk_test_sixfold_local_fake',
+      STRIPE_WEBHOOK_SECRET: 'whsec_sixfold_local_fake',
+    });
+    try {
+      const user = await createUser(prod.db);
+      const csrf = await request(prod.app).get('/api/auth/csrf').set('X-Forwarded-Proto', 'https');
+      const anonCookie = cookieNamed(csrf, 'sixfold.csrf')!;
+      expect(anonCookie).toMatch(/;\s*Secure/i);
+      const res = await request(prod.app)
+        .post('/api/auth/sign-in')
+        .set('X-Forwarded-Proto', 'https')
+        .set('Cookie', anonCookie.split(';')[0])
+        .set('X-CSRF-Token', csrf.body.token)
+        .send({ email: user.email, password: user.password });
+      expect(res.status).toBe(200);
+      expect(sessionCookie(res)).toMatch(/;\s*Secure/i);
+      expect(res.headers['strict-transport-security']).toMatch(/max-age=\d+/);
+    } finally {
+      await prod.close();
+    }
+  });
+
   it('gives a new session id at sign-in (no session fixation)', async () => {
     const user = await createUser(ctx.db);
-    const agent = request.agent(ctx.app);
-    const first = await agent.get('/api/auth/csrf');
+    const c = await client(ctx.app);
+    const first = await c.post('/api/auth/sign-in', { email: user.email, password: user.password });
     const before = sessionCookie(first)!.split(';')[0];
-    const res = await agent
-      .post('/api/auth/sign-in')
-      .set('X-CSRF-Token', first.body.token)
-      .send({ email: user.email, password: user.password });
+    await c.refreshCsrf();
+    const res = await c.post('/api/auth/sign-in', { email: user.email, password: user.password });
     expect(res.status).toBe(200);
     const after = sessionCookie(res)!.split(';')[0];
     expect(after).not.toBe(before);

@@ -68,6 +68,41 @@ describe('password reset by e-mail', () => {
     );
   });
 
+  it('builds the link from the server itself, never from a forged Host or X-Forwarded-Host', async () => {
+    const user = await createUser(ctx.db);
+    const c = await client(ctx.app);
+    await c.agent
+      .post('/api/auth/password-reset')
+      .set('Host', 'evil.example')
+      .set('X-Forwarded-Host', 'evil.example')
+      .set('X-CSRF-Token', c.csrf)
+      .send({ email: user.email })
+      .expect(200);
+    const [mail] = await waitForMail(admin, user.email);
+    expect(mail.text).not.toContain('evil.example');
+    expect(mail.html).not.toContain('evil.example');
+    // No PUBLIC_URL here: the link names this server's HOST and the port it listens on.
+    expect(mail.text).toMatch(/http:\/\/127\.0\.0\.1:\d+\/reset-password\?token=/);
+  });
+
+  it('uses PUBLIC_URL when it is set', async () => {
+    const pub = createTestApp({ PUBLIC_URL: 'https://practice.sixfold.example' });
+    try {
+      const user = await createUser(pub.db);
+      const c = await client(pub.app);
+      await c.agent
+        .post('/api/auth/password-reset')
+        .set('Host', 'evil.example')
+        .set('X-CSRF-Token', c.csrf)
+        .send({ email: user.email })
+        .expect(200);
+      const [mail] = await waitForMail(admin, user.email);
+      expect(mail.text).toContain('https://practice.sixfold.example/reset-password?token=');
+    } finally {
+      await pub.close();
+    }
+  });
+
   it('refuses an expired link', async () => {
     const user = await createUser(ctx.db);
     const c = await client(ctx.app);
@@ -89,11 +124,12 @@ describe('password reset by e-mail', () => {
     const user = await createUser(ctx.db);
     const c = await client(ctx.app);
     await c.post('/api/auth/password-reset', { email: user.email }).expect(200);
+    // The link is made after the answer (so every answer takes the same time): the mail marks it done.
+    await waitForMail(admin, user.email);
     const [row] = await ctx.db.select().from(passwordResets).where(eq(passwordResets.userId, user.id));
     const minutes = (row.expiresAt.getTime() - row.createdAt.getTime()) / 60_000;
     expect(minutes).toBeGreaterThan(59);
     expect(minutes).toBeLessThanOrEqual(60.1);
-    await waitForMail(admin, user.email);
   });
 
   it('refuses a made-up token and names bad fields', async () => {
