@@ -4,6 +4,13 @@ import type { DrillSpec } from '../../../shared/schemas/drills';
 import type { AssignmentStatus, PlayerProgress } from '../../../shared/schemas/assignments';
 import type { Db } from '../../db/client';
 
+/**
+ * The part of a drill's shape an assignment holds a take to: pattern, direction and the pair's
+ * shape, not the instrument, so a saxophonist's takes of the drill count as a pianist's do.
+ */
+export const creditShape = (shape: string | null) =>
+  shape === null ? null : shape.split('|').toSpliced(2, 1).join('|');
+
 /** The shape of a stored take's drill from its columns (pair "D/C", pattern name, direction, instrument). */
 export function takeShape(t: {
   pair: string;
@@ -31,7 +38,7 @@ export function takeShape(t: {
 
 /**
  * Each player's progress with each assignment. A key counts when the player has a take of the
- * same drill (its pattern, direction, instrument and the shape of its pair, moved to that key)
+ * same drill (its pattern, direction and the shape of its pair, moved to that key, on any instrument)
  * played whole, at the target tempo or faster and at the target accuracy or better, made after
  * the assignment was set: whatever button started it. The assignment is met when every key it
  * names counts; past its due date and not met, it is overdue; else open. Players are the
@@ -91,17 +98,19 @@ export async function assignmentProgress(
     if (!r.key || !r.pair || !r.pattern || !r.instrument || !r.direction) continue;
     let want = shapes.get(r.assignment_id);
     if (want === undefined) {
-      want = drillShape({ ...r.spec, pattern: r.spec.pattern as DrillSpec['pattern'] });
+      want = creditShape(drillShape({ ...r.spec, pattern: r.spec.pattern as DrillSpec['pattern'] })) ?? '';
       shapes.set(r.assignment_id, want);
     }
-    const shape = takeShape({
-      pair: r.pair,
-      pattern: r.pattern,
-      direction: r.direction,
-      instrument: r.instrument,
-      changes: r.changes,
-      choruses: r.choruses,
-    });
+    const shape = creditShape(
+      takeShape({
+        pair: r.pair,
+        pattern: r.pattern,
+        direction: r.direction,
+        instrument: r.instrument,
+        changes: r.changes,
+        choruses: r.choruses,
+      }),
+    );
     if (shape === want) row.met.add(r.key);
   }
   for (const row of rows.values()) {

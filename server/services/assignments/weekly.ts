@@ -10,7 +10,7 @@ import { isId } from '../drills/visible-owner-ids';
 import { WEEKS_SHOWN } from '../maps/weekly';
 import { fillWeeks, recentWeeks } from '../maps/weeks';
 import { studioAccess } from '../studios/access';
-import { takeShape } from './progress';
+import { creditShape, takeShape } from './progress';
 
 /**
  * Week over week for one assignment: each player's whole takes of its drill in any of its keys
@@ -62,11 +62,11 @@ export async function assignmentWeekly(
     WHERE t.player_id IN (${ids}) AND t.key = ANY (SELECT unnest(keys) FROM assignments WHERE id = ${a.id}::uuid) AND t.measure_from IS NULL
       AND (t.started_at AT TIME ZONE ${tz})::date >= ${weeks[0]}::date
     GROUP BY 1, 2, 3, 4, 5, 6, 7, 8`);
-  const want = drillShape(a.spec as DrillSpec);
+  const want = creditShape(drillShape(a.spec as DrillSpec));
   // Merge the pairs of one week (each key is its own pair): accuracy weighted by takes.
   const merged = new Map<string, { week: string; takes: number; accuracy: number; tempo: number }[]>();
   for (const r of rows) {
-    if (takeShape(r) !== want) continue;
+    if (creditShape(takeShape(r)) !== want) continue;
     const list = merged.get(r.player_id) ?? [];
     const w = list.find((x) => x.week === r.week);
     if (w) {

@@ -30,7 +30,7 @@ export function TableScroll({
     };
   }, []);
   return (
-    <div className={`grid gap-1 ${className}`}>
+    <div className={`grid min-w-0 grid-cols-[minmax(0,1fr)] gap-1 ${className}`}>
       <div className="relative min-w-0">
         <section
           ref={ref}

@@ -80,7 +80,12 @@ export function SalesReport() {
           <>
             <div className="h-64 w-full text-ink-700 dark:text-ink-100" aria-hidden="true" data-testid="sales-chart">
               <ResponsiveContainer width="100%" height="100%">
-                <BarChart data={series} margin={{ top: 8, right: 16, bottom: 8, left: 0 }} barCategoryGap={1}>
+                <BarChart
+                  data={series}
+                  margin={{ top: 8, right: 16, bottom: 8, left: 0 }}
+                  barCategoryGap={1}
+                  accessibilityLayer={false}
+                >
                   <CartesianGrid strokeDasharray="3 3" opacity={0.4} vertical={false} />
                   <XAxis dataKey="day" tick={{ fontSize: 11, fill: 'currentColor' }} minTickGap={24} />
                   <YAxis allowDecimals={false} tick={{ fontSize: 11, fill: 'currentColor' }} width={32} />

@@ -1,10 +1,9 @@
 import { generateDrill, sliceDrill } from '@shared/engine';
 import { useMemo, useRef, useState } from 'react';
 import { useNavigate } from 'react-router-dom';
-import { DrillStaff } from '@/components/notation/drill-staff';
-import { noteOf } from '@/components/review/note-of';
 import { readNotes } from '@/components/review/note-readings';
 import { NoteStrip } from '@/components/review/note-strip';
+import { ReviewStaff } from '@/components/review/review-staff';
 import { SlipList } from '@/components/review/slip-list';
 import { Button } from '@/components/ui/button';
 import { useMe } from '@/features/auth/api/session';
@@ -70,15 +69,14 @@ export function TakeView({ id }: { id: string }) {
         {(['hit', 'early', 'late', 'wrong', 'missed'] as const).map((v) => `${counts[v] ?? 0} ${v}`).join(' · ')}
         {take.stoppedAtMs !== null ? ' · stopped early: later notes not scored' : ''}
       </p>
-      {/* biome-ignore lint/a11y/useKeyWithClickEvents lint/a11y/noStaticElementInteractions: the note strip is the keyboard route to the same choice */}
-      <div onClick={(e) => noteOf(e.target, setChosen)} className="cursor-pointer" data-testid="review-staff">
-        <DrillStaff
-          drill={drill}
-          marks={marks}
-          current={current ?? chosen}
-          label={`The take's drill, ${counts.missed ?? 0} missed and ${counts.wrong ?? 0} wrong notes marked; the chosen note is lit`}
-        />
-      </div>
+      <ReviewStaff
+        drill={drill}
+        marks={marks}
+        current={current ?? chosen}
+        readings={readings}
+        onSelect={setChosen}
+        label={`The take's drill, ${counts.missed ?? 0} missed and ${counts.wrong ?? 0} wrong notes marked, the pitch played over each wrong note and a timing tick under each played one; the chosen note is lit`}
+      />
       <div className="flex flex-wrap gap-2">
         <Button onClick={() => void replay()}>Replay the drill</Button>
         {current !== null ? (

@@ -42,12 +42,12 @@ export function BeatMap({ filters }: { filters: MapFilters }) {
                         <button
                           type="button"
                           title={words}
-                          aria-label={words}
                           className="flex h-14 w-12 flex-col items-center justify-center rounded text-caption tabular-nums focus:outline-2"
                           style={heatColour(c.rate)}
                         >
                           <span className="font-bold">{positionName(c.position)}</span>
                           <span>{pct(c.rate)}</span>
+                          <span className="sr-only">{`not hit, in ${m} (${c.errors} of ${c.notes} notes)`}</span>
                         </button>
                       </li>
                     );

@@ -10,7 +10,23 @@ export const HEAT_STEPS = 8;
  */
 export function heatColour(rate: number): { background: string; color: string } {
   const t = Math.min(1, rate / RATE_CEILING);
-  return { background: interpolateCividis(1 - t), color: t > 0.45 ? '#ffffff' : '#111111' };
+  const background = interpolateCividis(1 - t);
+  return { background, color: textOn(background) };
+}
+
+/** WCAG 2 relative luminance of an "rgb(r, g, b)" colour. */
+function luminance(rgb: string): number {
+  const [r, g, b] = (rgb.match(/\d+/g) ?? ['0', '0', '0']).slice(0, 3).map((v) => {
+    const c = Number(v) / 255;
+    return c <= 0.03928 ? c / 12.92 : ((c + 0.055) / 1.055) ** 2.4;
+  });
+  return 0.2126 * r + 0.7152 * g + 0.0722 * b;
+}
+
+/** Near-black or white, whichever stands out more against the cell (WCAG 2 contrast ratio). */
+export function textOn(background: string): string {
+  const l = luminance(background);
+  return (l + 0.05) / 0.05 >= 1.05 / (l + 0.05) ? '#111111' : '#ffffff';
 }
 
 export const heatStep = (rate: number) =>

@@ -35,7 +35,7 @@ export function ProgressCharts({ filters }: { filters: MapFilters }) {
           {/* The accuracy line and the axis figures take the wrapper's colour, so they read on both themes. */}
           <div className="h-64 w-full text-ink-700 dark:text-ink-100" aria-hidden="true">
             <ResponsiveContainer width="100%" height="100%">
-              <LineChart data={series} margin={{ top: 8, right: 16, bottom: 8, left: 0 }}>
+              <LineChart data={series} margin={{ top: 8, right: 16, bottom: 8, left: 0 }} accessibilityLayer={false}>
                 <CartesianGrid strokeDasharray="3 3" opacity={0.4} />
                 <XAxis dataKey="day" tick={{ fontSize: 11, fill: 'currentColor' }} />
                 <YAxis yAxisId="acc" domain={[0, 100]} unit="%" tick={{ fontSize: 11, fill: 'currentColor' }} />

@@ -9,7 +9,7 @@ const weekLabel = (w: string) => `week of ${short.format(new Date(`${w}T00:00:00
 
 /** What counts towards an assignment, in words: the rule the server applies. */
 export function creditRule(a: Pick<Assignment, 'targetTempo' | 'targetAccuracy' | 'keys'>): string {
-  return `Counts every whole take of this drill in ${
+  return `Counts every whole take of this drill, on any instrument, in ${
     a.keys.length === 1 ? `${a.keys[0]}` : `each of its ${a.keys.length} keys`
   } at ${a.targetTempo} bpm or faster with ${pct(a.targetAccuracy)} or more, played after it was set, whichever button started it.`;
 }

@@ -1,9 +1,9 @@
 import { type Drill, generateDrill, sliceDrill } from '@shared/engine';
 import { type FormEvent, useMemo, useState } from 'react';
-import { DrillStaff, type NoteMarks } from '@/components/notation/drill-staff';
-import { noteOf } from '@/components/review/note-of';
+import type { NoteMarks } from '@/components/notation/drill-staff';
 import { readNotes } from '@/components/review/note-readings';
 import { NoteStrip } from '@/components/review/note-strip';
+import { ReviewStaff } from '@/components/review/review-staff';
 import { SlipList } from '@/components/review/slip-list';
 import { Button } from '@/components/ui/button';
 import { FormMessage } from '@/components/ui/form-message';
@@ -130,16 +130,14 @@ export function TakeReview({ takeId, viewerId }: { takeId: string; viewerId: str
         </p>
       </header>
       {drill ? (
-        // A click on a drawn note chooses it, as the note strip below does (the keyboard's way there).
-        // biome-ignore lint/a11y/useKeyWithClickEvents lint/a11y/noStaticElementInteractions: the note strip is the keyboard route to the same choice
-        <div onClick={(e) => noteOf(e.target, choose)} className="cursor-pointer" data-testid="review-staff">
-          <DrillStaff
-            drill={drill}
-            marks={marks}
-            current={selected}
-            label={`The take's drill with each note's verdict; pinned notes are ringed; the chosen note is lit`}
-          />
-        </div>
+        <ReviewStaff
+          drill={drill}
+          marks={marks}
+          current={selected}
+          readings={readings}
+          onSelect={choose}
+          label={`The take's drill with each note's verdict, the pitch played over each wrong note and a timing tick under each played one; pinned notes are ringed; the chosen note is lit`}
+        />
       ) : (
         <FormMessage tone="error">This take's drill could not be rebuilt.</FormMessage>
       )}
