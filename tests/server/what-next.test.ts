@@ -78,7 +78,8 @@ describe('GET /api/maps/next', () => {
     expect(items[1]).toMatchObject({ notes: 45, errors: 10, daysSince: 0 });
     // Each comes with a drill one click from a take: the player's own pair, moved to the key.
     expect(items[0].spec).toMatchObject({ pair: ['Bb', 'Ab'], pattern: 'four-three' });
-    expect(items[3].spec).toMatchObject({ pair: ['Db', 'B'], pattern: 'weave' });
+    // the moved pair is spelled as one unit (Db/Cb would make Cb a root), so Eb/Db a whole step down reads C#/B
+    expect(items[3].spec).toMatchObject({ pair: ['C#', 'B'], pattern: 'weave' });
   });
 
   it('has nothing to say to a player with no takes', async () => {
