@@ -199,7 +199,7 @@ describe('the staff drawn from the notation model, in Chromium', () => {
     // Every verdict the take holds is drawn by its own shape under the note.
     const verdicts = new Set(stored.score.results.map((r) => r.verdict));
     expect(verdicts.size).toBeGreaterThanOrEqual(4);
-    for (const v of verdicts) expect(await page.locator(`.vf-sf-marks .sf-mark-${v}`).count()).toBeGreaterThan(0);
+    for (const v of verdicts) expect(await page.locator(`.vf-sf-marks .sf-verdict-${v}`).count()).toBeGreaterThan(0);
     const staff = page.getByTestId('drill-staff').first();
     await staff.screenshot({ path: join(shots, 'take-marks-light.png') });
     await page.evaluate(() => document.documentElement.classList.add('dark'));

@@ -33,7 +33,7 @@ function Shape({ verdict }: { verdict: Verdict }) {
       height="14"
       viewBox="0 0 14 14"
       aria-hidden="true"
-      className={`sf-mark sf-mark-${verdict} inline-block align-[-2px]`}
+      className={`sf-mark sf-verdict-${verdict} inline-block align-[-2px]`}
     >
       {shape}
     </svg>

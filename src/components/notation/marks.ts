@@ -92,7 +92,7 @@ export class MarkLayer {
     this.shapes.delete(index);
     if (!mark) return;
     const g = svgEl(this.layer, 'g', {
-      class: `sf-mark sf-mark-${mark.verdict}${mark.settled ? '' : ' sf-provisional'}`,
+      class: `sf-mark sf-verdict-${mark.verdict}${mark.settled ? '' : ' sf-provisional'}`,
       'data-mark-for': index,
     });
     drawVerdictShape(g, mark.verdict, geo.x, geo.laneY);
