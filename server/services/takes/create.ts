@@ -1,12 +1,12 @@
-import { sql } from 'drizzle-orm';
+import { type SQL, sql } from 'drizzle-orm';
 import type { DrillSpec, PlayedNote, ScoreOptions } from '../../../shared/engine';
 import type { InputKind } from '../../../shared/schemas/takes';
 import type { Db } from '../../db/client';
-import { type TakeRow, takes } from '../../db/schema/takes';
+import type { TakeRow } from '../../db/schema/takes';
 import { AppError } from '../../errors';
-import { climbTempo } from '../practice/climb-tempo';
+import { tempoClimbStep } from '../practice/climb-tempo';
 import { takeDurationMs } from './duration';
-import { scoreRawTake } from './score-take';
+import { type ScoredTake, scoreRawTake } from './score-take';
 
 export interface CreateTakeArgs {
   playerId: string;
@@ -22,81 +22,144 @@ export interface CreateTakeArgs {
 }
 
 /**
- * Scores and stores a take with its per-note results in one transaction. The client's id makes
- * it idempotent: the same id again returns the stored take (created: false), never a copy.
+ * Scores and stores a take with its per-note results. The client's id makes it idempotent: the
+ * same id again returns the stored take (created: false), never a copy.
+ *
+ * The take, its notes (whose statement triggers add them to the map summaries) and the tempo
+ * climb go in one statement, so a take costs the database one round trip and one commit.
  */
 export async function createTake(db: Db, args: CreateTakeArgs): Promise<{ take: TakeRow; created: boolean }> {
-  const existing = await db.query.takes.findFirst({ where: (t, { eq }) => eq(t.id, args.id) });
-  if (existing) return sameOwner(existing, args.playerId);
-
   const scored = scoreRawTake(args);
-  const { drill, score } = scored;
-  const meter = `${drill.spec.meter[0]}/${drill.spec.meter[1]}`;
+  const { rows } = await db.execute<StoredFigures>(takeStatement(args, scored));
+  if (rows.length === 0) {
+    // The id was taken (a retry, or another request with the same id): answer with what is stored.
+    const row = await db.query.takes.findFirst({ where: (t, { eq }) => eq(t.id, args.id) });
+    if (!row) throw new AppError('conflict', 'The take could not be stored; send it again');
+    return sameOwner(row, args.playerId);
+  }
+  return { take: storedRow(args, scored, rows[0]), created: true };
+}
 
-  return db.transaction(async (tx) => {
-    const inserted = await tx
-      .insert(takes)
-      .values({
-        id: args.id,
-        playerId: args.playerId,
-        assignmentId: args.assignmentId ?? null,
-        spec: drill.spec,
-        options: scored.options,
-        measureFrom: args.measures?.[0] ?? null,
-        measureTo: args.measures?.[1] ?? null,
-        stoppedAtMs: args.stoppedAtMs ?? null,
-        inputKind: args.inputKind ?? null,
-        played: args.played,
-        score,
-        key: scored.key,
-        pattern: scored.pattern,
-        pair: scored.pair,
-        instrument: drill.spec.instrument,
-        tempo: drill.spec.tempo,
-        accuracy: score.accuracy,
-        meanOffsetMs: score.meanOffsetMs,
-        noteCount: scored.expected.length,
-        durationMs: takeDurationMs(scored.expected, args.played, drill.spec.tempo, args.stoppedAtMs),
-        startedAt: args.startedAt,
-      })
-      .onConflictDoNothing({ target: takes.id })
-      .returning();
-    if (inserted.length === 0) {
-      // Another request with the same id won the race; answer with what it stored.
-      const row = await tx.query.takes.findFirst({ where: (t, { eq }) => eq(t.id, args.id) });
-      if (!row) throw new AppError('conflict', 'The take could not be stored; send it again');
-      return sameOwner(row, args.playerId);
+/** What the database decides or rounds (float4 columns), read back from the statement. */
+interface StoredFigures extends Record<string, unknown> {
+  created_at: Date | string;
+  tempo: number;
+  accuracy: number;
+  mean_offset_ms: number | null;
+  stopped_at_ms: number | null;
+  duration_ms: number | null;
+}
+
+/**
+ * The one statement that stores a scored take: the takes row (nothing when the id exists), then,
+ * only when that row went in, the tempo climb's step and every note's result. Answers one row
+ * with the stored figures, or none when the id was already there.
+ */
+export function takeStatement(args: CreateTakeArgs, scored: ScoredTake): SQL {
+  const v = takeRowValues(args, scored);
+  const climb = tempoClimbStep(args.playerId, scored, wholeTake(args));
+  const notes = takeNotesRows(scored);
+  return sql`
+    WITH t AS (
+      INSERT INTO takes (id, player_id, assignment_id, spec, options, measure_from, measure_to, stopped_at_ms,
+                         input_kind, played, score, key, pattern, pair, instrument, tempo, accuracy, mean_offset_ms,
+                         note_count, duration_ms, started_at)
+      VALUES (${v.id}, ${v.playerId}, ${v.assignmentId}, ${JSON.stringify(v.spec)}, ${JSON.stringify(v.options)},
+              ${v.measureFrom}, ${v.measureTo}, ${v.stoppedAtMs}, ${v.inputKind}, ${JSON.stringify(v.played)},
+              ${JSON.stringify(v.score)}, ${v.key}, ${v.pattern}, ${v.pair}, ${v.instrument}, ${v.tempo},
+              ${v.accuracy}, ${v.meanOffsetMs}, ${v.noteCount}, ${v.durationMs}, ${v.startedAt.toISOString()})
+      ON CONFLICT (id) DO NOTHING
+      RETURNING created_at, tempo, accuracy, mean_offset_ms, stopped_at_ms, duration_ms
+    )${
+      climb
+        ? sql`, climb AS (
+      INSERT INTO tempo_climbs (player_id, drill, key, tempo, last_tempo, last_verdict)
+      SELECT ${climb.playerId}, ${climb.drill}, ${climb.key}, ${climb.tempo}, ${climb.lastTempo}, ${climb.lastVerdict}
+      FROM t
+      ON CONFLICT (player_id, drill, key) DO UPDATE
+      SET tempo = EXCLUDED.tempo, last_tempo = EXCLUDED.last_tempo, last_verdict = EXCLUDED.last_verdict,
+          updated_at = now()
+    )`
+        : sql``
+    }${
+      notes
+        ? sql`, notes AS (
+      INSERT INTO take_notes (take_id, idx, player_id, midi, beat, measure, position, meter, verdict, offset_ms,
+                              key, pattern, pair, instrument, played_at)
+      SELECT ${args.id}, x.idx, ${args.playerId}, x.midi, x.beat, x.measure, x.position, ${notes.meter}, x.verdict,
+             x.offset_ms, COALESCE(x.key, ${scored.key}), ${scored.pattern}, COALESCE(x.pair, ${scored.pair}),
+             ${v.instrument}, ${v.startedAt.toISOString()}
+      FROM jsonb_to_recordset(${notes.json}::jsonb)
+        AS x(idx int, midi int, beat real, measure int, position real, verdict text, offset_ms real, key text, pair text)
+      WHERE EXISTS (SELECT FROM t)
+    )`
+        : sql``
     }
-    const rows = scored.expected.map((n, i) => ({
-      idx: i,
-      midi: n.midi,
-      beat: n.beat,
-      measure: n.measure,
-      position: Math.round(n.beatInMeasure * 12) / 12,
-      verdict: score.results[i].verdict,
-      offset_ms: score.results[i].offsetMs,
-      key: scored.noteKeys?.[i].key ?? null,
-      pair: scored.noteKeys?.[i].pair ?? null,
-    }));
-    if (rows.length > 0) {
-      // One statement for every note: the rows travel as one JSON parameter.
-      await tx.execute(sql`
-        INSERT INTO take_notes (take_id, idx, player_id, midi, beat, measure, position, meter, verdict, offset_ms,
-                                key, pattern, pair, instrument, played_at)
-        SELECT ${args.id}, x.idx, ${args.playerId}, x.midi, x.beat, x.measure, x.position, ${meter}, x.verdict, x.offset_ms,
-               COALESCE(x.key, ${scored.key}), ${scored.pattern}, COALESCE(x.pair, ${scored.pair}), ${drill.spec.instrument},
-               ${args.startedAt.toISOString()}
-        FROM jsonb_to_recordset(${JSON.stringify(rows)}::jsonb)
-          AS x(idx int, midi int, beat real, measure int, position real, verdict text, offset_ms real, key text, pair text)`);
-    }
-    await climbTempo(
-      tx,
-      args.playerId,
-      scored,
-      !args.measures && (args.stoppedAtMs === undefined || args.stoppedAtMs === null),
-    );
-    return { take: inserted[0], created: true };
-  });
+    SELECT * FROM t`;
+}
+
+/** The stored row, from what was sent and the figures the database gave back. */
+function storedRow(args: CreateTakeArgs, scored: ScoredTake, got: StoredFigures): TakeRow {
+  return {
+    ...takeRowValues(args, scored),
+    tempo: got.tempo,
+    accuracy: got.accuracy,
+    meanOffsetMs: got.mean_offset_ms,
+    stoppedAtMs: got.stopped_at_ms,
+    durationMs: got.duration_ms,
+    createdAt: new Date(got.created_at),
+  };
+}
+
+/** A whole take (no passage, not stopped early) moves the tempo climb. */
+export function wholeTake(args: CreateTakeArgs): boolean {
+  return !args.measures && (args.stoppedAtMs === undefined || args.stoppedAtMs === null);
+}
+
+/** The takes row of a scored take. */
+export function takeRowValues(args: CreateTakeArgs, scored: ScoredTake) {
+  const { drill, score } = scored;
+  return {
+    id: args.id,
+    playerId: args.playerId,
+    assignmentId: args.assignmentId ?? null,
+    spec: drill.spec,
+    options: scored.options,
+    measureFrom: args.measures?.[0] ?? null,
+    measureTo: args.measures?.[1] ?? null,
+    stoppedAtMs: args.stoppedAtMs ?? null,
+    inputKind: args.inputKind ?? null,
+    played: args.played,
+    score,
+    key: scored.key,
+    pattern: scored.pattern,
+    pair: scored.pair,
+    instrument: drill.spec.instrument,
+    tempo: drill.spec.tempo,
+    accuracy: score.accuracy,
+    meanOffsetMs: score.meanOffsetMs,
+    noteCount: scored.expected.length,
+    durationMs: takeDurationMs(scored.expected, args.played, drill.spec.tempo, args.stoppedAtMs),
+    startedAt: args.startedAt,
+  };
+}
+
+/** Every scored note's result as one JSON parameter; null when no note was scored. */
+function takeNotesRows(scored: ScoredTake): { json: string; meter: string } | null {
+  const { drill, score } = scored;
+  if (scored.expected.length === 0) return null;
+  const rows = scored.expected.map((n, i) => ({
+    idx: i,
+    midi: n.midi,
+    beat: n.beat,
+    measure: n.measure,
+    position: Math.round(n.beatInMeasure * 12) / 12,
+    verdict: score.results[i].verdict,
+    offset_ms: score.results[i].offsetMs,
+    key: scored.noteKeys?.[i].key ?? null,
+    pair: scored.noteKeys?.[i].pair ?? null,
+  }));
+  return { json: JSON.stringify(rows), meter: `${drill.spec.meter[0]}/${drill.spec.meter[1]}` };
 }
 
 function sameOwner(row: TakeRow, playerId: string) {
