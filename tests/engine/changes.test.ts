@@ -250,6 +250,21 @@ describe('drills over changes', () => {
     expect(d.notes.filter((n) => n.beatInMeasure === 1).map((n) => n.measure)).toEqual([1, 2, 3, 4]);
   });
 
+  it('in 6/8 a triplet pattern runs in plain eighths, three to the dotted-quarter beat', () => {
+    // common practice: compound meters write triplet figures as eighths
+    const changes: ChordChange[] = [
+      { chord: 'Cmaj7', beats: 3 },
+      { chord: 'A7', beats: 3 },
+    ];
+    const d = generateDrill({ pattern: 'weave', direction: 'up', changes, meter: [6, 8], choruses: 2 });
+    expect(d.notes).toHaveLength(24);
+    expect(d.notes.every((n) => n.duration === 0.5)).toBe(true);
+    expect(d.measures).toBe(4);
+    expect(d.changes?.map((c) => c.startBeat)).toEqual([0, 3, 6, 9]);
+    expect(d.notes.filter((n) => n.chordIndex === 1).map((n) => n.beat)).toEqual([3, 3.5, 4, 4.5, 5, 5.5]);
+    expect(() => generateDrill({ pattern: 'weave', direction: 'up', changes, meter: [7, 8] })).toThrow(/7\/8/);
+  });
+
   it('says what is wrong with a bad progression', () => {
     const bad =
       (changes: unknown, extra: Partial<DrillSpec> = {}) =>
