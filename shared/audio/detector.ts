@@ -242,6 +242,13 @@ export function createNoteDetector(sampleRate: number, options: DetectOptions = 
     }
     if (!gateOpen) return;
 
+    // A held note whose last frame sat on its pitch: every other frame is enough to notice a
+    // change (a new pitch is then followed frame by frame until it holds or goes away).
+    const held = active as Active | null;
+    if (held && held.ref !== null && !run && lastNearMs === msAt(center - hop) && k % 2 === 1) {
+      if (tc < held.onsetMs + HOLD_MS) held.peakDb = Math.max(held.peakDb, db);
+      return;
+    }
     const frame: Frame = { ms: tc, pitch: pitchAt(center) };
     const a = active as Active | null;
     if (a) {
