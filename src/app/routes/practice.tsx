@@ -6,6 +6,7 @@ import { specFromParams } from '@/features/drills/hooks/spec-params';
 import { fetchSavedDrill } from '@/features/practice/api/drill-source';
 import { useSettings } from '@/features/practice/api/settings';
 import { PracticeRoom } from '@/features/practice/components/practice-room';
+import { savedDrillKeys } from '@/lib/queries/saved-drills';
 import { initialOptions } from '@/features/practice/lib/initial-options';
 
 /** The free starter drill of the demo studio: C/D over Cmaj7#11. */
@@ -29,7 +30,7 @@ export function PracticeRoute() {
   const fromParams = useMemo(() => specFromParams(params), [params]);
   const savedId = params.get('drill');
   const saved = useQuery({
-    queryKey: ['drills', 'saved', savedId],
+    queryKey: savedDrillKeys.one(savedId ?? ''),
     queryFn: () => fetchSavedDrill(savedId ?? ''),
     enabled: !!savedId,
   });

@@ -12,8 +12,8 @@ import type {
   UpdateBookDrillInput,
   UpdateBookInput,
 } from '@shared/schemas/books';
-import type { SavedDrillsResponse } from '@shared/schemas/drills';
 import { api } from '@/lib/api-client';
+import { useSavedDrills } from '@/lib/queries/saved-drills';
 
 export const booksKey = ['books'] as const;
 const enc = encodeURIComponent;
@@ -72,7 +72,7 @@ export function useSales() {
 
 /** The teacher's saved drills, to add to a book. */
 export function useTeacherSavedDrills() {
-  return useQuery({ queryKey: ['drills', 'saved'], queryFn: () => api.get<SavedDrillsResponse>('/api/drills') });
+  return useSavedDrills();
 }
 
 function useBookMutation<I>(fn: (input: I) => Promise<BookResponse>) {

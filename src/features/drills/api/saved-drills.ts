@@ -1,19 +1,10 @@
-import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { CreateSavedDrillInput, SavedDrillResponse, SavedDrillsResponse } from '@shared/schemas/drills';
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { CreateSavedDrillInput, SavedDrillResponse } from '@shared/schemas/drills';
 import { api } from '@/lib/api-client';
+import { fetchSavedDrills, savedDrillKeys, savedDrillsQueryOptions, useSavedDrills } from '@/lib/queries/saved-drills';
 
-export const savedDrillsKey = ['drills', 'saved'] as const;
-
-export function fetchSavedDrills(): Promise<SavedDrillsResponse> {
-  return api.get<SavedDrillsResponse>('/api/drills');
-}
-
-export const savedDrillsQueryOptions = queryOptions({ queryKey: savedDrillsKey, queryFn: fetchSavedDrills });
-
-/** The user's saved drills and their studios' teachers'. */
-export function useSavedDrills() {
-  return useQuery(savedDrillsQueryOptions);
-}
+export const savedDrillsKey = savedDrillKeys.all;
+export { fetchSavedDrills, savedDrillsQueryOptions, useSavedDrills };
 
 export function saveDrill(input: CreateSavedDrillInput): Promise<SavedDrillResponse> {
   return api.post<SavedDrillResponse>('/api/drills', input);

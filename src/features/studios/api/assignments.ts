@@ -5,8 +5,8 @@ import type {
   AssignmentWeeklyResponse,
   CreateAssignmentInput,
 } from '@shared/schemas/assignments';
-import type { SavedDrillsResponse } from '@shared/schemas/drills';
 import { api } from '@/lib/api-client';
+import { useSavedDrills } from '@/lib/queries/saved-drills';
 import { studiosKey } from './studios';
 
 export const myAssignmentsKey = ['assignments', 'mine'] as const;
@@ -39,7 +39,7 @@ export function useDeleteAssignment(studioId: string) {
 
 /** The teacher's saved drills, to pick one for an assignment. */
 export function useTeacherDrills() {
-  return useQuery({ queryKey: ['drills', 'saved'], queryFn: () => api.get<SavedDrillsResponse>('/api/drills') });
+  return useSavedDrills();
 }
 
 /** The practice page, opened on the assignment's drill in one of its keys. */
