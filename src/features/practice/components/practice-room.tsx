@@ -69,11 +69,8 @@ export function PracticeRoom({ baseSpec, settings, initialOptions, assignmentId,
   // A looped passage, else the ladder's step, else the whole drill.
   const drill = looping ? passage.drill : ladder.drill;
   const step = looping ? null : ladder.step;
-  const measures: [number, number] | null = passage.loop
-    ? [passage.loop.from, passage.loop.to]
-    : step
-      ? [step[0], step[1]]
-      : null;
+  const measures: [number, number] | null =
+    looping && passage.loop ? [passage.loop.from, passage.loop.to] : step ? [step[0], step[1]] : null;
 
   const microphone = useMicrophone();
   const deviceName = microphone.on
