@@ -82,6 +82,20 @@ describe('the progression editor on the drills page, in Chromium', () => {
     await page.screenshot({ path: `${shots}/progression-pinned.png`, fullPage: true });
   });
 
+  it('saves the progression drill and opens it again, bars and pins and all', async () => {
+    const { page } = browser;
+    const pinned = JSON.parse(new URL(page.url()).searchParams.get('spec') ?? '{}').changes;
+    await page.getByLabel('Name for this drill').fill('ii-V-I, pinned V');
+    await page.getByRole('button', { name: 'Save drill' }).click();
+    await page.getByRole('button', { name: 'Open ii-V-I, pinned V' }).waitFor();
+    // somewhere else, then back to the saved one
+    await page.getByLabel('Start from').selectOption('minor-blues');
+    await expect.poll(() => page.getByTestId('progression-chord').count()).toBe(7);
+    await page.getByRole('button', { name: 'Open ii-V-I, pinned V' }).click();
+    await expect.poll(() => page.getByTestId('progression-chart').inputValue()).toBe('| Dm7 G7 | Cmaj7 |');
+    await expect.poll(() => JSON.parse(new URL(page.url()).searchParams.get('spec') ?? '{}').changes).toEqual(pinned);
+  });
+
   it('opens the progression drill on the practice page, named by its chords', async () => {
     const { page } = browser;
     await page.getByRole('link', { name: 'Practise this drill' }).click();

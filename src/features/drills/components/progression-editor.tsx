@@ -56,13 +56,27 @@ export function ProgressionEditor({
   const chartId = useId();
   const changesRef = useRef(draft.changes);
   changesRef.current = draft.changes;
+  // the changes this editor set last: any others came from outside (a saved drill opened)
+  const mine = useRef(draft.changes);
+  const setChanges = (changes: ChordChange[] | null) => {
+    mine.current = changes;
+    update({ changes });
+  };
+  // biome-ignore lint/correctness/useExhaustiveDependencies: only changes from outside rewrite the bars
+  useEffect(() => {
+    if (draft.changes && draft.changes !== mine.current) {
+      mine.current = draft.changes;
+      setText(chartOf(draft.changes, draft.meter));
+      setError(null);
+    }
+  }, [draft.changes]);
 
   function apply(chart: string, meter = draft.meter) {
     setText(chart);
     try {
       const changes = parseChart(chart, meter, changesRef.current ?? []);
       setError(null);
-      update({ changes });
+      setChanges(changes);
     } catch (err) {
       if (!(err instanceof EngineError)) throw err;
       setError(err.message);
@@ -96,7 +110,7 @@ export function ProgressionEditor({
           checked={on}
           onChange={(e) => {
             if (e.target.checked) apply(text);
-            else update({ changes: null });
+            else setChanges(null);
           }}
         />
         Play the pattern through a progression, a pair for each chord
@@ -153,7 +167,7 @@ export function ProgressionEditor({
               </p>
             ) : null}
           </div>
-          <ChordPairs changes={draft.changes ?? []} played={played} update={update} />
+          <ChordPairs changes={draft.changes ?? []} played={played} setChanges={setChanges} />
         </>
       ) : null}
     </section>
@@ -164,11 +178,11 @@ export function ProgressionEditor({
 function ChordPairs({
   changes,
   played,
-  update,
+  setChanges,
 }: {
   changes: ChordChange[];
   played: NonNullable<Drill['changes']>;
-  update: (patch: Partial<Draft>) => void;
+  setChanges: (changes: ChordChange[]) => void;
 }) {
   const fits = useMemo(() => changes.map((c) => fitsOf(c.chord)), [changes]);
   if (changes.length === 0) return null;
@@ -180,7 +194,7 @@ function ChordPairs({
       const [a, b] = value.split('|');
       return { ...rest, pair: [a, b] as [string, string] };
     });
-    update({ changes: next });
+    setChanges(next);
   };
   return (
     <ol className="grid gap-2 sm:grid-cols-2" aria-label="Pairs for each chord">
