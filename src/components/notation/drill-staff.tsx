@@ -36,6 +36,18 @@ interface Props {
 
 const renderer = () => import('./render-staff');
 
+const MARK_CLASS = /^sf-(mark-(hit|early|late|wrong|missed)|provisional|current)$/;
+
+/** Classes a page adds to notes beside the verdict ('sf-pinned'), set on the note as given. */
+function extrasOf(marks: NoteMarks | undefined): Map<number, string[]> {
+  const out = new Map<number, string[]>();
+  for (const [i, cls] of marks ?? []) {
+    const extra = cls.split(/\s+/).filter((c) => c && !MARK_CLASS.test(c));
+    if (extra.length) out.set(i, extra);
+  }
+  return out;
+}
+
 function verdictsOf(verdicts: NoteVerdicts | undefined, marks: NoteMarks | undefined): Map<number, NoteMark> {
   const out = new Map<number, NoteMark>(verdicts ?? []);
   if (marks)
@@ -65,6 +77,8 @@ export function DrillStaff({
 }: Props) {
   const host = useRef<HTMLDivElement>(null);
   const layer = useRef<MarkLayer | null>(null);
+  const noteEls = useRef<SVGElement[]>([]);
+  const extras = useRef(new Map<number, string[]>());
   const [measured, setMeasured] = useState(0);
   const [error, setError] = useState<string | null>(null);
   const [version, setVersion] = useState(0);
@@ -108,6 +122,8 @@ export function DrillStaff({
       .then((r) => {
         if (cancelled || !r) return;
         layer.current = r.marks;
+        noteEls.current = r.notes;
+        extras.current = new Map();
         setError(null);
         setVersion((v) => v + 1);
         onRenderedRef.current?.(r.notes.filter(Boolean).length);
@@ -128,6 +144,10 @@ export function DrillStaff({
     if (!l) return;
     l.setAll(verdictsOf(verdicts, marks));
     l.setCurrent(current ?? null);
+    const want = extrasOf(marks);
+    for (const [i, cls] of extras.current) noteEls.current[i]?.classList.remove(...cls);
+    for (const [i, cls] of want) noteEls.current[i]?.classList.add(...cls);
+    extras.current = want;
   }, [verdicts, marks, current, version]);
 
   const inst = instruments[drill.spec.instrument];
