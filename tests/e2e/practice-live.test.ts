@@ -186,7 +186,7 @@ describe('practice page: live marks, loop, ladder and pitch frame in Chromium', 
     });
   }
 
-  it('a left-out note shows missed only after its window, and the take stops without a console error', async () => {
+  it('a left-out note is marked missed during the take, nothing before its time, and stopping logs no console error', async () => {
     const { page } = b;
     await open(SPEC);
     const before = await takesStored();
