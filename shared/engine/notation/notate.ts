@@ -1,8 +1,7 @@
-import { Note } from 'tonal';
 import { instruments } from '../instruments';
 import { beatGroups, isCompound, measureLength } from '../patterns/timing';
 import type { Clef, Drill, Meter, NotatedEvent, NotatedMeasure, Notation, Ottava } from '../types';
-import { diatonicStep, ledgerLines, middleLine } from './staff-position';
+import { diatonicStep, ledgerLines, middleLine, staffNote } from './staff-position';
 
 /** Ticks per quarter note: eighths (12), triplet eighths (8), sixteenths (6), 32nds (3) are whole. */
 const TPQ = 24;
@@ -61,7 +60,7 @@ export function notate(drill: Drill): Notation {
 
   const placed: Placed[] = drill.notes.map((n, noteIndex) => {
     const slot = n.measure - base;
-    const midiWritten = Note.midi(n.written) ?? n.midi;
+    const midiWritten = staffNote(n.written).midi ?? n.midi;
     const staff = staves.length === 2 && midiWritten < 60 ? 1 : 0;
     return {
       noteIndex,
@@ -352,7 +351,7 @@ function printAccidentals(events: NotatedEvent[], notes: Placed[]): void {
   const shown = new Map<number, number>();
   for (const e of events) {
     if (e.kind !== 'note' || e.written === undefined) continue;
-    const alt = Note.get(e.written).alt;
+    const alt = staffNote(e.written).alt;
     const pos = (stepOf.get(e.noteIndex ?? -1) ?? 0) - shiftSteps(e.ottava);
     const before = shown.get(pos) ?? 0;
     if (alt !== before) {
@@ -415,16 +414,17 @@ export function ottavaShifts(steps: number[], clef: Clef): Ottava[] {
 function inheritOttavaOnRests(measures: NotatedMeasure[], staffCount: number): void {
   for (let staff = 0; staff < staffCount; staff++) {
     const seq = measures.flatMap((m) => m.events.filter((e) => e.staff === staff));
-    let prev: Ottava = 0;
-    for (let i = 0; i < seq.length; i++) {
-      const e = seq[i];
-      if (e.kind === 'note') {
-        prev = e.ottava;
-        continue;
-      }
-      if (prev === 0) continue;
-      const next = seq.slice(i + 1).find((x) => x.kind === 'note');
-      if (next && next.ottava === prev) e.ottava = prev;
+    // the ottava of the next note after each event, filled from the end
+    const nextOttava = new Array<Ottava | null>(seq.length);
+    let next: Ottava | null = null;
+    for (let i = seq.length - 1; i >= 0; i--) {
+      nextOttava[i] = next;
+      if (seq[i].kind === 'note') next = seq[i].ottava;
     }
+    let prev: Ottava = 0;
+    seq.forEach((e, i) => {
+      if (e.kind === 'note') prev = e.ottava;
+      else if (prev !== 0 && nextOttava[i] === prev) e.ottava = prev;
+    });
   }
 }

@@ -3,10 +3,36 @@ import type { Clef } from '../types';
 
 const LETTERS = 'CDEFGAB';
 
+/** A spelled note as the staff needs it: read by tonal once per name, then cached. */
+export interface StaffNote {
+  /** diatonic position: 7 per octave, C0 = 0 (Cb4 sits where C4 does) */
+  step: number;
+  /** semitones from the letter (Bb: -1) */
+  alt: number;
+  midi: number | null;
+}
+
+const staffNotes = new Map<string, StaffNote>();
+
+/**
+ * Reads a spelled note for the staff.
+ *
+ * @example
+ * staffNote('Cb4') // { step: 28, alt: -1, midi: 59 }
+ */
+export function staffNote(written: string): StaffNote {
+  let found = staffNotes.get(written);
+  if (!found) {
+    const n = Note.get(written);
+    found = { step: (n.oct ?? 4) * 7 + LETTERS.indexOf(n.letter), alt: n.alt, midi: n.midi ?? null };
+    staffNotes.set(written, found);
+  }
+  return found;
+}
+
 /** The diatonic position of a spelled note: 7 per octave, C0 = 0 (Cb4 sits where C4 does). */
 export function diatonicStep(written: string): number {
-  const n = Note.get(written);
-  return (n.oct ?? 4) * 7 + LETTERS.indexOf(n.letter);
+  return staffNote(written).step;
 }
 
 /** Bottom and top line of each clef's staff, as diatonic steps (common practice). */
