@@ -85,6 +85,12 @@ describe('a take finished while the server is down', () => {
     expect(before.rows[0].n).toBe(0);
 
     // Back up: the retry (with backoff) delivers it; the page says nothing waits any more.
+    // Count what the page sends: the server would store a repeated id once, so the database
+    // alone cannot tell a queue that sends twice from one that sends once.
+    const answers: number[] = [];
+    page.on('response', (res) => {
+      if (res.request().method() === 'POST' && new URL(res.url()).pathname === '/api/takes') answers.push(res.status());
+    });
     await listen();
     await page.getByTestId('queue-waiting').waitFor({ state: 'detached', timeout: 30_000 });
     const after = await ctx.pool.query(
@@ -92,11 +98,14 @@ describe('a take finished while the server is down', () => {
       [player.id],
     );
     expect(after.rows[0]).toEqual({ n: 1, acc: 1 });
+    expect(answers).toEqual([201]);
 
     // A reload sends nothing twice: the queue is empty and the id would be stored once anyway.
     await page.reload({ waitUntil: 'networkidle' });
     await page.waitForTimeout(500);
     const again = await ctx.pool.query('SELECT count(*)::int AS n FROM takes WHERE player_id = $1', [player.id]);
     expect(again.rows[0].n).toBe(1);
+    // Nothing was sent again after the reload (a second answer would be the server's 200).
+    expect(answers).toEqual([201]);
   });
 });
