@@ -61,13 +61,17 @@ export function describeMicFailure(err: unknown): MicStatus {
   return { state: 'failed', message: `The microphone could not start (${name || 'unknown error'}). ${FALLBACK}` };
 }
 
-function loadGate(): number {
+/** The gate, and whether the player was listening through the microphone last time. */
+function loadRemembered(): { gateDb: number; on: boolean } {
+  let gateDb = DEFAULT_THRESHOLD_DB;
+  let on = false;
   try {
-    const raw = localStorage.getItem(STORAGE_KEY);
-    const gate = raw ? Number(JSON.parse(raw).gateDb) : Number.NaN;
-    if (Number.isFinite(gate) && gate >= GATE_MIN_DB && gate <= GATE_MAX_DB) return gate;
+    const raw = JSON.parse(localStorage.getItem(STORAGE_KEY) ?? '{}');
+    const gate = Number(raw.gateDb);
+    if (Number.isFinite(gate) && gate >= GATE_MIN_DB && gate <= GATE_MAX_DB) gateDb = gate;
+    on = raw.on === true;
   } catch {}
-  return DEFAULT_THRESHOLD_DB;
+  return { gateDb, on };
 }
 
 type Listener<T> = (value: T) => void;
@@ -76,7 +80,8 @@ export class MicInput {
   private status: MicStatus = { state: 'off' };
   private statusListeners = new Set<Listener<MicStatus>>();
   private levelListeners = new Set<Listener<number>>();
-  private gate = loadGate();
+  private gate = loadRemembered().gateDb;
+  private remembered = loadRemembered().on;
   private stream: MediaStream | null = null;
   private context: AudioContext | null = null;
   private node: AudioWorkletNode | null = null;
@@ -177,12 +182,37 @@ export class MicInput {
           message: `The microphone was disconnected. Plug it back in and pick Microphone again. ${FALLBACK}`,
         });
       });
+      this.remember(true);
       const label = track?.label ? ` (${track.label})` : '';
       return this.setStatus({ state: 'listening', message: `Listening through the microphone${label}.` });
     } catch (err) {
       giveUp(stream);
       return attempt === this.attempt ? this.setStatus(describeMicFailure(err)) : this.status;
     }
+  }
+
+  /**
+   * Listens again when the player chose the microphone last time and the browser already
+   * allows it (so no question pops up that the player did not ask for).
+   */
+  async resumeIfChosen(): Promise<MicStatus> {
+    if (!this.remembered || this.on) return this.status;
+    const attempt = this.attempt;
+    try {
+      const permission = await navigator.permissions?.query({ name: 'microphone' as PermissionName });
+      if (permission?.state !== 'granted') return this.status;
+    } catch {
+      return this.status;
+    }
+    // Stopped or picked again while the browser answered: leave it as it is.
+    if (attempt !== this.attempt) return this.status;
+    return this.start();
+  }
+
+  /** The player chose another input: stop, and do not come back to the microphone next time. */
+  forget() {
+    this.remember(false);
+    this.stop();
   }
 
   /** Stops listening and lets the microphone go (the browser's indicator goes out). */
@@ -202,15 +232,20 @@ export class MicInput {
   /** The gate in dBFS: quieter sound (the room, breath, keys) is never a note. */
   setGate(db: number) {
     this.gate = Math.max(GATE_MIN_DB, Math.min(GATE_MAX_DB, Math.round(db)));
-    try {
-      localStorage.setItem(STORAGE_KEY, JSON.stringify({ gateDb: this.gate }));
-    } catch {}
+    this.remember(this.remembered);
     if (this.detector && this.context) {
       // A new gate starts a new detector; what the old one still held is ended now.
       this.endSounding();
       this.detector = createNoteDetector(this.context.sampleRate, { threshold: this.gate });
     }
     this.emitStatus();
+  }
+
+  private remember(on: boolean) {
+    this.remembered = on;
+    try {
+      localStorage.setItem(STORAGE_KEY, JSON.stringify({ gateDb: this.gate, on }));
+    } catch {}
   }
 
   private onBlock(samples: Float32Array, startFrame: number) {

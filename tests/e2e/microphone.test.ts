@@ -145,6 +145,18 @@ describe('practice page listening through the microphone (Chromium fake capture 
     expect(rows[0].accuracy).toBe(1);
     expect(rows[0].played.map((n) => n.midi)).toEqual(drill.notes.map((n) => n.midi));
     for (const n of rows[0].played) expect(n.velocity).toBeGreaterThan(0);
+
+    // The next visit listens again at once: the player chose the microphone and the browser allows it.
+    await open();
+    await page.waitForFunction(
+      () => document.querySelector('[data-testid="input-status"]')?.getAttribute('data-state') === 'mic-listening',
+    );
+    expect(await page.getByLabel('Play with').inputValue()).toBe('microphone');
+    // Choosing the keyboards lets the microphone go, and the visit after that does not ask for it.
+    await page.getByLabel('Play with').selectOption('');
+    await open();
+    await page.waitForTimeout(500);
+    expect(await page.getByTestId('input-status').getAttribute('data-state')).not.toMatch(/^mic-/);
     expect(b.errors).toEqual([]);
   });
 });

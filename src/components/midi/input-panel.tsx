@@ -21,8 +21,14 @@ export function InputPanel({
   microphone?: boolean;
 }) {
   const { mic, status: micStatus, on: micOn } = useMicrophone();
-  // The microphone is let go when the page that offered it closes.
-  useEffect(() => (microphone ? () => mic.stop() : undefined), [microphone, mic]);
+  // Back on the microphone when it was the player's choice last time; let go when the page closes.
+  useEffect(() => {
+    if (!microphone) return;
+    void mic.resumeIfChosen().then((s) => {
+      if (s.state === 'listening') input.selectDevice(null);
+    });
+    return () => mic.stop();
+  }, [microphone, mic, input]);
   const micProblem = microphone && 'message' in micStatus && micStatus.state !== 'listening';
   const ready = status.state === 'ready' || microphone;
   const problem =
@@ -38,7 +44,7 @@ export function InputPanel({
       void mic.start();
       return;
     }
-    mic.stop();
+    mic.forget();
     input.selectDevice(value || null);
   };
   const message = micOn
