@@ -22,18 +22,19 @@ cat > "$tmp/notes" <<'NOTES'
 NOTES
 lead=0.25
 
-sox -n -r 48000 -b 16 -c 1 "$tmp/000.wav" trim 0 "$lead"
+# -R repeatable noise and -D no dither on every step, so the file only changes when the notes do.
+sox -R -D -n -r 48000 -b 16 -c 1 "$tmp/000.wav" trim 0 "$lead"
 i=0
 while read -r midi wave len rest; do
   i=$((i + 1))
   # In sox's synth, %n is n semitones from A4 (MIDI 69).
-  sox -n -r 48000 -b 16 -c 1 "$tmp/$(printf %03d "$i").wav" \
+  sox -R -D -n -r 48000 -b 16 -c 1 "$tmp/$(printf %03d "$i").wav" \
     synth "$len" "$wave" "%$((midi - 69))" fade q 0.02 "$len" 0.03 vol 0.2 pad 0 "$rest"
 done < "$tmp/notes"
-sox "$tmp"/0*.wav "$tmp/line.wav"
+sox -R -D "$tmp"/0*.wav "$tmp/line.wav"
 length=$(soxi -D "$tmp/line.wav")
-sox -n -r 48000 -b 16 -c 1 "$tmp/noise.wav" synth "$length" pinknoise vol 0.002
-sox -m "$tmp/line.wav" "$tmp/noise.wav" -r 12000 -b 16 "$out/sox-line.wav"
+sox -R -D -n -r 48000 -b 16 -c 1 "$tmp/noise.wav" synth "$length" pinknoise vol 0.002
+sox -R -D -m "$tmp/line.wav" "$tmp/noise.wav" -r 12000 -b 16 "$out/sox-line.wav"
 
 awk -v lead="$lead" 'BEGIN {
   t = lead * 1000
