@@ -62,7 +62,7 @@ export async function ensureLongHistoryPlayer(db: Db): Promise<string> {
 export async function seedLongHistory(db: Db, notes = 1_000_000, log = console.log): Promise<string> {
   const playerId = await ensureLongHistoryPlayer(db);
   const { rows } = await db.execute<{ n: number }>(
-    sql`SELECT count(*)::int AS n FROM take_notes WHERE player_id = ${playerId}`,
+    sql`SELECT COALESCE(sum(note_count), 0)::int AS n FROM takes WHERE player_id = ${playerId}`,
   );
   let have = rows[0].n;
   if (have >= notes) {

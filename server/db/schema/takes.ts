@@ -70,10 +70,9 @@ export const takeNotes = pgTable(
     instrument: text('instrument').notNull(),
     playedAt: timestamp('played_at', { withTimezone: true }).notNull(),
   },
-  (t) => [
-    index('take_notes_take_idx').on(t.takeId, t.idx),
-    index('take_notes_player_time_idx').on(t.playerId, t.playedAt),
-  ],
+  // Only a take's own notes are ever read back (by take and index); the maps read the summaries,
+  // so there is no index by player and time to keep up on every insert.
+  (t) => [index('take_notes_take_idx').on(t.takeId, t.idx)],
 );
 
 export type TakeRow = typeof takes.$inferSelect;

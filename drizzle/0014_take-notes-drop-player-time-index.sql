@@ -1,0 +1,1 @@
+DROP INDEX "take_notes_player_time_idx";
