@@ -1,3 +1,4 @@
+import { drillMaterial } from '@shared/practice/drill-identity';
 import { generateDrill, sliceDrill } from '@shared/engine';
 import { useMemo, useRef, useState } from 'react';
 import { useNavigate } from 'react-router-dom';
@@ -51,7 +52,8 @@ export function TakeView({ id }: { id: string }) {
     <div className="grid gap-4">
       <dl className="flex flex-wrap gap-6">
         {[
-          ['Pair', take.pair],
+          // over a progression the pairs change with the chords: the chords are what was played
+          take.spec.changes ? ['Changes', drillMaterial(take.spec)] : ['Pair', take.pair],
           ['Pattern', take.pattern],
           ['Key', take.key],
           ['Tempo', `${take.tempo} bpm`],
