@@ -70,7 +70,6 @@ export function NoteStrip({ readings, selected, onSelect, pinned }: Props) {
                   }}
                   tabIndex={i === focusable ? 0 : -1}
                   aria-pressed={selected === r.index}
-                  aria-label={`${readingWords(r)}${pinned?.has(r.index) ? '; has a remark' : ''}`}
                   title={readingWords(r)}
                   data-note-index={r.index}
                   data-verdict={r.verdict}
@@ -80,7 +79,10 @@ export function NoteStrip({ readings, selected, onSelect, pinned }: Props) {
                     selected === r.index ? 'border-dusk-500 bg-dusk-100 dark:bg-dusk-700' : 'border-line bg-raised'
                   }`}
                 >
-                  <span className="text-caption font-semibold">{r.written}</span>
+                  <span className="sr-only">{`${readingWords(r)}${pinned?.has(r.index) ? '; has a remark' : ''}`}</span>
+                  <span className="text-caption font-semibold" aria-hidden="true">
+                    {r.written}
+                  </span>
                   <span className={`text-caption font-bold ${look.cls}`} aria-hidden="true">
                     {r.played ?? look.glyph}
                   </span>

@@ -30,7 +30,8 @@ export function TableScroll({
     };
   }, []);
   return (
-    <div className={`grid min-w-0 grid-cols-[minmax(0,1fr)] gap-1 ${className}`}>
+    // Its width comes from the page, never from the table inside (which scrolls instead).
+    <div className={`grid min-w-0 grid-cols-[minmax(0,1fr)] gap-1 [contain:inline-size] ${className}`}>
       <div className="relative min-w-0">
         <section
           ref={ref}

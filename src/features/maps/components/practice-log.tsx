@@ -9,6 +9,8 @@ const dayOf = (t: number) => new Date(t).toISOString().slice(0, 10);
 const short = new Intl.DateTimeFormat(undefined, { day: 'numeric', month: 'short', timeZone: 'UTC' });
 const long = new Intl.DateTimeFormat(undefined, { weekday: 'long', day: 'numeric', month: 'long', timeZone: 'UTC' });
 const mins = (m: number) => `${Math.round(m)} min`;
+/** The height of the busiest day's bar. */
+const BAR_PX = 40;
 
 interface Week {
   start: number;
@@ -110,24 +112,26 @@ export function PracticeLog({ filters, ownGoal }: { filters: MapFilters; ownGoal
           return (
             <li key={w.start} className="grid items-center gap-x-4 gap-y-1 sm:grid-cols-[7rem_auto_1fr]">
               <span className="text-caption font-semibold">Week of {short.format(w.start)}</span>
-              <ul className="flex h-12 items-end gap-1" aria-label={`Days of the week of ${short.format(w.start)}`}>
+              <ul className="flex items-end gap-1" aria-label={`Days of the week of ${short.format(w.start)}`}>
                 {w.days.map((d, i) => {
                   const words = d.future
                     ? `${long.format(d.t)}: still to come`
                     : `${long.format(d.t)}: ${d.minutes > 0 ? `${mins(d.minutes)}, ${d.takes} ${d.takes === 1 ? 'take' : 'takes'}` : 'no practice'}`;
-                  const h = d.minutes > 0 ? Math.max(8, (d.minutes / busiest) * 100) : 0;
+                  // In pixels: a percentage height inside a button does not resolve everywhere.
+                  const h = d.minutes > 0 ? Math.max(3, Math.round((d.minutes / busiest) * BAR_PX)) : 0;
                   return (
-                    <li key={d.t} className="flex h-full w-6 flex-col items-center justify-end">
+                    <li key={d.t} className="flex w-6 flex-col items-center gap-0.5">
                       <button
                         type="button"
                         title={words}
                         aria-label={words}
-                        className="group relative flex h-full w-full items-end justify-center rounded-sm focus-visible:outline-2"
+                        className="group relative flex w-full items-end justify-center rounded-sm focus-visible:outline-2"
+                        style={{ height: BAR_PX }}
                       >
                         {d.future ? (
                           <span className="mb-0 h-px w-full border-t border-dashed border-line" />
                         ) : d.minutes > 0 ? (
-                          <span className="w-4 rounded-t-sm bg-brass-500" style={{ height: `${h}%` }} />
+                          <span className="w-4 rounded-t-sm bg-brass-500" style={{ height: h }} />
                         ) : (
                           <span className="h-1 w-4 rounded-sm bg-line" />
                         )}
