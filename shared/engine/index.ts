@@ -6,7 +6,7 @@ export * from './types';
 export { EngineError } from './errors';
 export * from './theory';
 export * from './patterns';
-export { instruments } from './instruments';
+export { instruments, writtenPair } from './instruments';
 export type { InstrumentClef, InstrumentEntry } from './instruments';
 export * from './files';
 export * from './scoring';

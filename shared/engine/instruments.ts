@@ -1,3 +1,4 @@
+import { movePair, semitoneInterval } from './theory/pair-spelling';
 import type { Clef, Instrument, InstrumentId, MidiRange } from './types';
 
 /** The clef an instrument reads: one staff's clef, or 'grand' (treble and bass) for piano. */
@@ -145,4 +146,17 @@ export const instruments: Record<InstrumentId, InstrumentEntry> = {
  */
 export function instrumentOf(id: string): InstrumentEntry | undefined {
   return Object.hasOwn(instruments, id) ? instruments[id as InstrumentId] : undefined;
+}
+
+/**
+ * The pair as an instrument reads it: moved by the instrument's interval and spelled as one unit
+ * (intervals keep their names, no double sharps or flats). Use it wherever written pair names
+ * are shown, so they agree with the drill's written notes.
+ *
+ * @example
+ * writtenPair(['F#', 'E'], 'trumpet') // ['Ab', 'Gb']
+ * writtenPair(['B', 'A'], 'alto-sax') // ['Ab', 'Gb']
+ */
+export function writtenPair(pair: [string, string], instrument: InstrumentId): [string, string] {
+  return movePair(pair, semitoneInterval(-instruments[instrument].transposition));
 }

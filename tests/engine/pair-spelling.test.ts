@@ -9,6 +9,7 @@ import {
   inAllKeys,
   instruments,
   parseTriad,
+  writtenPair,
 } from '../../shared/engine';
 import { movePair, semitoneInterval, spellPairAsUnit } from '../../shared/engine/theory/pair-spelling';
 
@@ -16,9 +17,6 @@ const INSTRUMENTS = Object.keys(instruments) as InstrumentId[];
 const PAIRS = allPairs();
 const doubled = (name: string) => Math.abs(Note.get(name).alt) > 1;
 const triadNotes = (pair: [string, string]) => pair.flatMap((s) => parseTriad(s).pitchClasses);
-/** The pair an instrument reads for a concert pair: moved by its interval, spelled as a unit. */
-const writtenPair = (pair: [string, string], id: InstrumentId) =>
-  movePair(pair, semitoneInterval(-instruments[id].transposition));
 
 describe('spelling a pair as one unit (the examples of the rule)', () => {
   it.each([
@@ -31,6 +29,12 @@ describe('spelling a pair as one unit (the examples of the rule)', () => {
     [['F', 'Eb'], 'piano', ['F', 'Eb']],
   ] as const)('%j on %s reads %j', (concert, instrument, written) => {
     expect(writtenPair([...concert], instrument)).toEqual(written);
+  });
+
+  it('names the written pair as the drill writes its notes', () => {
+    const d = generateDrill({ pair: ['F#', 'E'], pattern: 'stack', direction: 'up', instrument: 'trumpet' });
+    const pcs = writtenPair(['F#', 'E'], 'trumpet').flatMap((s) => parseTriad(s).pitchClasses);
+    for (const n of d.notes) expect(pcs).toContain(Note.pitchClass(n.written));
   });
 
   it('keeps the pair as given on a tie, and a double flat never wins', () => {
