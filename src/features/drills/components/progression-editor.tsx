@@ -12,15 +12,22 @@ const LINE = 'line';
 
 const pairText = (p: readonly [string, string] | readonly string[]) => `${p[0]} / ${p[1]}`;
 
+const fitCache = new Map<string, [string, string][]>();
+
+/** A chord's first fits as pairs (kept: typing and pinning ask for the same chords again). */
 function fitsOf(chord: string): [string, string][] {
+  const hit = fitCache.get(chord);
+  if (hit) return hit;
+  let fits: [string, string][] = [];
   try {
-    return pairsForChord(chord)
+    fits = pairsForChord(chord)
       .slice(0, PIN_CHOICES)
       .map((f) => [f.pair.a.symbol, f.pair.b.symbol]);
   } catch (err) {
-    if (err instanceof EngineError) return [];
-    throw err;
+    if (!(err instanceof EngineError)) throw err;
   }
+  fitCache.set(chord, fits);
+  return fits;
 }
 
 /** "Dm7 G7 Cmaj7 (3 chords)": a progression drill's title. */
