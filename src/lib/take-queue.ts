@@ -19,12 +19,19 @@ const store = typeof indexedDB === 'undefined' ? undefined : createStore('sixfol
 const listeners = new Set<(s: QueueState) => void>();
 let timer: ReturnType<typeof setTimeout> | null = null;
 let flushing: Promise<void> | null = null;
-let state: QueueState = { waiting: 0, refused: [] };
+let state: QueueState = { waiting: 0, refused: [], busy: false };
+/** the last try met a busy server (503: its database was out of reach) */
+let busy = false;
 
 export interface QueueState {
   waiting: number;
   refused: Array<{ id: string; message: string }>;
+  /** the server answered "busy" (503) to the last try: the takes wait here and are sent later */
+  busy: boolean;
 }
+
+/** What the page says while the server is busy. */
+export const BUSY_MESSAGE = 'The server is busy, your take is kept and will be sent';
 
 const MAX_DELAY_MS = 60_000;
 export const backoffMs = (attempts: number) => Math.min(MAX_DELAY_MS, 1000 * 2 ** Math.max(0, attempts - 1));
@@ -41,8 +48,10 @@ async function all(): Promise<Array<[string, Pending]>> {
 
 async function publish() {
   const items = await all();
+  const waiting = items.filter(([, p]) => !p.refused).length;
   state = {
-    waiting: items.filter(([, p]) => !p.refused).length,
+    waiting,
+    busy: busy && waiting > 0,
     refused: items.filter(([, p]) => p.refused).map(([id, p]) => ({ id, message: p.refused ?? '' })),
   };
   for (const fn of listeners) fn(state);
@@ -72,7 +81,9 @@ async function doFlush() {
     try {
       await api.post('/api/takes', p.take);
       await del(id, store);
+      busy = false;
     } catch (err) {
+      busy = err instanceof ApiError && err.status === 503;
       const permanent =
         err instanceof ApiError && err.status >= 400 && err.status < 500 && ![401, 403, 408, 429].includes(err.status);
       const attempts = p.attempts + 1;

@@ -15,6 +15,7 @@ import { useLoop } from '../hooks/use-loop';
 import { useReplay } from '../hooks/use-replay';
 import { usePracticeTake } from '../hooks/use-practice-take';
 import { useSoundRouting } from '../hooks/use-sound-routing';
+import { BUSY_MESSAGE } from '@/lib/take-queue';
 import { useTakeQueue } from '../hooks/use-take-queue';
 import { pitchFrame } from '../lib/pitch-frame';
 import { CautionBanner } from './caution-banner';
@@ -276,8 +277,9 @@ export function PracticeRoom({ baseSpec, settings, initialOptions, assignmentId,
             className="rounded-full bg-brass-100 px-3 py-1 text-caption font-semibold text-ink-900"
             data-testid="queue-waiting"
           >
-            {queue.waiting} take{queue.waiting === 1 ? '' : 's'} waiting to be saved — kept on this device, sent when
-            the server answers
+            {queue.busy
+              ? BUSY_MESSAGE
+              : `${queue.waiting} take${queue.waiting === 1 ? '' : 's'} waiting to be saved — kept on this device, sent when the server answers`}
           </span>
         ) : null}
         {queue.refused.map((r) => (

@@ -22,7 +22,7 @@ export interface TakeToSave {
  */
 export function useTakeQueue() {
   const queryClient = useQueryClient();
-  const [queue, setQueue] = useState<QueueState>({ waiting: 0, refused: [] });
+  const [queue, setQueue] = useState<QueueState>({ waiting: 0, refused: [], busy: false });
   useEffect(() => onQueueChange(setQueue), []);
 
   const save = useCallback(
