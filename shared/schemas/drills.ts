@@ -1,7 +1,7 @@
-import { Chord } from 'tonal';
 import { z } from 'zod';
-import { EngineError, generateDrill, instruments, PRESET_IDS, triadPair } from '../engine';
-import type { Drill, DrillSpec as EngineDrillSpec, InstrumentId, PatternId as EnginePatternId } from '../engine';
+import { instruments, PRESET_IDS } from '../engine';
+import { chordTones } from '../engine/theory/chord-tones';
+import type { Drill, InstrumentId, PatternId as EnginePatternId } from '../engine';
 
 /**
  * The drill contracts used by the browser and the API alike: a DrillSpec and a PatternDef as
@@ -76,24 +76,6 @@ const Midi = z
   .int({ error: 'A whole MIDI note number' })
   .min(0, { error: 'At least 0' })
   .max(127, { error: 'At most 127' });
-
-/** Spells a chord symbol the way tonal reads it ("Cm(maj7)" -> "CmMaj7", "C7(b9)" -> "C7b9"). */
-function tonalChordSymbol(symbol: string): string {
-  return symbol
-    .trim()
-    .replace(/m\(maj7\)|m\(M7\)|-\(maj7\)/, 'mMaj7')
-    .replace(/\(([^)]*)\)/g, '$1');
-}
-
-/**
- * The chord's tones as pitch classes, root first; empty when the symbol is not a chord.
- *
- * @example
- * chordTones('D7') // ['D', 'F#', 'A', 'C']
- */
-export function chordTones(symbol: string): string[] {
-  return Chord.get(tonalChordSymbol(symbol)).notes;
-}
 
 const TriadSymbol = z
   .string({ error: 'Name a triad, such as F, Fm, Fdim or Faug' })
@@ -175,77 +157,7 @@ export const KeyOrder = z.enum(['chromatic', 'fourths', 'fifths'], {
 });
 export type KeyOrder = z.infer<typeof KeyOrder>;
 
-/** Field name -> messages, as the API's 400 answers carry them. */
-export type FieldErrors = Record<string, string[]>;
-
-export type DrillResult = { ok: true; drill: Drill } | { ok: false; fields: FieldErrors; message: string };
-
-/**
- * Generates the drill for a checked spec, or says which field makes it impossible: the pair
- * (unknown triad, or a shared note), the start (its first cell does not fit) or the range.
- * The browser and `GET /api/drills/preview` both call this, so they agree on the drill.
- *
- * @example
- * generateChecked({ pair: ['D', 'Dm'], pattern: 'weave', direction: 'up' })
- * // { ok: false, fields: { pair: ['D and Dm share ...'] }, ... }
- */
-export function generateChecked(spec: DrillSpec): DrillResult {
-  const fail = (field: string, err: EngineError): DrillResult => ({
-    ok: false,
-    fields: { [field]: [err.message] },
-    message: err.message,
-  });
-  if (spec.changes) return generateProgression(spec as EngineDrillSpec, fail);
-  try {
-    if (spec.pair) triadPair(spec.pair[0], spec.pair[1]);
-  } catch (err) {
-    if (err instanceof EngineError) return fail('pair', err);
-    throw err;
-  }
-  const engineSpec = spec as EngineDrillSpec;
-  try {
-    return { ok: true, drill: generateDrill(engineSpec) };
-  } catch (err) {
-    if (!(err instanceof EngineError)) throw err;
-    if (spec.start === undefined) return fail('range', err);
-    // A given start is to blame when the same drill works from the default start.
-    const { start: _start, ...rest } = engineSpec;
-    try {
-      generateDrill(rest);
-      return fail('start', err);
-    } catch {
-      return fail('range', err);
-    }
-  }
-}
-
-/**
- * A progression drill, or the field to blame: the changes (a chord no pair fits, a length the
- * pattern cannot fill, a pinned pair that shares a note), the start, or the range.
- */
-function generateProgression(
-  spec: EngineDrillSpec,
-  fail: (field: string, err: EngineError) => DrillResult,
-): DrillResult {
-  try {
-    return { ok: true, drill: generateDrill(spec) };
-  } catch (err) {
-    if (!(err instanceof EngineError)) throw err;
-    if (/range|start/i.test(err.message)) {
-      if (spec.start === undefined) return fail('range', err);
-      const { start: _start, ...rest } = spec;
-      try {
-        generateDrill(rest);
-        return fail('start', err);
-      } catch {
-        return fail('range', err);
-      }
-    }
-    if (/choose another meter/i.test(err.message)) return fail('meter', err);
-    if (/no pattern called|a pattern/i.test(err.message)) return fail('pattern', err);
-    return fail('changes', err);
-  }
-}
+export type { DrillResult, FieldErrors } from '../engine/patterns/checked';
 
 /** `GET /api/drills/preview?spec=<URL-encoded DrillSpec JSON>` */
 export const PreviewQuery = z.object({

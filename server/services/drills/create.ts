@@ -1,5 +1,6 @@
 import type { User } from '../../../shared/schemas/auth';
-import { type CreateSavedDrillInput, generateChecked, type SavedDrill } from '../../../shared/schemas/drills';
+import { generateChecked } from '../../../shared/engine/patterns/checked';
+import type { CreateSavedDrillInput, SavedDrill } from '../../../shared/schemas/drills';
 import type { Db } from '../../db/client';
 import { savedDrills } from '../../db/schema';
 import { AppError } from '../../errors';

@@ -1,4 +1,5 @@
-import { generateChecked, type PreviewQuery } from '../../../shared/schemas/drills';
+import { generateChecked } from '../../../shared/engine/patterns/checked';
+import type { PreviewQuery } from '../../../shared/schemas/drills';
 import type { Drill } from '../../../shared/engine';
 import { AppError } from '../../errors';
 import { specFromQuery } from './spec-from-query';

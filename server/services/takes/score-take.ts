@@ -1,5 +1,6 @@
 import { chordKey, drillKey, patternName } from '../../../shared/practice/drill-identity';
-import { type DrillSpec as SpecInput, generateChecked } from '../../../shared/schemas/drills';
+import { generateChecked } from '../../../shared/engine/patterns/checked';
+import type { DrillSpec as SpecInput } from '../../../shared/schemas/drills';
 import { AppError } from '../../errors';
 import {
   type Drill,

@@ -1,4 +1,4 @@
-import { chordTones } from '@shared/schemas/drills';
+import { chordTones } from '@shared/engine/theory/chord-tones';
 import { Note } from 'tonal';
 import { type AudioEvent, padVoicing, type Schedule } from './schedule';
 

@@ -1,5 +1,5 @@
 import type { Drill } from '@shared/engine';
-import { chordTones } from '@shared/schemas/drills';
+import { chordTones } from '@shared/engine/theory/chord-tones';
 import { Note } from 'tonal';
 
 /** One sound to make, in seconds from the start of playback (the count-in included). */

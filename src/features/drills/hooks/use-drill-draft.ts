@@ -1,5 +1,6 @@
 import { type Drill, EngineError, inAllKeys, type InstrumentId, instruments } from '@shared/engine';
-import { type ChordChange, DrillSpec, type FieldErrors, generateChecked, type KeyOrder } from '@shared/schemas/drills';
+import { generateChecked } from '@shared/engine/patterns/checked';
+import { type ChordChange, DrillSpec, type FieldErrors, type KeyOrder } from '@shared/schemas/drills';
 import { useMemo, useState } from 'react';
 import { fieldErrors } from '@/lib/field-errors';
 
