@@ -1,4 +1,4 @@
-import { EngineError, pairsForChord } from '../engine';
+import { candidatePairs, EngineError } from '../engine';
 import { beatGroups, measureLength } from '../engine/patterns/timing';
 import type { ChordChange, Meter } from '../engine/types';
 
@@ -72,7 +72,7 @@ export function parseChart(text: string, meter: Meter, previous: ChordChange[] =
     for (const s of symbols) {
       if (!known.has(s)) {
         try {
-          pairsForChord(s);
+          candidatePairs(s); // the fit finder's answer, kept for the drill that follows
           known.set(s, null);
         } catch (err) {
           if (!(err instanceof EngineError)) throw err;
