@@ -123,6 +123,24 @@ describe('the staff drawn from the notation model, in Chromium', () => {
     await b.page.screenshot({ path: join(shots, 'drills-wind-8va-desktop.png'), fullPage: true });
   });
 
+  it('writes the chord symbols of a drill over changes above the staff', async () => {
+    const spec = {
+      changes: [
+        { chord: 'Dm7', beats: 4 },
+        { chord: 'G7', beats: 4 },
+        { chord: 'Cmaj7', beats: 8 },
+      ],
+      pattern: 'four-three',
+      direction: 'up',
+      instrument: 'alto-sax',
+    } as DrillSpec;
+    const drill = await openDrill(spec);
+    const starts = notate(drill).measures.flatMap((m) => (m.chords ?? []).map((c) => c.chord));
+    const drawn = await b.page.locator('[data-testid="drill-staff"] .sf-chord').allTextContents();
+    // Each chord where it starts; one held into a new line may be shown again at that line's start.
+    expect(drawn.slice(0, starts.length)).toEqual(starts);
+  });
+
   it('says beside the staff when the range leaves a drill shorter than two bars', async () => {
     // Stacking E/D from G4 on a wind controller reaches its top in one bar.
     const short: DrillSpec = { ...HIGH_WIND, pattern: 'stack' };
@@ -200,7 +218,8 @@ describe('the staff drawn from the notation model, in Chromium', () => {
     const verdicts = new Set(stored.score.results.map((r) => r.verdict));
     expect(verdicts.size).toBeGreaterThanOrEqual(4);
     for (const v of verdicts) expect(await page.locator(`.vf-sf-marks .sf-verdict-${v}`).count()).toBeGreaterThan(0);
-    const staff = page.getByTestId('drill-staff').first();
+    // The staff with what the page lays over it (the pitch played, timing ticks).
+    const staff = page.getByTestId('drill-staff').first().locator('xpath=..');
     await staff.screenshot({ path: join(shots, 'take-marks-light.png') });
     await page.evaluate(() => document.documentElement.classList.add('dark'));
     await staff.screenshot({ path: join(shots, 'take-marks-dark.png') });

@@ -8,12 +8,12 @@
 import academicoUrl from '@vexflow-fonts/academico/academico.woff2?url';
 import bravuraUrl from '@vexflow-fonts/bravura/bravura.woff2?url';
 import type { Drill, Notation } from '@shared/engine';
-import VexFlow, { BarlineType, Font, Formatter, Renderer, Stave, StaveConnector } from 'vexflow/core';
-import { drawCellTag, drawChordSymbol, drawOttava } from './lanes';
+import VexFlow, { Font, Renderer, StaveConnector } from 'vexflow/core';
+import { placeCellTags, placeChordSymbols, placeOttavaLines } from './lane-placement';
 import { MarkLayer, type NoteGeometry } from './marks';
-import { type BuiltStaffMeasure, buildStaffMeasure, type DrawnEvent } from './measure';
-import { BRACE_ROOM, narrowestLine, planSystems, type SystemPlan } from './layout';
-import { vexClef } from './pitch';
+import type { DrawnEvent } from './measure';
+import { BRACE_ROOM, narrowestLine, planSystems } from './layout';
+import { buildSystem, LEFT, layoutSystem, reach, type SystemLayout, TOP_LINE } from './system';
 import { aChromasOf, triadOf } from './triad-of';
 
 let fontsReady: Promise<void> | null = null;
@@ -37,151 +37,6 @@ export interface RenderedStaff {
   height: number;
   /** verdict marks and the current note, set without a redraw */
   marks: MarkLayer;
-}
-
-/** VexFlow puts a stave's top line this far below the stave's y. */
-const TOP_LINE = 40;
-const STAFF_HEIGHT = 40;
-const LEFT = 6;
-
-interface BuiltSystem {
-  /** [measure][staff] */
-  staves: Stave[][];
-  built: BuiltStaffMeasure[][];
-}
-
-function buildSystem(notation: Notation, drill: Drill, plan: SystemPlan, staveYs: number[], x0: number): BuiltSystem {
-  const meter = drill.spec.meter;
-  const staves: Stave[][] = [];
-  const built: BuiltStaffMeasure[][] = [];
-  let x = x0;
-  plan.measures.forEach((mi, k) => {
-    const measure = notation.measures[mi];
-    const w = plan.widths[k];
-    const row = notation.staves.map((clef, s) => {
-      const stave = new Stave(x, staveYs[s], w);
-      if (k === 0) stave.addClef(vexClef(clef), 'default', clef === 'treble-8vb' ? '8vb' : undefined);
-      if (mi === 0) stave.addTimeSignature(`${meter[0]}/${meter[1]}`);
-      if (s === 0) stave.setMeasure(measure.number);
-      if (mi === notation.measures.length - 1) stave.setEndBarType(BarlineType.END);
-      return stave;
-    });
-    // Staves of a grand staff start their notes at the same x.
-    const start = Math.max(...row.map((s) => s.getNoteStartX()));
-    for (const s of row) s.setNoteStartX(start);
-    const parts = notation.staves.map((clef, s) =>
-      buildStaffMeasure(
-        measure.events.filter((e) => e.staff === s),
-        clef,
-        meter,
-      ),
-    );
-    parts.forEach((p, s) => {
-      p.voice.setStave(row[s]).preFormat();
-    });
-    const justify = row[0].getNoteEndX() - row[0].getNoteStartX() - Stave.defaultPadding;
-    const formatter = new Formatter();
-    for (const p of parts) formatter.joinVoices([p.voice]);
-    formatter.format(
-      parts.map((p) => p.voice),
-      justify,
-    );
-    for (const p of parts) for (const b of p.beams) b.postFormat();
-    staves.push(row);
-    built.push(parts);
-    x += w;
-  });
-  return { staves, built };
-}
-
-/** How far a staff's drawing reaches above its top line and below its bottom line, in px. */
-function reach(parts: BuiltStaffMeasure[], topLine: number): { above: number; below: number } {
-  const bottomLine = topLine + STAFF_HEIGHT;
-  let top = topLine;
-  let bottom = bottomLine;
-  for (const p of parts) {
-    for (const { note, event } of [...p.notes, ...p.rests]) {
-      const ys = note.getYs();
-      top = Math.min(top, Math.min(...ys) - (event.accidental ? 14 : 6));
-      bottom = Math.max(bottom, Math.max(...ys) + 7);
-      if (event.kind === 'note') {
-        const { topY, baseY } = note.getStemExtents();
-        top = Math.min(top, topY - 4, baseY);
-        bottom = Math.max(bottom, topY + 4, baseY);
-      }
-    }
-    for (const t of p.tuplets) {
-      const y = t.getYPosition();
-      top = Math.min(top, y - 14);
-      bottom = Math.max(bottom, y + 14);
-    }
-  }
-  return { above: topLine - top, below: bottom - bottomLine };
-}
-
-interface SystemLayout {
-  staveYs: number[];
-  /** lanes: y of the chord symbols' baseline, the cell tags' centre, marks row centre */
-  chordY: number;
-  cellY: number;
-  marksY: number;
-  /** per staff: y of an 8va line above it and an 8vb line below it */
-  ottavaUp: number[];
-  ottavaDown: number[];
-  bottom: number;
-}
-
-const hasOttava = (notation: Notation, plan: SystemPlan, staff: number, kind: 8 | -8) =>
-  plan.measures.some((mi) =>
-    notation.measures[mi].events.some((e) => e.staff === staff && e.kind === 'note' && e.ottava === kind),
-  );
-
-function layoutSystem(
-  notation: Notation,
-  plan: SystemPlan,
-  reaches: Array<{ above: number; below: number }>,
-  top: number,
-  marksRow: boolean,
-  tags: boolean,
-): SystemLayout {
-  const chords = plan.measures.some((mi) => notation.measures[mi].chord || notation.measures[mi].chords?.length);
-  const chordLane = chords ? 24 : 0;
-  const cellLane = tags ? 22 : 0;
-  const staveYs: number[] = [];
-  const ottavaUp: number[] = [];
-  const ottavaDown: number[] = [];
-  let cellY = 0;
-  let chordY = 0;
-  let prevBottom = 0;
-  notation.staves.forEach((_clef, s) => {
-    const up = hasOttava(notation, plan, s, 8) ? 20 : 0;
-    const down = hasOttava(notation, plan, s, -8) ? 20 : 0;
-    // Room over the staff: the notes' own reach, and at least the measure number's.
-    const above = Math.max(reaches[s].above, s === 0 ? 16 : 0);
-    let topLine: number;
-    if (s === 0) {
-      topLine = top + 8 + chordLane + cellLane + up + above;
-      cellY = topLine - above - up - 11;
-      chordY = cellY - 16;
-    } else {
-      topLine = Math.max(prevBottom + up + above + 18, prevBottom + 56);
-    }
-    ottavaUp.push(topLine - above - 10);
-    const bottomLine = topLine + STAFF_HEIGHT;
-    ottavaDown.push(bottomLine + reaches[s].below + 12);
-    prevBottom = bottomLine + reaches[s].below + down;
-    staveYs.push(topLine - TOP_LINE);
-  });
-  const marksY = prevBottom + 14;
-  return {
-    staveYs,
-    chordY,
-    cellY,
-    marksY,
-    ottavaUp,
-    ottavaDown,
-    bottom: prevBottom + (marksRow ? 30 : 8) + 14,
-  };
 }
 
 /**
@@ -301,89 +156,14 @@ export async function renderStaff(
       notes[i] = el;
     }
 
-    // Cell tags: one per run of notes of one cell on this line. A scale pattern's cells are steps
-    // of the six-note scale, not triads: its notes keep their triad's colour and go untagged
-    // (a tag per note would bury the line in letters).
-    const ordered = drawn
-      .filter((d) => d.event.noteIndex !== undefined && drill.notes[d.event.noteIndex].source !== 'scale')
-      .sort((a, b) => (a.event.noteIndex ?? 0) - (b.event.noteIndex ?? 0));
-    let run: DrawnEvent[] = [];
-    const flush = () => {
-      if (run.length === 0) return;
-      const first = drill.notes[run[0].event.noteIndex!];
-      drawCellTag(
-        lanes,
-        { x0: run[0].note.getNoteHeadBeginX(), x1: run[run.length - 1].note.getNoteHeadEndX() },
-        layout.cellY,
-        triadOf(first, aChromas),
-        first.cell,
-      );
-      run = [];
-    };
-    const keyOf = (d: DrawnEvent) => {
-      const n = drill.notes[d.event.noteIndex!];
-      return `${n.cell}:${n.source}`;
-    };
-    for (const d of ordered) {
-      if (run.length && keyOf(run[0]) !== keyOf(d)) flush();
-      run.push(d);
-    }
-    flush();
-
-    // Ottava lines, per staff, over runs of notes under one sign.
-    notation.staves.forEach((_clef, s) => {
-      const onStaff = built.flatMap((parts) => parts[s].notes);
-      let start = -1;
-      for (let j = 0; j <= onStaff.length; j++) {
-        const o = j < onStaff.length ? onStaff[j].event.ottava : 0;
-        const prev = start >= 0 ? onStaff[start].event.ottava : 0;
-        if (start >= 0 && o !== prev) {
-          const kind = prev as 8 | -8;
-          const last = onStaff[j - 1];
-          const next = nextEventOnStaff(notation, plan.measures[plan.measures.length - 1], s);
-          const closes = j < onStaff.length || !next || next.ottava !== kind;
-          drawOttava(
-            lanes,
-            { x0: onStaff[start].note.getNoteHeadBeginX() - 2, x1: last.note.getNoteHeadEndX() + 4 },
-            kind === 8 ? layout.ottavaUp[s] : layout.ottavaDown[s],
-            kind,
-            closes,
-          );
-          start = -1;
-        }
-        if (start < 0 && o !== 0 && j < onStaff.length) start = j;
-      }
-    });
-
-    // Chord symbols: each over the event where it starts (or the measure's start).
-    plan.measures.forEach((mi, k) => {
-      const measure = notation.measures[mi];
-      const symbols = measure.chords?.length
-        ? measure.chords
-        : measure.chord
-          ? [{ start: 0, chord: measure.chord }]
-          : [];
-      const events = built[k].flatMap((p) => [...p.notes, ...p.rests]);
-      for (const c of symbols) {
-        const at = events.find((d) => Math.abs(d.event.start - c.start) < 1e-6);
-        const x = at ? at.note.getNoteHeadBeginX() : staves[k][0].getNoteStartX();
-        drawChordSymbol(lanes, x, layout.chordY, c.chord);
-      }
-    });
+    placeCellTags(lanes, drill, drawn, layout.cellY, aChromas);
+    placeOttavaLines(lanes, notation, plan, built, layout);
+    placeChordSymbols(lanes, notation, plan, built, staves, layout.chordY);
   });
 
   const markGroup = ctx.openGroup('sf-marks') as SVGGElement;
   ctx.closeGroup();
   return { notes, height, marks: new MarkLayer(svg, notes, geometry, markGroup) };
-}
-
-/** The first note on a staff after a measure, to see whether an ottava line runs on. */
-function nextEventOnStaff(notation: Notation, measureIndex: number, staff: number) {
-  for (let mi = measureIndex + 1; mi < notation.measures.length; mi++) {
-    const e = notation.measures[mi].events.find((ev) => ev.staff === staff && ev.kind === 'note');
-    if (e) return e;
-  }
-  return undefined;
 }
 
 /** SMuFL's accidentals (flat, natural, sharp and their doubles) sit at U+E260..U+E26F. */

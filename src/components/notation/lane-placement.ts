@@ -1,0 +1,115 @@
+/**
+ * Where the lanes' contents go on a drawn line: a tag over each cell, ottava lines over the
+ * notes the model puts under one, chord symbols over the events they start on.
+ */
+import type { Drill, Notation } from '@shared/engine';
+import type { Stave } from 'vexflow/core';
+import { drawCellTag, drawChordSymbol, drawOttava } from './lanes';
+import type { SystemPlan } from './layout';
+import type { BuiltStaffMeasure, DrawnEvent } from './measure';
+import type { SystemLayout } from './system';
+import { triadOf } from './triad-of';
+
+export function placeCellTags(
+  lanes: Element,
+  drill: Drill,
+  drawn: DrawnEvent[],
+  y: number,
+  aChromas: Set<number>,
+): void {
+  // Cell tags: one per run of notes of one cell on this line. A scale pattern's cells are steps
+  // of the six-note scale, not triads: its notes keep their triad's colour and go untagged
+  // (a tag per note would bury the line in letters).
+  const ordered = drawn
+    .filter((d) => d.event.noteIndex !== undefined && drill.notes[d.event.noteIndex].source !== 'scale')
+    .sort((a, b) => (a.event.noteIndex ?? 0) - (b.event.noteIndex ?? 0));
+  let run: DrawnEvent[] = [];
+  const flush = () => {
+    if (run.length === 0) return;
+    const first = drill.notes[run[0].event.noteIndex!];
+    drawCellTag(
+      lanes,
+      { x0: run[0].note.getNoteHeadBeginX(), x1: run[run.length - 1].note.getNoteHeadEndX() },
+      y,
+      triadOf(first, aChromas),
+      first.cell,
+    );
+    run = [];
+  };
+  const keyOf = (d: DrawnEvent) => {
+    const n = drill.notes[d.event.noteIndex!];
+    return `${n.cell}:${n.source}`;
+  };
+  for (const d of ordered) {
+    if (run.length && keyOf(run[0]) !== keyOf(d)) flush();
+    run.push(d);
+  }
+  flush();
+}
+
+export function placeOttavaLines(
+  lanes: Element,
+  notation: Notation,
+  plan: SystemPlan,
+  built: BuiltStaffMeasure[][],
+  layout: SystemLayout,
+): void {
+  // Ottava lines, per staff, over runs of notes under one sign.
+  notation.staves.forEach((_clef, s) => {
+    const onStaff = built.flatMap((parts) => parts[s].notes);
+    let start = -1;
+    for (let j = 0; j <= onStaff.length; j++) {
+      const o = j < onStaff.length ? onStaff[j].event.ottava : 0;
+      const prev = start >= 0 ? onStaff[start].event.ottava : 0;
+      if (start >= 0 && o !== prev) {
+        const kind = prev as 8 | -8;
+        const last = onStaff[j - 1];
+        const next = nextEventOnStaff(notation, plan.measures[plan.measures.length - 1], s);
+        const closes = j < onStaff.length || !next || next.ottava !== kind;
+        drawOttava(
+          lanes,
+          { x0: onStaff[start].note.getNoteHeadBeginX() - 2, x1: last.note.getNoteHeadEndX() + 4 },
+          kind === 8 ? layout.ottavaUp[s] : layout.ottavaDown[s],
+          kind,
+          closes,
+        );
+        start = -1;
+      }
+      if (start < 0 && o !== 0 && j < onStaff.length) start = j;
+    }
+  });
+}
+
+export function placeChordSymbols(
+  lanes: Element,
+  notation: Notation,
+  plan: SystemPlan,
+  built: BuiltStaffMeasure[][],
+  staves: Stave[][],
+  y: number,
+): void {
+  // Chord symbols: each over the event where it starts; a chord that goes on into a new line is
+  // shown again at its start (common practice), not in every bar it lasts.
+  const startsGiven = notation.measures.some((m) => m.chords !== undefined);
+  plan.measures.forEach((mi, k) => {
+    const measure = notation.measures[mi];
+    const symbols = [...(startsGiven ? (measure.chords ?? []) : [])];
+    const atStart = symbols.some((c) => Math.abs(c.start) < 1e-6);
+    if (measure.chord && !atStart && (!startsGiven || k === 0)) symbols.unshift({ start: 0, chord: measure.chord });
+    const events = built[k].flatMap((p) => [...p.notes, ...p.rests]);
+    for (const c of symbols) {
+      const at = events.find((d) => Math.abs(d.event.start - c.start) < 1e-6);
+      const x = at ? at.note.getNoteHeadBeginX() : staves[k][0].getNoteStartX();
+      drawChordSymbol(lanes, x, y, c.chord);
+    }
+  });
+}
+
+/** The first note on a staff after a measure, to see whether an ottava line runs on. */
+function nextEventOnStaff(notation: Notation, measureIndex: number, staff: number) {
+  for (let mi = measureIndex + 1; mi < notation.measures.length; mi++) {
+    const e = notation.measures[mi].events.find((ev) => ev.staff === staff && ev.kind === 'note');
+    if (e) return e;
+  }
+  return undefined;
+}
