@@ -108,4 +108,53 @@ describe('a take finished while the server is down', () => {
     // Nothing was sent again after the reload (a second answer would be the server's 200).
     expect(answers).toEqual([201]);
   });
+
+  it('shows a take the server refused for good until the player dismisses it', async () => {
+    const { page } = b;
+    await page.goto(`${url}/home`, { waitUntil: 'networkidle' });
+    // A take the device kept whose drill cannot be played (C and Am share two notes): the
+    // server answers 400, so it is refused for good rather than retried.
+    const id = crypto.randomUUID();
+    await page.evaluate(
+      ({ id, spec }) =>
+        new Promise<void>((resolve, reject) => {
+          const open = indexedDB.open('sixfold-takes');
+          open.onupgradeneeded = () => open.result.createObjectStore('pending');
+          open.onerror = () => reject(open.error);
+          open.onsuccess = () => {
+            const tx = open.result.transaction('pending', 'readwrite');
+            tx.objectStore('pending').put(
+              {
+                take: {
+                  id,
+                  spec,
+                  played: [{ midi: 60, timeMs: 0 }],
+                  options: { tempo: 120, mode: 'timed' },
+                  startedAt: new Date().toISOString(),
+                },
+                attempts: 0,
+                nextAt: 0,
+              },
+              id,
+            );
+            tx.oncomplete = () => {
+              open.result.close();
+              resolve();
+            };
+            tx.onerror = () => reject(tx.error);
+          };
+        }),
+      { id, spec: { ...SPEC, pair: ['C', 'Am'] } },
+    );
+    await page.goto(`${url}/practice?spec=${encodeURIComponent(JSON.stringify(SPEC))}`, { waitUntil: 'networkidle' });
+    const alert = page.getByRole('alert').filter({ hasText: 'A take was refused by the server' });
+    await alert.waitFor({ timeout: 20_000 });
+    expect(await alert.textContent()).toMatch(/share/);
+    await alert.getByRole('button', { name: 'Dismiss' }).click();
+    await alert.waitFor({ state: 'detached' });
+    // It left the device: a reload shows nothing.
+    await page.reload({ waitUntil: 'networkidle' });
+    await page.getByTestId('drill-staff').waitFor();
+    expect(await page.getByRole('alert').filter({ hasText: 'refused' }).count()).toBe(0);
+  });
 });

@@ -50,7 +50,7 @@ export function PracticeRoom({ baseSpec, settings, initialOptions, assignmentId,
   const { input, status } = useNoteInput();
   const setLatency = useSetLatency();
   const sound = useSoundRouting();
-  const { queue, save } = useTakeQueue();
+  const { queue, save, dismiss: dismissTake } = useTakeQueue();
   const replay = useReplay();
 
   const spec: DrillSpec = useMemo(
@@ -283,8 +283,19 @@ export function PracticeRoom({ baseSpec, settings, initialOptions, assignmentId,
           </span>
         ) : null}
         {queue.refused.map((r) => (
-          <span key={r.id} role="alert" className="text-ember-700">
+          <span
+            key={r.id}
+            role="alert"
+            className="flex flex-wrap items-center gap-2 text-ember-700 dark:text-ember-100"
+          >
             A take was refused by the server: {r.message}
+            <button
+              type="button"
+              onClick={() => void dismissTake(r.id)}
+              className="rounded-full border border-current px-3 py-0.5 text-caption font-semibold"
+            >
+              Dismiss
+            </button>
           </span>
         ))}
       </div>

@@ -1,7 +1,7 @@
 import type { DrillSpec, ScoreOptions } from '@shared/engine';
 import { useQueryClient } from '@tanstack/react-query';
 import { useCallback, useEffect, useState } from 'react';
-import { onQueueChange, type QueueState, saveTake } from '@/lib/take-queue';
+import { dismissRefused, onQueueChange, type QueueState, saveTake } from '@/lib/take-queue';
 import { tempoKey } from '../api/tempo';
 import type { FinishedTake } from '../lib/take-session';
 
@@ -43,5 +43,8 @@ export function useTakeQueue() {
     [queryClient],
   );
 
-  return { queue, save };
+  /** Lets the player put away a refused take once they have read why (it leaves the device). */
+  const dismiss = useCallback((id: string) => dismissRefused(id), []);
+
+  return { queue, save, dismiss };
 }
