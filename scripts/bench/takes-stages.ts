@@ -24,7 +24,7 @@ interface PlanNode {
 }
 interface Explained {
   Plan: PlanNode;
-  Triggers?: { 'Trigger Name': string; Relation: string; Time: number; Calls: number }[];
+  Triggers?: { 'Trigger Name': string; 'Constraint Name'?: string; Relation: string; Time: number; Calls: number }[];
   'Planning Time': number;
   'Execution Time': number;
 }
@@ -97,8 +97,9 @@ export async function stageBreakdown(pool: pg.Pool, playerId: string, bodies: st
       await client.query('COMMIT');
       times.commit.push(performance.now() - t);
       const triggers = plan.Triggers ?? [];
+      // A foreign key's check is listed under its constraint's name, a trigger of ours under its own.
       const trig = (pick: (name: string) => boolean) =>
-        triggers.filter((tr) => pick(tr['Trigger Name'])).reduce((s, tr) => s + tr.Time, 0);
+        triggers.filter((tr) => pick(tr['Constraint Name'] ?? tr['Trigger Name'])).reduce((s, tr) => s + tr.Time, 0);
       times['takes row'].push(cteTime(plan.Plan, 't') + trig((n) => n.includes('takes_player_id')));
       times.notes.push(cteTime(plan.Plan, 'notes'));
       times['notes FK checks'].push(trig((n) => n.includes('take_notes_take_id')));

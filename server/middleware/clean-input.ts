@@ -23,26 +23,30 @@ export function badNumber(n: number): string | null {
   return null;
 }
 
+/**
+ * Checks every value under `value`; `path` is the way down to it, pushed and popped in place
+ * (a take's body holds thousands of values, so nothing is allocated unless one is bad).
+ */
 function walk(value: unknown, path: string[], fields: Record<string, string[]>, depth: number): void {
-  const at = () => path.join('.') || '_';
-  const add = (message: string) => {
-    fields[at()] = [...(fields[at()] ?? []), message];
-  };
-  if (typeof value === 'string') {
-    const why = badText(value);
-    if (why) add(why);
-  } else if (typeof value === 'number') {
-    const why = badNumber(value);
-    if (why) add(why);
-  } else if (value && typeof value === 'object' && depth < 64) {
-    for (const [key, inner] of Object.entries(value)) {
+  let why: string | null = null;
+  if (typeof value === 'string') why = badText(value);
+  else if (typeof value === 'number') why = badNumber(value);
+  else if (value && typeof value === 'object' && depth < 64) {
+    for (const key in value) {
+      if (!Object.hasOwn(value, key)) continue;
       const keyWhy = badText(key);
       if (keyWhy) {
         fields[[...path, '(name)'].join('.')] = [`a field name ${keyWhy}`];
         continue;
       }
-      walk(inner, [...path, key], fields, depth + 1);
+      path.push(key);
+      walk((value as Record<string, unknown>)[key], path, fields, depth + 1);
+      path.pop();
     }
+  }
+  if (why) {
+    const at = path.join('.') || '_';
+    fields[at] = [...(fields[at] ?? []), why];
   }
 }
 
