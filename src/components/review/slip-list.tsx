@@ -48,7 +48,9 @@ export function SlipList({ readings, extras, meanOffsetMs, selected, onSelect, a
                 }`}
               >
                 <span>{readingWords(r)}</span>
-                <span className="text-caption text-muted">{actionLabel}</span>
+                <span className={`text-caption ${selected === r.index ? 'font-semibold' : 'text-muted'}`}>
+                  {selected === r.index ? 'Chosen' : actionLabel}
+                </span>
               </button>
             </li>
           ))}

@@ -41,7 +41,7 @@ export function ConfirmDialog({
         e.preventDefault();
         onCancel();
       }}
-      className="w-[min(28rem,calc(100vw-2rem))] rounded-card border border-line bg-raised p-5 text-text shadow-xl backdrop:bg-black/50"
+      className="m-auto w-[min(28rem,calc(100vw-2rem))] rounded-card border border-line bg-raised p-5 text-text shadow-xl backdrop:bg-black/50"
     >
       <h2 id="sf-confirm-title" className="text-lead font-bold">
         {title}

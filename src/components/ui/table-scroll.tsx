@@ -37,7 +37,8 @@ export function TableScroll({
           ref={ref}
           tabIndex={more ? 0 : undefined}
           aria-label={label}
-          className="overflow-x-auto rounded-card border border-line bg-raised focus-visible:outline-2"
+          // positioned, so hidden headings (placed absolutely) stay inside the scroller's clip
+          className="relative overflow-x-auto rounded-card border border-line bg-raised focus-visible:outline-2"
         >
           {children}
         </section>
