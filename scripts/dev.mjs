@@ -7,7 +7,14 @@ import { ensure } from './db.mjs';
 
 const projectDir = resolve(dirname(fileURLToPath(import.meta.url)), '..');
 const urls = ensure();
-const env = { NODE_ENV: 'development', SEED_DEMO: '1', ...process.env, DATABASE_URL: urls.app };
+// Links in e-mails and checkout's way back open Vite's page, where the changes show.
+const env = {
+  NODE_ENV: 'development',
+  SEED_DEMO: '1',
+  PUBLIC_URL: 'http://127.0.0.1:5173',
+  ...process.env,
+  DATABASE_URL: urls.app,
+};
 const children = [
   spawn(process.execPath, ['--import', 'tsx', '--watch', 'server/index.ts'], {
     cwd: projectDir,
