@@ -11,6 +11,7 @@ import type { Drill, Notation } from '@shared/engine';
 import VexFlow, { Font, Renderer, StaveConnector } from 'vexflow/core';
 import { placeCellTags, placeChordSymbols, placeOttavaLines } from './lane-placement';
 import { MarkLayer, type NoteGeometry } from './marks';
+import { svgEl } from './svg';
 import type { DrawnEvent } from './measure';
 import { BRACE_ROOM, narrowestLine, planSystems } from './layout';
 import { buildSystem, LEFT, layoutSystem, reach, type SystemLayout, TOP_LINE } from './system';
@@ -153,6 +154,18 @@ export async function renderStaff(
       el.setAttribute('data-settled', 'false');
       el.classList.add('sf-note', `sf-triad-${triad}`);
       liftAccidentals(el);
+      // The notehead's own box: a glyph's text box is the font's whole line, far taller than the
+      // head, so a page that lays things over a note measures this instead.
+      const ys = note.getYs();
+      svgEl(el, 'rect', {
+        class: 'sf-head',
+        x: begin,
+        y: ys[0] - 5,
+        width: end - begin,
+        height: 10,
+        opacity: 0,
+        stroke: 'none',
+      });
       notes[i] = el;
     }
 

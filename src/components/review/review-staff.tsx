@@ -8,8 +8,10 @@ import { tickScale } from './note-strip';
 interface Spot {
   index: number;
   x: number;
+  /** the top of the notehead */
   top: number;
-  bottom: number;
+  /** where the tick goes: under the staff's own mark for the note, else under the notehead */
+  tickTop: number;
   reading: NoteReading;
 }
 
@@ -24,8 +26,8 @@ interface Props {
 
 /**
  * The staff of a take with what was played laid over it: above a wrong note the pitch played
- * instead, below each played note a tick left of centre (ahead of the beat) or right of it
- * (behind). A click on a note chooses it. The layer reads where the staff drew each note (its
+ * instead, under each played note's mark a tick left of centre (ahead of the beat) or right of
+ * it (behind). A click on a note chooses it. The layer reads where the staff drew each note (its
  * data-index), so the staff is never redrawn for it; the words are in the note list beside it.
  */
 export function ReviewStaff({ drill, marks, current, label, readings, onSelect }: Props) {
@@ -41,15 +43,16 @@ export function ReviewStaff({ drill, marks, current, label, readings, onSelect }
       if (r.offsetMs === null && r.played === null) continue;
       const el =
         root.querySelector(`[data-index="${r.index}"]`) ?? root.querySelector(`[data-note-index="${r.index}"]`);
-      const head = el?.querySelector('.vf-notehead') ?? el;
+      const head = el?.querySelector('.sf-head') ?? el?.querySelector('.vf-notehead') ?? el;
       if (!head) continue;
       const b = head.getBoundingClientRect();
       if (b.width === 0) continue;
+      const mark = root.querySelector(`[data-mark-for="${r.index}"]`)?.getBoundingClientRect();
       next.push({
         index: r.index,
         x: b.left + b.width / 2 - origin.left,
         top: b.top - origin.top,
-        bottom: b.bottom - origin.top,
+        tickTop: (mark && mark.height > 0 ? mark.bottom + 3 : b.bottom + 8) - origin.top,
         reading: r,
       });
     }
@@ -95,7 +98,7 @@ export function ReviewStaff({ drill, marks, current, label, readings, onSelect }
               {r.played ? (
                 <span
                   className="absolute -translate-x-1/2 whitespace-nowrap rounded border border-ember-500 bg-raised px-1 text-[0.6875rem] font-bold leading-tight text-ember-700 dark:text-ember-100"
-                  style={{ left: s.x, top: s.top - 34 }}
+                  style={{ left: s.x, top: s.top - 18 }}
                   data-played-for={s.index}
                 >
                   {r.played}
@@ -105,7 +108,7 @@ export function ReviewStaff({ drill, marks, current, label, readings, onSelect }
                 <svg
                   viewBox="-10 0 20 8"
                   className={`absolute h-2 w-5 -translate-x-1/2 ${tone}`}
-                  style={{ left: s.x, top: s.bottom + 22 }}
+                  style={{ left: s.x, top: s.tickTop }}
                   data-tick-for={s.index}
                 >
                   <line x1="-10" x2="10" y1="4" y2="4" stroke="currentColor" strokeOpacity="0.35" />
