@@ -24,11 +24,39 @@ export function cookieSecure(env: Env, req?: Request): boolean {
   return Boolean(req?.secure);
 }
 
+/** How often a session's expiry is moved on in the store while it is in use. */
+export const SESSION_TOUCH_EVERY_MS = 60_000;
+
+/**
+ * The store, moving a session's stored expiry on at most once a minute: every request answers
+ * with a fresh cookie (rolling), but writing the row on each one was a commit per request. The
+ * stored expiry lags the cookie's by under a minute of a 14-day life.
+ */
+function throttleTouch<S extends session.Store>(store: S): S {
+  const touchedAt = new Map<string, number>();
+  if (!store.touch) return store;
+  const touch = store.touch.bind(store);
+  store.touch = (sid, sess, done) => {
+    const now = Date.now();
+    const last = touchedAt.get(sid);
+    if (last !== undefined && now - last < SESSION_TOUCH_EVERY_MS) {
+      done?.();
+      return;
+    }
+    if (touchedAt.size > 100_000) {
+      for (const [id, at] of touchedAt) if (now - at >= SESSION_TOUCH_EVERY_MS) touchedAt.delete(id);
+    }
+    touchedAt.set(sid, now);
+    touch(sid, sess, done);
+  };
+  return store;
+}
+
 /** Sessions in PostgreSQL (connect-pg-simple); the cookie is HttpOnly, SameSite=Lax, Secure as above. */
 export function sessionMiddleware(env: Env, pool: pg.Pool) {
   const PgStore = connectPgSimple(session);
   return session({
-    store: new PgStore({ pool, tableName: 'session', createTableIfMissing: false }),
+    store: throttleTouch(new PgStore({ pool, tableName: 'session', createTableIfMissing: false })),
     name: SESSION_COOKIE,
     secret: env.SESSION_SECRET,
     resave: false,
