@@ -7,7 +7,7 @@ import { loadUser } from './middleware/auth';
 import { cleanInput } from './middleware/clean-input';
 import { requireCsrf } from './middleware/csrf';
 import { errorHandler, notFoundApi } from './middleware/error-handler';
-import { requestLogger } from './middleware/request-log';
+import { requestLogger, warnOfUntrustedProxy } from './middleware/request-log';
 import { securityHeaders } from './middleware/security-headers';
 import { sessionMiddleware } from './middleware/session';
 import { clientDir as clientDirFromEnv } from './paths';
@@ -40,6 +40,7 @@ export function createApp(deps: AppDeps) {
   const app = express();
   app.disable('x-powered-by');
   if (env.TRUST_PROXY === '1') app.set('trust proxy', 1);
+  else app.use(warnOfUntrustedProxy);
   app.use(requestLogger(env, deps.logStream));
   app.use(securityHeaders(env, clientDir));
 

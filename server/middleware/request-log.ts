@@ -1,4 +1,5 @@
 import type { IncomingMessage, ServerResponse } from 'node:http';
+import type { RequestHandler } from 'express';
 import pino, { type DestinationStream } from 'pino';
 import { pinoHttp } from 'pino-http';
 import type { Env } from '../env';
@@ -35,3 +36,19 @@ export function requestLogger(env: Env, stream?: DestinationStream) {
     customLogLevel: (_req, res, err) => (err || res.statusCode >= 500 ? 'error' : 'info'),
   });
 }
+
+let warned = false;
+
+/**
+ * Behind a proxy without TRUST_PROXY every visitor seems to come from the proxy's address, so
+ * the per-source limits would count them all as one: say so once, in the log.
+ */
+export const warnOfUntrustedProxy: RequestHandler = (req, _res, next) => {
+  if (!warned && req.headers['x-forwarded-for']) {
+    warned = true;
+    console.warn(
+      '[sixfold] requests carry X-Forwarded-For but TRUST_PROXY is not 1: behind a proxy, set TRUST_PROXY=1 so sign-in and other limits count each visitor, not the proxy',
+    );
+  }
+  next();
+};
