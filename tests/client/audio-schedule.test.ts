@@ -5,6 +5,22 @@ import { encodeWav } from '../../src/lib/audio/wav';
 
 const close = (a: number, b: number) => Math.abs(a - b) < 1e-9;
 
+describe('scheduleDrill in a compound meter', () => {
+  // 6/8 at 120: the tempo counts dotted quarters (common practice), so a quarter lasts 1/3 s.
+  const drill = generateDrill({ pair: ['F', 'Eb'], pattern: 'weave', direction: 'up', tempo: 120, meter: [6, 8] });
+
+  it('times notes by dotted-quarter beats and clicks twice a bar', () => {
+    const { events, downbeat } = scheduleDrill(drill, { countInMeasures: 1 });
+    // One 6/8 bar is two beats of half a second each.
+    expect(downbeat).toBeCloseTo(1, 9);
+    const first = drill.notes[3];
+    const onset = events.find((e) => e.kind === 'note' && e.index === 3);
+    expect(onset && close(onset.time, downbeat + (first.beat * 60) / 180)).toBe(true);
+    const countIn = events.filter((e) => e.kind === 'click' && e.countIn).map((e) => e.time);
+    expect(countIn.map((t) => Number(t.toFixed(9)))).toEqual([0, 0.5]);
+  });
+});
+
 describe('scheduleDrill', () => {
   const drill = generateDrill({
     pair: ['D', 'C'],

@@ -69,6 +69,17 @@ describe('POST /api/takes', () => {
     expect(rows.rows[0].n).toBe(drill.notes.length);
   });
 
+  it('scores a compound-meter drill with the tempo counting dotted quarters', async () => {
+    // 6/8 at 120 dotted quarters a minute is 180 quarters a minute (common practice).
+    const spec = { ...SPEC, meter: [6, 8] as [number, number], tempo: 120 };
+    const sixEight = generateDrill(spec);
+    const played = sixEight.notes.map((n) => ({ midi: n.midi, timeMs: (n.beat * 60000) / 180, velocity: 80 }));
+    const res = await p.post('/api/takes', takeBody({ spec, played, options: { tempo: 120, mode: 'timed' } }));
+    expect(res.status).toBe(201);
+    expect(res.body.take.score.accuracy).toBe(1);
+    expect(res.body.take.options.tempo).toBe(180);
+  });
+
   it('stores a take sent twice once, answering 200 with the same take the second time', async () => {
     const body = takeBody();
     const first = await p.post('/api/takes', body);

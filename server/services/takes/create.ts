@@ -139,7 +139,7 @@ export function takeRowValues(args: CreateTakeArgs, scored: ScoredTake) {
     accuracy: score.accuracy,
     meanOffsetMs: score.meanOffsetMs,
     noteCount: scored.expected.length,
-    durationMs: takeDurationMs(scored.expected, args.played, drill.spec.tempo, args.stoppedAtMs),
+    durationMs: takeDurationMs(scored.expected, args.played, scored.options.tempo, args.stoppedAtMs),
     startedAt: args.startedAt,
   };
 }

@@ -1,4 +1,5 @@
 import { chordKey, drillKey, patternName } from '../../../shared/practice/drill-identity';
+import { quarterTempo } from '../../../shared/engine';
 import { generateChecked } from '../../../shared/engine/patterns/checked';
 import type { DrillSpec as SpecInput } from '../../../shared/schemas/drills';
 import { AppError } from '../../errors';
@@ -62,8 +63,9 @@ export function scoreRawTake(input: {
   }
   let drill = checked.drill;
   if (input.measures) drill = sliceDrill(drill, input.measures[0], input.measures[1]);
-  const options = boundOptions(input.options, drill.spec.tempo);
-  const msPerBeat = 60000 / drill.spec.tempo;
+  // The scorer counts quarter notes; a compound meter's tempo counts dotted quarters.
+  const options = boundOptions(input.options, quarterTempo(drill.spec.tempo, drill.spec.meter));
+  const msPerBeat = 60000 / options.tempo;
   const stop = input.stoppedAtMs;
   const expected =
     stop === undefined || stop === null ? drill.notes : drill.notes.filter((n) => n.beat * msPerBeat <= stop);

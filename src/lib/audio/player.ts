@@ -1,4 +1,5 @@
 import type { Drill } from '@shared/engine';
+import { Midi } from 'tonal';
 import type * as ToneNs from 'tone';
 import { type AudioEvent, type Schedule, type ScheduleOptions, scheduleDrill } from './schedule';
 import { encodeWav } from './wav';
@@ -12,7 +13,7 @@ const loadTone = () => {
   return tonePromise;
 };
 
-const midiToHz = (m: number) => 440 * 2 ** ((m - 69) / 12);
+const midiToHz = Midi.midiToFreq;
 
 /** The three voices, made in whichever context is current (live or offline). */
 function makeVoices(Tone: Tone) {

@@ -1,4 +1,4 @@
-import type { Drill } from '@shared/engine';
+import { beatGroups, type Drill, isCompound, quarterTempo } from '@shared/engine';
 import { chordTones } from '@shared/engine/theory/chord-tones';
 import { Note } from 'tonal';
 
@@ -52,19 +52,23 @@ export function scheduleDrill(drill: Drill, opts: ScheduleOptions = {}): Schedul
   const { tempo, meter, chord } = drill.spec;
   const click = opts.click ?? true;
   const countIn = Math.max(0, Math.floor(opts.countInMeasures ?? 1));
-  const secPerQuarter = 60 / tempo;
-  const beatUnit = 4 / meter[1]; // the meter's beat, in quarter notes
-  const measureQuarters = meter[0] * beatUnit;
+  // The tempo counts the meter's beat: a dotted quarter in 6/8, 9/8 and 12/8.
+  const secPerQuarter = 60 / quarterTempo(tempo, meter);
+  const measureQuarters = meter[0] * (4 / meter[1]);
+  // Clicks fall on the meter's beats: each dotted quarter in a compound meter, else each unit.
+  const clickBeats = isCompound(meter) ? beatGroups(meter) : Array.from({ length: meter[0] }, () => 4 / meter[1]);
   const downbeat = countIn * measureQuarters * secPerQuarter;
   const end = downbeat + drill.measures * measureQuarters * secPerQuarter;
   const events: AudioEvent[] = [];
 
   const clicks = click ? countIn + drill.measures : countIn;
   for (let m = 0; m < clicks; m++) {
-    for (let b = 0; b < meter[0]; b++) {
-      const time = (m * measureQuarters + b * beatUnit) * secPerQuarter;
+    let at = 0;
+    clickBeats.forEach((length, b) => {
+      const time = (m * measureQuarters + at) * secPerQuarter;
       events.push({ kind: 'click', time, accent: b === 0, countIn: m < countIn });
-    }
+      at += length;
+    });
   }
   // over a progression the pad follows the changes: each chord held for its own beats
   if (opts.pad && drill.changes) {

@@ -1,4 +1,4 @@
-import { type DrillSpec, instruments, type ScoreOptions } from '@shared/engine';
+import { type DrillSpec, instruments, quarterTempo, type ScoreOptions } from '@shared/engine';
 import type { PlayerSettings } from '@shared/schemas/settings';
 import { useEffect, useMemo, useRef, useState } from 'react';
 import { Link } from 'react-router-dom';
@@ -86,7 +86,8 @@ export function PracticeRoom({ baseSpec, settings, initialOptions, assignmentId,
     const octave = settings.octaveShift * 12;
     const transposition = opts.writtenPitchInput ? instruments[opts.instrument].transposition : 0;
     return {
-      tempo: drill.spec.tempo,
+      // The scorer counts quarter notes; a compound meter's tempo counts dotted quarters.
+      tempo: quarterTempo(drill.spec.tempo, drill.spec.meter),
       mode: opts.mode,
       octaveTolerant: opts.octaveTolerant,
       swing: opts.swing,

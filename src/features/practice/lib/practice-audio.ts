@@ -1,4 +1,5 @@
-import type { Drill } from '@shared/engine';
+import { type Drill, quarterTempo } from '@shared/engine';
+import { Midi } from 'tonal';
 import type * as ToneNs from 'tone';
 import { scheduleDrill } from '@/lib/audio/schedule';
 
@@ -13,7 +14,7 @@ const loadTone = () => {
   return tonePromise;
 };
 
-const hz = (m: number) => 440 * 2 ** ((m - 69) / 12);
+const hz = Midi.midiToFreq;
 
 export type ClickMode = 'every-beat' | 'two-and-four' | 'off';
 
@@ -55,7 +56,7 @@ export async function startBacking(
   const zero = audioTimeFor(Tone, opts.originPerf) - downbeat;
   const [beats] = drill.spec.meter;
   const beatUnit = 4 / drill.spec.meter[1];
-  const secPerUnit = (60 / drill.spec.tempo) * beatUnit;
+  const secPerUnit = (60 / quarterTempo(drill.spec.tempo, drill.spec.meter)) * beatUnit;
   // The last moment anything scheduled still sounds: nothing may be torn down before it.
   let lastAt = Tone.now();
   for (const e of events) {

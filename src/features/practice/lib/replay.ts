@@ -1,4 +1,5 @@
-import type { Drill, PlayedNote } from '@shared/engine';
+import { type Drill, type PlayedNote, quarterTempo } from '@shared/engine';
+import { Midi } from 'tonal';
 
 /** Plays the take back: what was played (lead) over the drill as written (soft), from the downbeat. */
 export async function replayTake(
@@ -8,13 +9,13 @@ export async function replayTake(
 ): Promise<{ stop(): void }> {
   const Tone = await import('tone');
   await Tone.start();
-  const hz = (m: number) => 440 * 2 ** ((m - 69) / 12);
+  const hz = Midi.midiToFreq;
   const lead = new Tone.PolySynth(Tone.Synth, { oscillator: { type: 'triangle' } }).toDestination();
   lead.volume.value = -8;
   const guide = new Tone.PolySynth(Tone.Synth, { oscillator: { type: 'sine' } }).toDestination();
   guide.volume.value = -24;
   const t0 = Tone.now() + 0.2;
-  const spb = 60 / drill.spec.tempo;
+  const spb = 60 / quarterTempo(drill.spec.tempo, drill.spec.meter);
   for (const n of drill.notes) guide.triggerAttackRelease(hz(n.midi), n.duration * spb * 0.8, t0 + n.beat * spb, 0.5);
   for (const p of played) {
     const at = t0 + Math.max(0, p.timeMs) / 1000;

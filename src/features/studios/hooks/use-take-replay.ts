@@ -1,4 +1,5 @@
-import type { Drill, PlayedNote } from '@shared/engine';
+import { type Drill, type PlayedNote, quarterTempo } from '@shared/engine';
+import { Midi } from 'tonal';
 import { useCallback, useEffect, useRef, useState } from 'react';
 
 /**
@@ -19,13 +20,13 @@ export function useTakeReplay(drill: Drill | null, played: PlayedNote[]) {
     stop();
     const Tone = await import('tone');
     await Tone.start();
-    const hz = (m: number) => 440 * 2 ** ((m - 69) / 12);
+    const hz = Midi.midiToFreq;
     const written = new Tone.PolySynth(Tone.Synth, { oscillator: { type: 'sine' } }).toDestination();
     written.volume.value = -22;
     const take = new Tone.PolySynth(Tone.Synth, { oscillator: { type: 'triangle' } }).toDestination();
     take.volume.value = -8;
     const t0 = Tone.now() + 0.2;
-    const spb = 60 / drill.spec.tempo;
+    const spb = 60 / quarterTempo(drill.spec.tempo, drill.spec.meter);
     for (const n of drill.notes)
       written.triggerAttackRelease(hz(n.midi), n.duration * spb * 0.8, t0 + n.beat * spb, 0.5);
     for (const p of played)
