@@ -1,4 +1,5 @@
 import { PitchDetector } from 'pitchy';
+import { Midi } from 'tonal';
 import { EngineError } from '../engine/errors';
 import type { PlayedNote } from '../engine/types';
 
@@ -112,7 +113,7 @@ export function createNoteDetector(sampleRate: number, options: DetectOptions = 
   const rate = sampleRate / decimator.factor;
   const hop = Math.max(16, Math.round((rate * HOP_MS) / 1000));
   const hopMs = (hop * 1000) / rate;
-  const lowHz = 440 * 2 ** ((low - 69) / 12);
+  const lowHz = Midi.midiToFreq(low);
   // Two periods of the lowest note: the least the McLeod method needs.
   const win = 2 * Math.ceil(rate / lowHz);
   const levelLen = Math.ceil(rate * Math.max(0.01, 1 / lowHz));
