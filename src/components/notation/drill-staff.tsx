@@ -165,11 +165,7 @@ export function DrillStaff({
       data-downbeat-ms={downbeatMs ?? undefined}
     >
       {lengthNotice ? <ShortDrillNotice drill={drill} /> : null}
-      <div
-        ref={host}
-        className="min-h-24 w-full"
-        style={fixedWidth ? { width: fixedWidth, maxWidth: '100%' } : undefined}
-      />
+      <div ref={host} className="min-h-24 w-full" style={fixedWidth ? { maxWidth: fixedWidth } : undefined} />
       {marksRow ? <MarksLegend /> : null}
       {error ? (
         <p role="alert" className="text-ember-700 dark:text-ember-100">
