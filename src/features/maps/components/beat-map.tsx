@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { type MapFilters, useBeatMap } from '../api/maps';
 import { cellWords, heatColour, pct } from './heat';
+import { HeatLegend } from './heat-legend';
 import { MapFrame, MapTable } from './map-table';
 
 /** "1", "1+" (an eighth), "1⅓" ... : where in the bar, in the count players use. */
@@ -28,6 +29,7 @@ export function BeatMap({ filters }: { filters: MapFilters }) {
           rows={cells.map((c) => [c.meter, positionName(c.position), c.notes, c.errors, pct(c.rate)])}
         />
       ) : null}
+      {cells.length > 0 && !tableView ? <HeatLegend /> : null}
       {cells.length > 0 && !tableView
         ? meters.map((m) => (
             <div key={m} className="grid gap-1" data-testid="beat-map">

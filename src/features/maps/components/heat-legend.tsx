@@ -18,7 +18,7 @@ export function NoDataPattern() {
  * The key to a map's colours: the scale from no notes missed to the ceiling and beyond, and
  * (for the range map) the hatch of a key with no notes yet, which is no score at all.
  */
-export function HeatLegend({ noData }: { noData: 'hatched' | 'dashed' }) {
+export function HeatLegend({ noData }: { noData?: 'hatched' | 'dashed' }) {
   const steps = Array.from({ length: HEAT_STEPS }, (_, i) => ((i + 0.5) / HEAT_STEPS) * RATE_CEILING);
   return (
     <div className="flex flex-wrap items-center gap-x-6 gap-y-2 text-caption" data-testid="heat-legend">
@@ -32,16 +32,18 @@ export function HeatLegend({ noData }: { noData: 'hatched' | 'dashed' }) {
         </span>
         <span>{Math.round(RATE_CEILING * 100)}% or more</span>
       </span>
-      <span className="flex items-center gap-2">
-        {noData === 'hatched' ? (
-          <svg viewBox="0 0 20 16" className="h-4 w-5 rounded border border-line" aria-hidden="true">
-            <rect width="20" height="16" className="sf-nodata" />
-          </svg>
-        ) : (
-          <span className="h-4 w-5 rounded border border-dashed border-muted" aria-hidden="true" />
-        )}
-        <span>no notes yet (no score)</span>
-      </span>
+      {noData ? (
+        <span className="flex items-center gap-2">
+          {noData === 'hatched' ? (
+            <svg viewBox="0 0 20 16" className="h-4 w-5 rounded border border-line" aria-hidden="true">
+              <rect width="20" height="16" className="sf-nodata" />
+            </svg>
+          ) : (
+            <span className="h-4 w-5 rounded border border-dashed border-muted" aria-hidden="true" />
+          )}
+          <span>no notes yet (no score)</span>
+        </span>
+      ) : null}
     </div>
   );
 }
