@@ -19,7 +19,10 @@ export const CreateAssignmentInput = z.object({
     .number({ error: 'Set a target accuracy' })
     .min(0.05, { error: 'At least 5%' })
     .max(1, { error: 'At most 100%' }),
-  dueAt: z.iso.datetime({ offset: true, error: 'Pick a due date' }),
+  // (the database's calendar has no year 0)
+  dueAt: z.iso
+    .datetime({ offset: true, error: 'Pick a due date' })
+    .refine((d) => !d.startsWith('0000'), { error: 'Dates start in the year 1' }),
   note: z.string().trim().max(1000, { error: 'Keep the note under 1000 characters' }).optional().default(''),
   title: z.string().trim().min(1).max(120, { error: 'Keep the title under 120 characters' }).optional(),
 });

@@ -46,7 +46,9 @@ export const CreateTakeInput = z
       .array(PlayedNoteInput, { error: 'played must be a list of notes' })
       .max(MAX_PLAYED_NOTES, { error: `A take holds at most ${MAX_PLAYED_NOTES.toLocaleString('en')} notes` }),
     options: ScoreOptionsInput,
-    startedAt: z.iso.datetime({ offset: true, error: 'startedAt must be an ISO date-time' }),
+    startedAt: z.iso
+      .datetime({ offset: true, error: 'startedAt must be an ISO date-time' })
+      .refine((d) => !d.startsWith('0000'), { error: 'Dates start in the year 1' }),
     measures: z
       .tuple([z.number().int().min(1), z.number().int().min(1)])
       .refine(([a, b]) => a <= b, { error: 'measures must run from a lower to a higher measure' })

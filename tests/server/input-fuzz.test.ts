@@ -195,6 +195,12 @@ describe('bad input never answers 500', () => {
     expect(infinite.status).toBe(400);
   });
 
+  it('a take started in the year zero is a 400 naming startedAt', async () => {
+    const res = await player.post('/api/takes', { ...takeBody(STUDIO_SPEC), startedAt: '0000-06-01T10:00:00Z' });
+    expect(res.status).toBe(400);
+    expect(Object.keys(res.body.error.fields)).toEqual(['startedAt']);
+  });
+
   it('a year-zero date in the history filters is a 400 naming it', async () => {
     const res = await player.get('/api/takes?from=0000-01-01');
     expect(res.status).toBe(400);
