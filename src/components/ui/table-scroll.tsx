@@ -32,6 +32,11 @@ export function TableScroll({
   return (
     // Its width comes from the page, never from the table inside (which scrolls instead).
     <div className={`grid min-w-0 grid-cols-[minmax(0,1fr)] gap-1 [contain:inline-size] ${className}`}>
+      {more ? (
+        <p className="text-right text-caption text-muted" data-testid="scroll-cue">
+          Scroll sideways for more columns →
+        </p>
+      ) : null}
       <div className="relative min-w-0">
         <section
           ref={ref}
@@ -49,11 +54,6 @@ export function TableScroll({
           />
         ) : null}
       </div>
-      {more ? (
-        <p className="text-right text-caption text-muted" data-testid="scroll-cue">
-          Scroll sideways for more columns →
-        </p>
-      ) : null}
     </div>
   );
 }

@@ -78,7 +78,7 @@ export function UsersTable() {
           <tbody>
             {data.users.map((u) => (
               <tr key={u.id} className="border-b border-line last:border-0">
-                <td className="px-4 py-3 font-semibold">{u.name}</td>
+                <td className="whitespace-nowrap px-4 py-3 font-semibold">{u.name}</td>
                 <td className="px-4 py-3">{u.email}</td>
                 <td className="px-4 py-3">
                   {u.id === me?.id ? (
@@ -111,7 +111,7 @@ export function UsersTable() {
                   {u.id === me?.id ? null : (
                     <button
                       type="button"
-                      className="rounded-lg border border-line px-3 py-1 font-semibold hover:border-ink-300"
+                      className="whitespace-nowrap rounded-lg border border-line px-3 py-1 font-semibold hover:border-ink-300"
                       disabled={update.isPending}
                       onClick={() => update.mutate({ id: u.id, disabled: !u.disabled })}
                     >

@@ -82,7 +82,7 @@ export function PracticeLog({ filters, ownGoal }: { filters: MapFilters; ownGoal
   if (!data) return null;
   const goal = data.weeklyMinutesGoal;
   const weeks = weeksOf(data.days, data.today);
-  const busiest = Math.max(10, ...weeks.flatMap((w) => w.days.map((d) => d.minutes)));
+  const busiest = Math.max(1, ...weeks.flatMap((w) => w.days.map((d) => d.minutes)));
   const widest = Math.max(goal ?? 0, ...weeks.map((w) => w.total), 10);
   const thisWeek = weeks[0];
   return (
