@@ -202,7 +202,8 @@ describe('the drills page in Chromium', () => {
       pattern: 'weave',
       direction: 'down',
       instrument: 'guitar',
-      meter: [7, 8],
+      // Triplets cannot fill 7/8 (the engine refuses it); in 6/8 they are written as plain eighths.
+      meter: [6, 8],
       tempo: 132,
       chord: 'G7',
     },
