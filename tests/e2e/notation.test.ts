@@ -3,6 +3,7 @@ import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { randomUUID } from 'node:crypto';
 import { type DrillSpec, generateDrill, notate, type PlayedNote, type Verdict } from '../../shared/engine';
+import { seriousViolations } from '../helpers/axe';
 import { type BrowserSession, openBrowser, signInThroughPage } from '../helpers/browser';
 import { createUser, signedIn, type TestUser } from '../helpers/factories';
 import { startTestServer } from '../helpers/test-server';
@@ -224,6 +225,19 @@ describe('the staff drawn from the notation model, in Chromium', () => {
     await page.evaluate(() => document.documentElement.classList.add('dark'));
     await staff.screenshot({ path: join(shots, 'take-marks-dark.png') });
     await page.evaluate(() => document.documentElement.classList.remove('dark'));
+  });
+
+  it('leaves no serious accessibility violation on the drills page, in both themes and on a phone', async () => {
+    const { page } = b;
+    await openDrill({ ...HIGH_WIND, pattern: 'stack' });
+    for (const width of [1280, 390]) {
+      await page.setViewportSize({ width, height: 900 });
+      expect(await seriousViolations(page)).toEqual([]);
+      await page.evaluate(() => document.documentElement.classList.add('dark'));
+      expect(await seriousViolations(page)).toEqual([]);
+      await page.evaluate(() => document.documentElement.classList.remove('dark'));
+    }
+    await page.setViewportSize({ width: 1280, height: 900 });
   });
 
   it('prints the key cycle through the same staff', async () => {
