@@ -2,7 +2,7 @@
  * Sixfold's mark: two rising figures of three short strokes, the second set off above the
  * first, as a pair's two triads run up the keyboard. Decorative beside the word "Sixfold".
  */
-export function Logo({ className = 'h-7 w-7' }: { className?: string }) {
+export function Logo({ className = 'h-7 w-7 rounded-[25%] dark:ring-1 dark:ring-ink-500' }: { className?: string }) {
   return (
     <svg viewBox="0 0 32 32" className={className} aria-hidden="true" focusable="false" data-testid="logo">
       <rect width="32" height="32" rx="8" fill="#182743" />
