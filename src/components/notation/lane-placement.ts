@@ -69,7 +69,7 @@ export function placeOttavaLines(
         drawOttava(
           lanes,
           { x0: onStaff[start].note.getNoteHeadBeginX() - 2, x1: last.note.getNoteHeadEndX() + 4 },
-          kind === 8 ? layout.ottavaUp[s] : layout.ottavaDown[s],
+          ottavaY(onStaff.slice(start, j), kind, kind === 8 ? layout.ottavaUp[s] : layout.ottavaDown[s]),
           kind,
           closes,
         );
@@ -112,4 +112,29 @@ function nextEventOnStaff(notation: Notation, measureIndex: number, staff: numbe
     if (e) return e;
   }
   return undefined;
+}
+
+/**
+ * How high an ottava line sits: just clear of the notes under it (their stems, beams and
+ * triplet brackets) and of the staff, never farther out than the lane kept for it on the line.
+ */
+function ottavaY(run: DrawnEvent[], kind: 8 | -8, lane: number): number {
+  const stave = run[0].note.getStave();
+  if (!stave) return lane;
+  if (kind === 8) {
+    let top = stave.getYForLine(0) - 20;
+    for (const { note, event } of run) {
+      const { topY, baseY } = note.getStemExtents();
+      const tuplet = event.tuplet !== undefined && event.stem !== 'down' ? 16 : 0;
+      top = Math.min(top, ...note.getYs().map((y) => y - 16), Math.min(topY, baseY) - 8 - tuplet);
+    }
+    return Math.max(lane, top);
+  }
+  let bottom = stave.getYForLine(4) + 22;
+  for (const { note, event } of run) {
+    const { topY, baseY } = note.getStemExtents();
+    const tuplet = event.tuplet !== undefined && event.stem === 'down' ? 16 : 0;
+    bottom = Math.max(bottom, ...note.getYs().map((y) => y + 14), Math.max(topY, baseY) + 10 + tuplet);
+  }
+  return Math.min(lane, bottom);
 }
