@@ -196,6 +196,19 @@ describe('review and progress in Chromium', () => {
     await checkEverywhere('history', (p) => p.getByTestId('history-table').locator('tbody tr').first().waitFor());
   }, 240_000);
 
+  it('the keyboard diagram keeps keys a finger can find on a phone, and scrolls to the rest', async () => {
+    const { page } = browser;
+    await page.setViewportSize(PHONE);
+    await open('/input', (p) => p.getByRole('group', { name: /On-screen keyboard/ }).waitFor());
+    const keyboard = page.getByRole('group', { name: /On-screen keyboard/ });
+    const c4 = (await keyboard.locator('rect[data-midi="60"]').boundingBox())!;
+    expect(c4.width).toBeGreaterThanOrEqual(18);
+    // three octaves do not fit 390 px at that size: the drawing scrolls, starting near middle C
+    expect(c4.x).toBeGreaterThanOrEqual(0);
+    expect(c4.x + c4.width).toBeLessThanOrEqual(PHONE.width);
+    await page.setViewportSize(DESKTOP);
+  }, 240_000);
+
   it('progress: week over week per drill, the practice log against a goal the player sets, no-data keys hatched', async () => {
     await signIn('player@sixfold.test');
     await open('/progress', (p) => p.getByTestId('practice-log').waitFor());
