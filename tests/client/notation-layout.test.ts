@@ -1,0 +1,53 @@
+import { describe, expect, it } from 'vitest';
+import { generateDrill, notate } from '../../shared/engine';
+import { narrowestLine, naturalWidth, planSystems } from '../../src/components/notation/layout';
+import {
+  diatonicStep,
+  parseWritten,
+  printedOctave,
+  printedValue,
+  splitGap,
+  vexKey,
+} from '../../src/components/notation/pitch';
+
+describe('what the staff prints for a note of the model', () => {
+  it('prints a triplet eighth as an eighth and a dotted quarter with its dot', () => {
+    expect(printedValue(1 / 3, true)).toEqual({ code: '8', dots: 0 });
+    expect(printedValue(0.5, false)).toEqual({ code: '8', dots: 0 });
+    expect(printedValue(1.5, false)).toEqual({ code: 'q', dots: 1 });
+    expect(printedValue(4, false)).toEqual({ code: 'w', dots: 0 });
+    expect(printedValue(0.3, false)).toBeNull();
+  });
+
+  it('prints a note under an 8va line an octave lower, under 8vb an octave higher (common practice)', () => {
+    expect(vexKey(printedOctave('Bb6', 8))).toBe('bb/5');
+    expect(vexKey(printedOctave('F#1', -8))).toBe('f#/2');
+    expect(vexKey(printedOctave('C4', 0))).toBe('c/4');
+  });
+
+  it('counts diatonic steps from C0, so E4 sits a third above C4', () => {
+    expect(diatonicStep(parseWritten('E4')) - diatonicStep(parseWritten('C4'))).toBe(2);
+    expect(diatonicStep(parseWritten('Cb4'))).toBe(diatonicStep(parseWritten('C4')));
+  });
+
+  it('fills a gap with plain values, largest first', () => {
+    expect(splitGap(3.5).map((v) => v.code)).toEqual(['h', 'q', '8']);
+  });
+});
+
+describe('lines of music', () => {
+  const drill = generateDrill({ pair: ['C', 'D'], pattern: 'four-three', direction: 'up', instrument: 'alto-sax' });
+  const notation = notate(drill);
+
+  it('puts every measure on exactly one line, in order, within the width', () => {
+    const systems = planSystems(notation.measures, 1, 1000);
+    expect(systems.flatMap((s) => s.measures)).toEqual(notation.measures.map((_m, i) => i));
+    for (const s of systems) expect(s.widths.reduce((a, b) => a + b, 0)).toBeLessThanOrEqual(1000);
+  });
+
+  it('never squeezes a busy measure below a readable width: a phone scales the drawing instead', () => {
+    const busiest = Math.max(...notation.measures.map((m) => naturalWidth(m, 1)));
+    // A line holds the clef and time signature and the busiest bar at no less than 85% of its room.
+    expect(narrowestLine(notation)).toBeGreaterThanOrEqual(busiest * 0.85 + 60);
+  });
+});
