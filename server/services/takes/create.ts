@@ -58,7 +58,7 @@ interface StoredFigures extends Record<string, unknown> {
 export function takeStatement(args: CreateTakeArgs, scored: ScoredTake): SQL {
   const v = takeRowValues(args, scored);
   const climb = tempoClimbStep(args.playerId, scored, wholeTake(args));
-  const notes = takeNotesRows(scored);
+  const notes = takeNotesArrays(scored);
   return sql`
     WITH t AS (
       INSERT INTO takes (id, player_id, assignment_id, spec, options, measure_from, measure_to, stopped_at_ms,
@@ -86,11 +86,12 @@ export function takeStatement(args: CreateTakeArgs, scored: ScoredTake): SQL {
         ? sql`, notes AS (
       INSERT INTO take_notes (take_id, idx, player_id, midi, beat, measure, position, meter, verdict, offset_ms,
                               key, pattern, pair, instrument, played_at)
-      SELECT ${args.id}, x.idx, ${args.playerId}, x.midi, x.beat, x.measure, x.position, ${notes.meter}, x.verdict,
+      SELECT ${args.id}, x.n - 1, ${args.playerId}, x.midi, x.beat, x.measure, x.position, ${notes.meter}, x.verdict,
              x.offset_ms, COALESCE(x.key, ${scored.key}), ${scored.pattern}, COALESCE(x.pair, ${scored.pair}),
              ${v.instrument}, ${v.startedAt.toISOString()}
-      FROM jsonb_to_recordset(${notes.json}::jsonb)
-        AS x(idx int, midi int, beat real, measure int, position real, verdict text, offset_ms real, key text, pair text)
+      FROM unnest(${notes.midi}::int[], ${notes.beat}::real[], ${notes.measure}::int[], ${notes.position}::real[],
+                  ${notes.verdict}::text[], ${notes.offsetMs}::real[], ${notes.key}::text[], ${notes.pair}::text[])
+        WITH ORDINALITY AS x(midi, beat, measure, position, verdict, offset_ms, key, pair, n)
       WHERE EXISTS (SELECT FROM t)
     )`
         : sql``
@@ -144,22 +145,29 @@ export function takeRowValues(args: CreateTakeArgs, scored: ScoredTake) {
   };
 }
 
-/** Every scored note's result as one JSON parameter; null when no note was scored. */
-function takeNotesRows(scored: ScoredTake): { json: string; meter: string } | null {
-  const { drill, score } = scored;
-  if (scored.expected.length === 0) return null;
-  const rows = scored.expected.map((n, i) => ({
-    idx: i,
-    midi: n.midi,
-    beat: n.beat,
-    measure: n.measure,
-    position: Math.round(n.beatInMeasure * 12) / 12,
-    verdict: score.results[i].verdict,
-    offset_ms: score.results[i].offsetMs,
-    key: scored.noteKeys?.[i].key ?? null,
-    pair: scored.noteKeys?.[i].pair ?? null,
-  }));
-  return { json: JSON.stringify(rows), meter: `${drill.spec.meter[0]}/${drill.spec.meter[1]}` };
+/** A PostgreSQL array literal of numbers (null as NULL). */
+const numbers = (xs: (number | null)[]) => `{${xs.map((x) => (x === null ? 'NULL' : String(x))).join(',')}}`;
+/** A PostgreSQL array literal of strings, each quoted. */
+const texts = (xs: string[]) => `{${xs.map((x) => `"${x.replace(/["\\]/g, '\\$&')}"`).join(',')}}`;
+
+/**
+ * Every scored note's result as one array parameter per column (compact to send, cheap to
+ * unnest); null when no note was scored. Chords' keys and pairs only over a progression.
+ */
+function takeNotesArrays(scored: ScoredTake) {
+  const { drill, score, expected } = scored;
+  if (expected.length === 0) return null;
+  return {
+    meter: `${drill.spec.meter[0]}/${drill.spec.meter[1]}`,
+    midi: numbers(expected.map((n) => n.midi)),
+    beat: numbers(expected.map((n) => n.beat)),
+    measure: numbers(expected.map((n) => n.measure)),
+    position: numbers(expected.map((n) => Math.round(n.beatInMeasure * 12) / 12)),
+    verdict: texts(score.results.map((r) => r.verdict)),
+    offsetMs: numbers(score.results.map((r) => r.offsetMs)),
+    key: scored.noteKeys ? texts(scored.noteKeys.map((k) => k.key)) : null,
+    pair: scored.noteKeys ? texts(scored.noteKeys.map((k) => k.pair)) : null,
+  };
 }
 
 function sameOwner(row: TakeRow, playerId: string) {
