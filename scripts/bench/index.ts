@@ -10,6 +10,7 @@ const sections: Array<[string, () => Promise<{ run: () => Promise<void> }>]> = [
   ['maps', () => import('./maps')],
   ['takes-load', () => import('./takes-load')],
   ['live-marks', () => import('./live-marks')],
+  ['staff', () => import('./staff')],
   ['listening', () => import('./listening')],
   ['bundle', () => import('./bundle')],
 ];
