@@ -98,9 +98,9 @@ export function AssignmentForm({ studioId }: { studioId: string }) {
       />
       <TextField label="Note to the players" value={note} onChange={(e) => setNote(e.target.value)} errors={f.note} />
       <p className="text-caption text-muted md:col-span-3">
-        Every whole take of the drill counts, on any instrument, in each key it names, at the target tempo or faster
-        and the target accuracy or better, once the assignment is set: from its own button, the drills page or
-        anywhere else.
+        Every whole take of the drill counts, on any instrument, in each key it names, at the target tempo or faster and
+        the target accuracy or better, once the assignment is set: from its own button, the drills page or anywhere
+        else.
       </p>
       <div className="md:col-span-3 flex items-center gap-3">
         <Button type="submit" disabled={create.isPending}>
