@@ -180,8 +180,9 @@ describe('practice page in Chromium with the fake MIDI device', () => {
       [1, 2],
     ];
     for (const [s, [from, to]] of expectedSteps.entries()) {
+      // The page moves on once the last take is scored, a moment after it ends.
+      await page.waitForSelector(`[data-testid="ladder-step"][data-step="${s}"]`, { timeout: 10_000 });
       const step = page.getByTestId('ladder-step');
-      expect(await step.getAttribute('data-step')).toBe(String(s));
       expect([await step.getAttribute('data-from'), await step.getAttribute('data-to')]).toEqual([
         String(from),
         String(to),
@@ -197,7 +198,7 @@ describe('practice page in Chromium with the fake MIDI device', () => {
         await takeDone(page);
       }
     }
-    expect(await page.getByTestId('ladder-step').getAttribute('data-step')).toBe('3');
+    await page.waitForSelector('[data-testid="ladder-step"][data-step="3"]', { timeout: 10_000 });
     let measures: Array<{ f: number; t: number }> = [];
     for (let i = 0; i < 50 && measures.length < 6; i++) {
       const res = await server.pool.query(

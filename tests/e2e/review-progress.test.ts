@@ -292,9 +292,14 @@ describe('review and progress in Chromium', () => {
   it('the admin: a role change asks first, and Cancel keeps the role', async () => {
     const sam = 'wind@sixfold.test';
     await signIn('admin@sixfold.test');
-    await open('/admin/users', (p) => p.getByLabel('Role of Sam Okafor').waitFor());
+    await open('/admin/users', (p) =>
+      p
+        .getByRole('row', { name: /wind@sixfold\.test/ })
+        .getByLabel('Role of Sam Okafor')
+        .waitFor(),
+    );
     const { page } = browser;
-    const select = page.getByLabel('Role of Sam Okafor');
+    const select = page.getByRole('row', { name: /wind@sixfold\.test/ }).getByLabel('Role of Sam Okafor');
     await select.selectOption('teacher');
     const dialog = page.getByRole('dialog', { name: 'Make Sam Okafor a teacher?' });
     await dialog.waitFor();
@@ -308,6 +313,11 @@ describe('review and progress in Chromium', () => {
     await expect
       .poll(async () => (await server.db.select().from(users).where(eq(users.email, sam)))[0].role)
       .toBe('teacher');
-    await checkEverywhere('admin-users', (p) => p.getByLabel('Role of Sam Okafor').waitFor());
+    await checkEverywhere('admin-users', (p) =>
+      p
+        .getByRole('row', { name: /wind@sixfold\.test/ })
+        .getByLabel('Role of Sam Okafor')
+        .waitFor(),
+    );
   }, 240_000);
 });

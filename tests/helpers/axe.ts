@@ -16,6 +16,14 @@ export interface AxeViolation {
  * serious and critical violations, each with the selectors of the elements it found.
  */
 export async function seriousViolations(page: Page): Promise<AxeViolation[]> {
+  // A theme switch fades colours over a moment; contrast is judged once they have settled.
+  await page.waitForFunction(
+    () => document.getAnimations().every((a) => !(a instanceof CSSTransition) || a.playState !== 'running'),
+    null,
+    {
+      timeout: 5000,
+    },
+  );
   const hasAxe = await page.evaluate(() => 'axe' in window);
   // Evaluated through the browser's debugging protocol, so the page's CSP (no inline scripts)
   // does not stand in the way.
