@@ -6,13 +6,11 @@ import { checkoutPageRouter } from './fake/checkout-page';
 import { createState, type SentEvent } from './fake/state';
 import { createWebhookSender } from './fake/webhooks';
 
-export { signPayload } from './fake/webhooks';
-
 /**
  * A local stand-in for the hosted payment service (development and test only). It answers the
  * few API calls Sixfold's SDK makes (checkout sessions, refunds; `fake/api.ts`), serves a
  * checkout page with Pay and Cancel (`fake/checkout-page.ts`), and on Pay posts a
- * `checkout.session.completed` event to the app's webhook, signed the way the real service signs
+ * `checkout.session.completed` event to the app's webhook, signed by the SDK's own test signer
  * (`fake/webhooks.ts`). Sessions live in memory (`fake/state.ts`). Nothing leaves the machine
  * and no money moves.
  */

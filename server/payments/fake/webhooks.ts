@@ -1,4 +1,4 @@
-import { createHmac } from 'node:crypto';
+import Stripe from 'stripe';
 import { type FakeState, newId, nowSeconds, publicSession, type SentEvent } from './state';
 
 /** The API version the fake's events claim to come from. */
@@ -6,12 +6,6 @@ const API_VERSION = '2026-10-28.endive';
 /** Deliveries tried before giving up, and the pause before each retry grows by this much. */
 const ATTEMPTS = 3;
 const BACKOFF_MS = 300;
-
-/** The signature header the real service sends, for a payload at a time (seconds). */
-export function signPayload(payload: string, secret: string, timestamp = nowSeconds()): string {
-  const v1 = createHmac('sha256', secret).update(`${timestamp}.${payload}`, 'utf8').digest('hex');
-  return `t=${timestamp},v1=${v1}`;
-}
 
 export interface WebhookSender {
   /** where events go (the app's /api/payments/webhook); nothing is sent while empty */
@@ -68,7 +62,8 @@ export function createWebhookSender(state: FakeState, secret: string, initialUrl
       const previous = state.events.get(sessionId);
       const payload = !previous || fresh ? completedEvent(state, sessionId) : previous.payload;
       // Signed anew at each delivery, as the real service does: the timestamp is the delivery's.
-      const event: SentEvent = { payload, signature: signPayload(payload, secret) };
+      // The SDK's own test signer makes the header, so it matches what its verifier expects.
+      const event: SentEvent = { payload, signature: Stripe.webhooks.generateTestHeaderString({ payload, secret }) };
       state.events.set(sessionId, event);
       if (!url) return 0;
       const status = await post(url, event);
