@@ -1,7 +1,6 @@
 import type { AuditEntry } from '@shared/schemas/admin';
 import { useAudit } from '../api/audit';
-
-const when = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+import { formatDateTime } from '@/lib/format-date';
 
 function describe(e: AuditEntry): string {
   if (e.action === 'role.change') return `role ${e.detail.from} → ${e.detail.to}`;
@@ -44,7 +43,7 @@ export function AuditTable() {
         <tbody>
           {data.entries.map((e) => (
             <tr key={e.id} className="border-b border-line last:border-0">
-              <td className="px-4 py-3 text-muted">{when.format(new Date(e.at))}</td>
+              <td className="px-4 py-3 text-muted">{formatDateTime(e.at)}</td>
               <td className="px-4 py-3">{e.actor?.name ?? '(removed)'}</td>
               <td className="px-4 py-3">{e.target ? `${e.target.name} <${e.target.email}>` : '(removed)'}</td>
               <td className="px-4 py-3">{describe(e)}</td>

@@ -4,8 +4,7 @@ import { ConfirmDialog } from '@/components/ui/confirm-dialog';
 import { TableScroll } from '@/components/ui/table-scroll';
 import { useMe } from '@/features/auth/api/session';
 import { useAdminUsers, useUpdateAdminUser } from '../api/users';
-
-const dateFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium' });
+import { formatDate } from '@/lib/format-date';
 
 const ROLES: Role[] = ['player', 'teacher', 'admin'];
 
@@ -106,7 +105,7 @@ export function UsersTable() {
                     <span className="text-reed-700 dark:text-reed-100">Active</span>
                   )}
                 </td>
-                <td className="px-4 py-3 text-muted">{dateFormat.format(new Date(u.createdAt))}</td>
+                <td className="px-4 py-3 text-muted">{formatDate(u.createdAt)}</td>
                 <td className="px-4 py-3">
                   {u.id === me?.id ? null : (
                     <button

@@ -2,8 +2,7 @@ import { formatPrice } from '@shared/schemas/books';
 import { Button } from '@/components/ui/button';
 import { FormMessage } from '@/components/ui/form-message';
 import { usePurchases, useRefundPurchase } from '../api/purchases';
-
-const when = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+import { formatDateTime } from '@/lib/format-date';
 
 /** Drill-book purchases for admins, with a refund button on each paid one. */
 export function PurchasesTable() {
@@ -41,7 +40,7 @@ export function PurchasesTable() {
           <tbody>
             {shown.map((p) => (
               <tr key={p.id} className="border-b border-line last:border-0">
-                <td className="px-4 py-3 text-muted">{p.paidAt ? when.format(new Date(p.paidAt)) : '–'}</td>
+                <td className="px-4 py-3 text-muted">{p.paidAt ? formatDateTime(p.paidAt) : '–'}</td>
                 <td className="px-4 py-3">{p.book.title}</td>
                 <td className="px-4 py-3">{`${p.player.name} <${p.player.email}>`}</td>
                 <td className="px-4 py-3 tabular-nums">{formatPrice(p.amountMinor, p.currency)}</td>

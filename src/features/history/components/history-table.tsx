@@ -4,8 +4,7 @@ import { type ColumnDef, flexRender, getCoreRowModel, type SortingState, useReac
 import { Link, useSearchParams } from 'react-router-dom';
 import { type TakeListParams, useTakes } from '../api/takes';
 import { TableScroll } from '@/components/ui/table-scroll';
-
-const when = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+import { formatDateTime } from '@/lib/format-date';
 
 const columns: ColumnDef<TakeSummary>[] = [
   {
@@ -13,7 +12,7 @@ const columns: ColumnDef<TakeSummary>[] = [
     header: 'Date',
     cell: ({ row }) => (
       <Link to={`/history/${row.original.id}`} className="font-semibold underline-offset-2 hover:underline">
-        {when.format(new Date(row.original.startedAt))}
+        {formatDateTime(row.original.startedAt)}
       </Link>
     ),
   },

@@ -1,13 +1,12 @@
 import { type FormEvent, useState } from 'react';
 import { FormMessage } from '@/components/ui/form-message';
 import { type MapFilters, useCalendar, useSetWeeklyGoal } from '../api/maps';
+import { formatDayMonth, formatLongDay } from '@/lib/format-date';
 
 const WEEKS = 8;
 const DAY_MS = 86_400_000;
 const DAY_NAMES = ['Mon', 'Tue', 'Wed', 'Thu', 'Fri', 'Sat', 'Sun'];
 const dayOf = (t: number) => new Date(t).toISOString().slice(0, 10);
-const short = new Intl.DateTimeFormat(undefined, { day: 'numeric', month: 'short', timeZone: 'UTC' });
-const long = new Intl.DateTimeFormat(undefined, { weekday: 'long', day: 'numeric', month: 'long', timeZone: 'UTC' });
 const mins = (m: number) => `${Math.round(m)} min`;
 /** The height of the busiest day's bar. */
 const BAR_PX = 40;
@@ -108,15 +107,15 @@ export function PracticeLog({ filters, ownGoal }: { filters: MapFilters; ownGoal
       <ol className="grid gap-2" aria-label="Minutes per week, newest first">
         {weeks.map((w) => {
           const met = goal !== null && w.total >= goal;
-          const label = `Week of ${short.format(w.start)}: ${mins(w.total)}${goal !== null ? ` of ${mins(goal)}` : ''}`;
+          const label = `Week of ${formatDayMonth(w.start)}: ${mins(w.total)}${goal !== null ? ` of ${mins(goal)}` : ''}`;
           return (
             <li key={w.start} className="grid items-center gap-x-4 gap-y-1 sm:grid-cols-[7rem_auto_1fr]">
-              <span className="text-caption font-semibold">Week of {short.format(w.start)}</span>
-              <ul className="flex items-end gap-1" aria-label={`Days of the week of ${short.format(w.start)}`}>
+              <span className="text-caption font-semibold">Week of {formatDayMonth(w.start)}</span>
+              <ul className="flex items-end gap-1" aria-label={`Days of the week of ${formatDayMonth(w.start)}`}>
                 {w.days.map((d, i) => {
                   const words = d.future
-                    ? `${long.format(d.t)}: still to come`
-                    : `${long.format(d.t)}: ${d.minutes > 0 ? `${mins(d.minutes)}, ${d.takes} ${d.takes === 1 ? 'take' : 'takes'}` : 'no practice'}`;
+                    ? `${formatLongDay(d.t)}: still to come`
+                    : `${formatLongDay(d.t)}: ${d.minutes > 0 ? `${mins(d.minutes)}, ${d.takes} ${d.takes === 1 ? 'take' : 'takes'}` : 'no practice'}`;
                   // In pixels: a percentage height inside a button does not resolve everywhere.
                   const h = d.minutes > 0 ? Math.max(3, Math.round((d.minutes / busiest) * BAR_PX)) : 0;
                   return (

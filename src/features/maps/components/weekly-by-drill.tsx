@@ -1,8 +1,8 @@
 import { TrendBars, trendDomain } from '@/components/charts/trend-bars';
 import { type MapFilters, useWeekly } from '../api/maps';
+import { formatDayMonth } from '@/lib/format-date';
 
-const short = new Intl.DateTimeFormat(undefined, { day: 'numeric', month: 'short', timeZone: 'UTC' });
-const weekLabel = (w: string) => `week of ${short.format(new Date(`${w}T00:00:00Z`))}`;
+const weekLabel = (w: string) => `week of ${formatDayMonth(new Date(`${w}T00:00:00Z`))}`;
 const pct = (v: number) => `${Math.round(v * 100)}%`;
 
 /**

@@ -3,9 +3,9 @@ import type { WeekFigures } from '@shared/schemas/maps';
 import { TrendBars, trendDomain } from '@/components/charts/trend-bars';
 import { useAssignmentWeekly } from '../api/assignments';
 import { pct } from './status-badge';
+import { formatDayMonth } from '@/lib/format-date';
 
-const short = new Intl.DateTimeFormat(undefined, { day: 'numeric', month: 'short', timeZone: 'UTC' });
-const weekLabel = (w: string) => `week of ${short.format(new Date(`${w}T00:00:00Z`))}`;
+const weekLabel = (w: string) => `week of ${formatDayMonth(new Date(`${w}T00:00:00Z`))}`;
 
 /** What counts towards an assignment, in words: the rule the server applies. */
 export function creditRule(a: Pick<Assignment, 'targetTempo' | 'targetAccuracy' | 'keys'>): string {

@@ -4,7 +4,7 @@ import { FormMessage } from '@/components/ui/form-message';
 import { TextField } from '@/components/ui/text-field';
 import { ApiError } from '@/lib/api-client';
 import { useCreateInvite, useInvites } from '../api/invites';
-import { dueFormat } from './status-badge';
+import { formatDue } from '@/lib/format-date';
 
 /** Invite a player by e-mail, and the invites still waiting for an answer. */
 export function InviteForm({ studioId }: { studioId: string }) {
@@ -45,8 +45,7 @@ export function InviteForm({ studioId }: { studioId: string }) {
       {err && !err.fields ? <FormMessage tone="error">{err.message}</FormMessage> : null}
       {pending.data && pending.data.invites.length > 0 ? (
         <p className="text-caption text-muted">
-          Waiting:{' '}
-          {pending.data.invites.map((i) => `${i.email} (until ${dueFormat.format(new Date(i.expiresAt))})`).join(', ')}
+          Waiting: {pending.data.invites.map((i) => `${i.email} (until ${formatDue(i.expiresAt)})`).join(', ')}
         </p>
       ) : null}
     </div>

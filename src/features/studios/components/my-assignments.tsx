@@ -1,7 +1,8 @@
 import { Link } from 'react-router-dom';
 import { practiceLink, useMyAssignments } from '../api/assignments';
 import { AssignmentTrend, creditRule } from './assignment-trend';
-import { dueFormat, pct, StatusBadge } from './status-badge';
+import { formatDue } from '@/lib/format-date';
+import { pct, StatusBadge } from './status-badge';
 
 /** A player's assignments, open and overdue first, each started in one click. */
 export function MyAssignments() {
@@ -28,8 +29,8 @@ export function MyAssignments() {
                 {a.title} <StatusBadge status={a.status ?? 'open'} />
               </p>
               <p className="text-caption text-muted">
-                {a.studioName} · due {dueFormat.format(new Date(a.dueAt))} · {a.targetTempo} bpm at{' '}
-                {pct(a.targetAccuracy)} · {a.keysMet.length}/{a.keys.length} {a.keys.length === 1 ? 'key' : 'keys'}
+                {a.studioName} · due {formatDue(a.dueAt)} · {a.targetTempo} bpm at {pct(a.targetAccuracy)} ·{' '}
+                {a.keysMet.length}/{a.keys.length} {a.keys.length === 1 ? 'key' : 'keys'}
               </p>
               {a.note ? <p className="mt-1 text-body">{a.note}</p> : null}
               <p className="mt-1 text-caption text-muted" data-testid="credit-rule">

@@ -1,8 +1,7 @@
 import { Link } from 'react-router-dom';
 import { Button } from '@/components/ui/button';
 import { useMarkNotificationsRead, useNotifications } from '../api/remarks';
-
-const when = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+import { formatDateTime } from '@/lib/format-date';
 
 /** What the user has been told: remarks, answers, new players, new assignments. */
 export function NotificationList() {
@@ -30,7 +29,7 @@ export function NotificationList() {
             <Link to={n.link} className="underline-offset-4 hover:underline">
               {n.text}
             </Link>{' '}
-            <span className="text-caption text-muted">{when.format(new Date(n.createdAt))}</span>
+            <span className="text-caption text-muted">{formatDateTime(n.createdAt)}</span>
           </li>
         ))}
       </ul>

@@ -2,9 +2,8 @@ import { Link } from 'react-router-dom';
 import { useStudioPlayer } from '../api/board';
 import { TableScroll } from '@/components/ui/table-scroll';
 import { AssignmentTrend, creditRule } from './assignment-trend';
-import { dueFormat, pct, StatusBadge } from './status-badge';
-
-const when = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+import { pct, StatusBadge } from './status-badge';
+import { formatDateTime, formatDue } from '@/lib/format-date';
 
 /** One player as their teacher reviews them: assignments, their takes, and their own views (read-only). */
 export function PlayerReview({ studioId, playerId }: { studioId: string; playerId: string }) {
@@ -38,8 +37,8 @@ export function PlayerReview({ studioId, playerId }: { studioId: string; playerI
           {data.assignments.map((a) => (
             <li key={a.id} className="grid gap-1 rounded-card border border-line bg-raised p-3">
               <span>
-                {a.status ? <StatusBadge status={a.status} /> : null} {a.title} · due{' '}
-                {dueFormat.format(new Date(a.dueAt))} · {a.keysMet.length}/{a.keys.length} keys
+                {a.status ? <StatusBadge status={a.status} /> : null} {a.title} · due {formatDue(a.dueAt)} ·{' '}
+                {a.keysMet.length}/{a.keys.length} keys
               </span>
               <span className="text-caption text-muted">{creditRule(a)}</span>
               <AssignmentTrend assignmentId={a.id} playerId={playerId} />
@@ -77,7 +76,7 @@ export function PlayerReview({ studioId, playerId }: { studioId: string; playerI
                 <tr key={t.id} className="border-t border-line">
                   <td className="whitespace-nowrap px-3 py-2">
                     <Link className="underline" to={`/takes/${t.id}`}>
-                      {when.format(new Date(t.startedAt))}
+                      {formatDateTime(t.startedAt)}
                     </Link>
                   </td>
                   <td className="whitespace-nowrap px-3 py-2">

@@ -4,8 +4,7 @@ import { type FormEvent, useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { FormMessage } from '@/components/ui/form-message';
 import { useCreateRemark } from '../api/remarks';
-
-const when = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+import { formatDateTime } from '@/lib/format-date';
 
 export const noteLabel = (notes: DrillNote[], i: number) => {
   const n = notes[i];
@@ -68,7 +67,7 @@ export function RemarkThread({
           data-note-index={r.noteIndex ?? undefined}
         >
           <p className="text-caption text-muted">
-            {r.author.name} · {when.format(new Date(r.createdAt))}
+            {r.author.name} · {formatDateTime(r.createdAt)}
             {r.noteIndex !== null ? (
               <span className="ml-2 font-semibold text-dusk-700 dark:text-dusk-100">
                 pinned to {noteLabel(notes, r.noteIndex)}
@@ -82,7 +81,7 @@ export function RemarkThread({
               .map((a) => (
                 <li key={a.id}>
                   <p className="text-caption text-muted">
-                    {a.author.name} · {when.format(new Date(a.createdAt))}
+                    {a.author.name} · {formatDateTime(a.createdAt)}
                   </p>
                   <p className="whitespace-pre-wrap">{a.body}</p>
                 </li>

@@ -16,5 +16,4 @@ export function StatusBadge({ status }: { status: AssignmentStatus }) {
   );
 }
 
-export const dueFormat = new Intl.DateTimeFormat(undefined, { weekday: 'short', day: 'numeric', month: 'short' });
 export const pct = (a: number | null | undefined) => (a === null || a === undefined ? '—' : `${Math.round(a * 100)}%`);

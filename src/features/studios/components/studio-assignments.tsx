@@ -1,6 +1,6 @@
 import { useBoard } from '../api/board';
 import { AssignmentTrend, creditRule } from './assignment-trend';
-import { dueFormat } from './status-badge';
+import { formatDue } from '@/lib/format-date';
 
 /** The studio's assignments for its teacher: what counts for each, and every player's weeks. */
 export function StudioAssignments({ studioId }: { studioId: string }) {
@@ -15,7 +15,7 @@ export function StudioAssignments({ studioId }: { studioId: string }) {
         {data.assignments.map((a) => (
           <li key={a.id} className="grid gap-2 rounded-card border border-line bg-raised p-4">
             <p className="font-bold">
-              {a.title} <span className="font-normal text-muted">· due {dueFormat.format(new Date(a.dueAt))}</span>
+              {a.title} <span className="font-normal text-muted">· due {formatDue(a.dueAt)}</span>
             </p>
             <p className="text-caption text-muted" data-testid="credit-rule">
               {creditRule(a)}

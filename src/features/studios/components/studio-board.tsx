@@ -2,9 +2,8 @@ import { Link } from 'react-router-dom';
 import { TrendBars, trendDomain } from '@/components/charts/trend-bars';
 import { TableScroll } from '@/components/ui/table-scroll';
 import { useBoard } from '../api/board';
-import { dueFormat, pct, StatusBadge } from './status-badge';
-
-const dayFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium' });
+import { pct, StatusBadge } from './status-badge';
+import { formatDate, formatDue } from '@/lib/format-date';
 
 /** The board's weeks count back from now in sevens of days, oldest first. */
 const WEEK_LABELS = ['5 weeks ago', '4 weeks ago', '3 weeks ago', '2 weeks ago', 'last week', 'the last 7 days'];
@@ -37,7 +36,7 @@ export function StudioBoard({ studioId }: { studioId: string }) {
             {data.assignments.map((a) => (
               <th scope="col" key={a.id} className="px-3 py-2 font-semibold">
                 <span className="block max-w-48">{a.title}</span>
-                <span className="font-normal">due {dueFormat.format(new Date(a.dueAt))}</span>
+                <span className="font-normal">due {formatDue(a.dueAt)}</span>
               </th>
             ))}
             <th scope="col" className="px-3 py-2">
@@ -65,7 +64,7 @@ export function StudioBoard({ studioId }: { studioId: string }) {
                 </td>
               ))}
               <td className="whitespace-nowrap px-3 py-2 text-muted">
-                {r.lastPracticeAt ? dayFormat.format(new Date(r.lastPracticeAt)) : 'Not yet'}
+                {r.lastPracticeAt ? formatDate(r.lastPracticeAt) : 'Not yet'}
               </td>
               <td className="whitespace-nowrap px-3 py-2">
                 <TrendBars

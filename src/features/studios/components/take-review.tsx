@@ -15,8 +15,7 @@ import { useTakeReplay } from '../hooks/use-take-replay';
 import { noteLabel, RemarkThread } from './remark-thread';
 import { pct } from './status-badge';
 import './take-review.css';
-
-const when = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+import { formatDateTime } from '@/lib/format-date';
 
 function drillOf(take: ReviewTake): Drill | null {
   try {
@@ -123,7 +122,7 @@ export function TakeReview({ takeId, viewerId }: { takeId: string; viewerId: str
           {take.pair} · {take.pattern} · {take.key}
         </h1>
         <p className="text-muted">
-          {when.format(new Date(take.startedAt))} · {take.tempo} bpm · accuracy {pct(take.accuracy)} ·{' '}
+          {formatDateTime(take.startedAt)} · {take.tempo} bpm · accuracy {pct(take.accuracy)} ·{' '}
           {Object.entries(counts)
             .map(([v, n]) => `${n} ${v}`)
             .join(', ')}
