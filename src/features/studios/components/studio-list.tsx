@@ -1,21 +1,21 @@
-import { type FormEvent, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { TextField } from '@/components/ui/text-field';
-import { ApiError } from '@/lib/api-client';
+import { useSchemaForm } from '@/components/form/use-schema-form';
+import { FormMessage } from '@/components/ui/form-message';
 import { useCreateStudio, useStudios } from '../api/studios';
 
 /** The studios I teach or belong to, and (for a teacher) a form to start one. */
 export function StudioList({ canCreate }: { canCreate: boolean }) {
   const { data, isPending, error } = useStudios();
   const create = useCreateStudio();
-  const [name, setName] = useState('');
-  const onSubmit = (e: FormEvent) => {
-    e.preventDefault();
-    create.mutate({ name }, { onSuccess: () => setName('') });
-  };
-  const fieldErrors = create.error instanceof ApiError ? create.error.fields?.name : undefined;
+  const form = useSchemaForm(() => import('@shared/schemas/studios').then((m) => m.CreateStudioInput), {
+    defaultValues: { name: '' },
+  });
+  const onSubmit = form.handleSubmit((input) =>
+    create.mutate(input, { onSuccess: () => form.reset({ name: '' }), onError: form.fromError }),
+  );
   return (
     <div className="grid gap-4">
       {isPending ? <p className="text-muted">Looking up your studios…</p> : null}
@@ -47,14 +47,14 @@ export function StudioList({ canCreate }: { canCreate: boolean }) {
           <form onSubmit={onSubmit} className="flex flex-wrap items-end gap-3" noValidate>
             <TextField
               label="New studio"
-              value={name}
-              onChange={(e) => setName(e.target.value)}
-              errors={fieldErrors}
+              errors={form.errorsOf('name')}
               placeholder="Tuesday combo"
+              {...form.register('name')}
             />
             <Button type="submit" disabled={create.isPending}>
               Start the studio
             </Button>
+            {form.formError ? <FormMessage tone="error">{form.formError}</FormMessage> : null}
           </form>
         </Card>
       ) : null}
