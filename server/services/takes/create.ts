@@ -1,4 +1,6 @@
+import { createHash } from 'node:crypto';
 import { type SQL, sql } from 'drizzle-orm';
+import { PgDialect } from 'drizzle-orm/pg-core';
 import type { DrillSpec, PlayedNote, ScoreOptions } from '../../../shared/engine';
 import type { InputKind } from '../../../shared/schemas/takes';
 import type { Db } from '../../db/client';
@@ -7,6 +9,8 @@ import { AppError } from '../../errors';
 import { tempoClimbStep } from '../practice/climb-tempo';
 import { takeDurationMs } from './duration';
 import { type ScoredTake, scoreRawTake } from './score-take';
+
+const dialect = new PgDialect();
 
 export interface CreateTakeArgs {
   playerId: string;
@@ -30,7 +34,14 @@ export interface CreateTakeArgs {
  */
 export async function createTake(db: Db, args: CreateTakeArgs): Promise<{ take: TakeRow; created: boolean }> {
   const scored = scoreRawTake(args);
-  const { rows } = await db.execute<StoredFigures>(takeStatement(args, scored));
+  const statement = takeStatement(args, scored);
+  const query = dialect.sqlToQuery(statement);
+  // A named statement: each connection parses and plans each of its few shapes once.
+  const { rows } = await db.$client.query<StoredFigures>({
+    name: `take-${createHash('sha1').update(query.sql).digest('hex').slice(0, 16)}`,
+    text: query.sql,
+    values: query.params,
+  });
   if (rows.length === 0) {
     // The id was taken (a retry, or another request with the same id): answer with what is stored.
     const row = await db.query.takes.findFirst({ where: (t, { eq }) => eq(t.id, args.id) });
