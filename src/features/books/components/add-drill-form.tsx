@@ -16,10 +16,10 @@ export function AddDrillForm({ bookId }: { bookId: string }) {
   const [cycle, setCycle] = useState<'' | KeyOrder>('chromatic');
   const [note, setNote] = useState('');
   const chosen = drillId || mine[0]?.id || '';
-  async function submit(e: FormEvent) {
+  function submit(e: FormEvent) {
     e.preventDefault();
-    await add.mutateAsync({ savedDrillId: chosen, note, keyCycle: cycle || null });
-    setNote('');
+    // A refusal shows under the form (add.error); the note stays for another try.
+    add.mutate({ savedDrillId: chosen, note, keyCycle: cycle || null }, { onSuccess: () => setNote('') });
   }
   if (saved.isPending) return <p className="text-muted">Loading your saved drills…</p>;
   if (mine.length === 0) {

@@ -20,17 +20,20 @@ export function BookDetailsForm({ book }: { book: Book }) {
   const fields = (update.error as ApiError | null)?.fields ?? {};
   const priceMinor = Math.round(Number(price.replace(',', '.')) * 100);
 
-  async function save(e: FormEvent) {
+  function save(e: FormEvent) {
     e.preventDefault();
     setSaved(false);
-    await update.mutateAsync({
-      title,
-      description,
-      coverColour: cover,
-      priceMinor: Number.isFinite(priceMinor) ? priceMinor : -1,
-      currency,
-    });
-    setSaved(true);
+    // A refusal shows on its fields (update.error); nothing typed is lost.
+    update.mutate(
+      {
+        title,
+        description,
+        coverColour: cover,
+        priceMinor: Number.isFinite(priceMinor) ? priceMinor : -1,
+        currency,
+      },
+      { onSuccess: () => setSaved(true) },
+    );
   }
   return (
     <form

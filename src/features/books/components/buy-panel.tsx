@@ -31,9 +31,9 @@ export function BuyPanel({
       </FormMessage>
     );
   }
-  async function buy() {
-    const { url } = await checkout.mutateAsync();
-    window.location.assign(url);
+  function buy() {
+    // A refusal (no checkout without PUBLIC_URL, a book already bought) shows as checkout.error.
+    checkout.mutate(undefined, { onSuccess: ({ url }) => window.location.assign(url) });
   }
   return (
     <div className="grid gap-3">
