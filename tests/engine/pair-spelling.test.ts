@@ -46,6 +46,26 @@ describe('spelling a pair as one unit (the examples of the rule)', () => {
     expect(movePair(['C', 'Ebm'], '3m')).toEqual(['Eb', 'F#m']);
   });
 
+  it('hands out a fresh answer each time: changing one does not change the next (answers are remembered)', () => {
+    const input = () => ({
+      a: { root: 'G#', quality: 'major' as const },
+      b: { root: 'F#', quality: 'major' as const },
+    });
+    const first = spellPairAsUnit(input());
+    first.a.root = 'X';
+    expect(spellPairAsUnit(input())).toEqual({
+      a: { root: 'Ab', quality: 'major' },
+      b: { root: 'Gb', quality: 'major' },
+    });
+    // a pair that stays as given is not tied to the caller's object either
+    const given = { a: { root: 'F', quality: 'major' as const }, b: { root: 'Eb', quality: 'major' as const } };
+    spellPairAsUnit(given);
+    given.a.root = 'Y';
+    expect(spellPairAsUnit({ a: { root: 'F', quality: 'major' }, b: { root: 'Eb', quality: 'major' } }).a.root).toBe(
+      'F',
+    );
+  });
+
   it('writes a concert whole step as a whole step (F#3-G#3 on trumpet: Ab3-Bb3; on tenor: Ab4-Bb4)', () => {
     const scale = { name: 'steps', subdivision: 'eighth' as const, source: 'scale' as const, degrees: [0, 1], step: 2 };
     for (const [instrument, want] of [

@@ -3,7 +3,7 @@ import { EngineError } from '../errors';
 import type { ChordFit, NoteRole, Quality, TriadPair } from '../types';
 import { CHORD_FAMILIES, familyOf } from './chord-families';
 import { type PairRoots, pairNotes, spellPairAsUnit } from './pair-spelling';
-import { allPairs, triadPair } from './pairs';
+import { allPairs, pairOf } from './pairs';
 import { chromaOf, spelledPc } from './spelling';
 import { QUALITY_SUFFIX } from './triads';
 
@@ -58,12 +58,29 @@ function notesOfPair(p: PairRoots): string[] {
 
 const hasDouble = (p: PairRoots) => [p.a.root, p.b.root, ...notesOfPair(p)].some((n) => Math.abs(altOf(n)) > 1);
 
-let listedPairs: TriadPair[] | null = null;
+/** A listed pair read once: its six notes as a bitmask of pitch classes (bit c for chroma c). */
+interface ListedPair {
+  pair: TriadPair;
+  mask: number;
+  /**
+   * Its spellings that can win, worked out the first time a chord's scale holds the pair: those
+   * whose keys before the chord's own are the best (the others lose whatever the chord).
+   */
+  spellings?: Spelling[];
+}
+
+let listedPairs: ListedPair[] | null = null;
 /** Every pair once, read only here (allPairs builds a fresh list on each call). */
-function everyPair(): TriadPair[] {
-  listedPairs ??= allPairs();
+function everyPair(): ListedPair[] {
+  listedPairs ??= allPairs().map((pair) => ({ pair, mask: maskOf(pair.hexatonic.map(chromaOf)) }));
   return listedPairs;
 }
+
+const maskOf = (chromas: Iterable<number>): number => {
+  let mask = 0;
+  for (const c of chromas) mask |= 1 << c;
+  return mask;
+};
 
 /** A name with a double sharp or flat moved to its plainer enharmonic (Bbb -> A). */
 function plain(name: string): string {
@@ -86,9 +103,12 @@ interface ReadChord {
   rootChroma: number;
   /** semitones above the root -> tonal interval, for each tone of the symbol */
   tones: Map<number, string>;
-  /** chroma -> the chord's own spelling of that tone, without double accidentals */
-  spelled: Map<number, string>;
+  /** by chroma: the chord's own spelling of that tone, without double accidentals */
+  spelled: Names;
 }
+
+/** Names by chroma (index 0..11), where a chord or scale has one. */
+type Names = Array<string | undefined>;
 
 function readChord(chord: string): ReadChord {
   if (typeof chord !== 'string' || chord.trim() === '') {
@@ -105,10 +125,10 @@ function readChord(chord: string): ReadChord {
     const st = mod12(Interval.semitones(ivl) ?? 0);
     if (!tones.has(st)) tones.set(st, ivl);
   }
-  const spelled = new Map<number, string>();
+  const spelled: Names = [];
   for (const n of parsed.notes) {
     const c = chromaOf(n);
-    if (!spelled.has(c)) spelled.set(c, plain(Note.get(n).pc));
+    spelled[c] ??= plain(Note.get(n).pc);
   }
   return { root, rootChroma, tones, spelled };
 }
@@ -116,10 +136,81 @@ function readChord(chord: string): ReadChord {
 interface UsableScale {
   name: string;
   order: number;
-  chromas: Set<number>;
+  /** the scale's pitch classes as a bitmask */
+  mask: number;
   hasFifth: boolean;
-  /** chroma -> the scale's spelling on the chord's root, without double accidentals */
-  spelled: Map<number, string>;
+  /** by chroma: the scale's spelling on the chord's root, without double accidentals */
+  spelled: Names;
+}
+
+/** One way to name a listed pair, with what its score needs worked out once. */
+interface Spelling {
+  roots: PairRoots;
+  notes: string[];
+  chromas: number[];
+  /** the score's keys that do not depend on the chord: before and after its two chord keys */
+  head: number[];
+  tail: number[];
+  /** the same pair, lower triad first, as handed out */
+  lowered?: TriadPair;
+}
+
+const rootIndex = (r: string) => (ROOT_ORDER.includes(r) ? ROOT_ORDER.indexOf(r) : ROOT_ORDER.length);
+
+/**
+ * The names a listed pair can take: each root under either of its plain names, spelled as a
+ * unit where that leaves a double sharp or flat.
+ */
+function spellingsOf(listed: ListedPair): Spelling[] {
+  if (listed.spellings) return listed.spellings;
+  const { pair } = listed;
+  const spellings: Spelling[] = [];
+  for (const a of namesOf(chromaOf(pair.a.root))) {
+    for (const b of namesOf(chromaOf(pair.b.root))) {
+      const raw = { a: { root: a, quality: pair.a.quality }, b: { root: b, quality: pair.b.quality } };
+      // Where a double sharp or flat appears, the pair as a unit is the way out.
+      const p = hasDouble(raw) ? spellPairAsUnit(raw) : raw;
+      const notes = notesOfPair(p);
+      const roots = [p.a.root, p.b.root];
+      const alts = [...notes, ...roots].map(altOf);
+      const rootAlts = roots.map(altOf);
+      spellings.push({
+        roots: p,
+        notes,
+        chromas: notes.map(chromaOf),
+        head: [
+          alts.some((x) => Math.abs(x) > 1) ? 1 : 0,
+          roots.filter((r) => AWKWARD.has(r)).length,
+          rootAlts[0] * rootAlts[1] < 0 ? 1 : 0,
+        ],
+        tail: [
+          notes.filter((n) => AWKWARD.has(n)).length,
+          notes.filter((n) => altOf(n) !== 0).length,
+          rootIndex(p.a.root),
+          rootIndex(p.b.root),
+        ],
+      });
+    }
+  }
+  const best = spellings.reduce((b, s) => (compare(s.head, b.head) < 0 ? s : b)).head;
+  listed.spellings = spellings.filter((s) => compare(s.head, best) === 0);
+  return listed.spellings;
+}
+
+/** Lexicographic order of two lists of keys of the same length (negative: x first). */
+function compare(x: number[], y: number[]): number {
+  for (let k = 0; k < x.length; k++) if (x[k] !== y[k]) return x[k] - y[k];
+  return 0;
+}
+
+/** Notes of a spelling that the given names spell otherwise; with `onlyNamed`, notes they leave out do not count. */
+function misspelt(s: Spelling, names: Names, onlyNamed: boolean): number {
+  let n = 0;
+  for (let i = 0; i < s.notes.length; i++) {
+    const own = names[s.chromas[i]];
+    if (own === undefined ? !onlyNamed : own !== s.notes[i]) n++;
+  }
+  return n;
 }
 
 /**
@@ -130,44 +221,22 @@ interface UsableScale {
  * more notes spelled as the scale does on the chord's root; fewer of those four names among all
  * six notes; fewer accidentals; roots earlier in C Db D Eb ... B.
  */
-function spellForChord(pair: TriadPair, chord: ReadChord, scale: UsableScale): PairRoots {
-  const candidates: PairRoots[] = [];
-  for (const a of namesOf(chromaOf(pair.a.root))) {
-    for (const b of namesOf(chromaOf(pair.b.root))) {
-      const raw = { a: { root: a, quality: pair.a.quality }, b: { root: b, quality: pair.b.quality } };
-      // Where a double sharp or flat appears, the pair as a unit is the way out.
-      candidates.push(hasDouble(raw) ? spellPairAsUnit(raw) : raw);
-    }
-  }
-  const score = (p: PairRoots): number[] => {
-    const notes = notesOfPair(p);
-    const roots = [p.a.root, p.b.root];
-    const alts = [...notes, ...roots].map(altOf);
-    const rootAlts = roots.map(altOf);
-    const rootIndex = (r: string) => (ROOT_ORDER.includes(r) ? ROOT_ORDER.indexOf(r) : ROOT_ORDER.length);
-    return [
-      alts.some((x) => Math.abs(x) > 1) ? 1 : 0,
-      roots.filter((r) => AWKWARD.has(r)).length,
-      rootAlts[0] * rootAlts[1] < 0 ? 1 : 0,
-      notes.filter((n) => {
-        const own = chord.spelled.get(chromaOf(n));
-        return own !== undefined && own !== n;
-      }).length,
-      notes.filter((n) => scale.spelled.get(chromaOf(n)) !== n).length,
-      notes.filter((n) => AWKWARD.has(n)).length,
-      notes.filter((n) => altOf(n) !== 0).length,
-      rootIndex(p.a.root),
-      rootIndex(p.b.root),
-    ];
-  };
+function spellForChord(listed: ListedPair, chord: ReadChord, scale: UsableScale): Spelling {
+  const candidates = spellingsOf(listed);
   let best = candidates[0];
-  let bestScore = score(best);
-  for (const c of candidates.slice(1)) {
-    const s = score(c);
-    const i = s.findIndex((v, k) => v !== bestScore[k]);
-    if (i >= 0 && s[i] < bestScore[i]) {
-      best = c;
-      bestScore = s;
+  if (candidates.length === 1) return best;
+  // The candidates left share their first keys: the chord's two decide, then the last ones.
+  let bestChord = misspelt(best, chord.spelled, true);
+  let bestScale = misspelt(best, scale.spelled, false);
+  for (let c = 1; c < candidates.length; c++) {
+    const s = candidates[c];
+    const byChord = misspelt(s, chord.spelled, true);
+    const byScale = misspelt(s, scale.spelled, false);
+    const order = byChord - bestChord || byScale - bestScale || compare(s.tail, best.tail);
+    if (order < 0) {
+      best = s;
+      bestChord = byChord;
+      bestScale = byScale;
     }
   }
   return best;
@@ -228,6 +297,39 @@ function copyFit(f: ChordFit): ChordFit {
   };
 }
 
+/** A scale on a spelled root as tonal reads it, once per root and scale name. */
+interface ScaleRead {
+  mask: number;
+  /** by chroma: the scale's spelling, without double accidentals */
+  spelled: Names;
+}
+
+const scaleCache = new Map<string, ScaleRead>();
+
+function scaleOn(root: string, name: string): ScaleRead {
+  const key = `${root} ${name}`;
+  let read = scaleCache.get(key);
+  if (!read) {
+    const notes = Scale.get(key).notes;
+    const spelled: Names = [];
+    for (const n of notes) spelled[chromaOf(n)] = plain(n);
+    read = { mask: maskOf(notes.map(chromaOf)), spelled };
+    scaleCache.set(key, read);
+  }
+  return read;
+}
+
+const holds = (mask: number, chroma: number) => (mask & (1 << chroma)) !== 0;
+
+/** The spelling as handed out: lower triad first, read as a pair. */
+function loweredPair(s: Spelling): TriadPair {
+  if (!s.lowered) {
+    const p = lowerFirst(s.roots);
+    s.lowered = pairOf(symbolOf(p.a), symbolOf(p.b));
+  }
+  return s.lowered;
+}
+
 function findFits(chord: string): ChordFit[] {
   const read = readChord(chord);
   const { root, rootChroma, tones } = read;
@@ -242,11 +344,9 @@ function findFits(chord: string): ChordFit[] {
 
   const scales: UsableScale[] = [];
   CHORD_FAMILIES[family].scales.forEach((name, order) => {
-    const notes = Scale.get(`${root} ${name}`).notes;
-    const chromas = new Set(notes.map(chromaOf));
-    if (!required.every((st) => chromas.has(mod12(rootChroma + st)))) return;
-    const spelled = new Map(notes.map((n) => [chromaOf(n), plain(n)] as const));
-    scales.push({ name, order, chromas, hasFifth: chromas.has(mod12(rootChroma + 7)), spelled });
+    const { mask, spelled } = scaleOn(root, name);
+    if (!required.every((st) => holds(mask, mod12(rootChroma + st)))) return;
+    scales.push({ name, order, mask, hasFifth: holds(mask, mod12(rootChroma + 7)), spelled });
   });
 
   const intervals = [...tones.values()].map((ivl) => Interval.get(ivl));
@@ -258,25 +358,30 @@ function findFits(chord: string): ChordFit[] {
   const guides = [...third, ...(seventh.length > 0 ? seventh : intervals.filter((i) => i.num === 6))].map((i) =>
     mod12(i.semitones ?? 0),
   );
+  const heldCount = (mask: number, sts: number[]) => sts.filter((st) => holds(mask, mod12(rootChroma + st))).length;
 
   const found: Candidate[] = [];
   for (const listed of everyPair()) {
-    const held = listed.hexatonic.map((pc) => mod12(chromaOf(pc) - rootChroma));
-    const holding = scales.filter((s) => listed.hexatonic.every((pc) => s.chromas.has(chromaOf(pc))));
-    if (holding.length === 0) continue;
-    const scale = holding[0];
-    const altered = dominant && holdsFifth && !holding.some((s) => s.hasFifth);
+    let scale: UsableScale | undefined;
+    let anyFifth = false;
+    for (const s of scales) {
+      if ((listed.mask & ~s.mask) !== 0) continue;
+      scale ??= s;
+      anyFifth ||= s.hasFifth;
+    }
+    if (!scale) continue;
+    const altered = dominant && holdsFifth && !anyFifth;
 
-    const spelled = lowerFirst(spellForChord(listed, read, scale));
-    const pair = triadPair(symbolOf(spelled.a), symbolOf(spelled.b));
+    const pair = loweredPair(spellForChord(listed, read, scale));
     const notes: string[] = [];
     const functions: string[] = [];
     const roles: NoteRole[] = [];
     for (const pc of pair.hexatonic) {
-      const st = mod12(chromaOf(pc) - rootChroma);
+      const c = chromaOf(pc);
+      const st = mod12(c - rootChroma);
       const degree = CHORD_DEGREE[tones.get(st) ?? ''];
       const fn = degree ?? OTHER_NOTE[st];
-      notes.push(read.spelled.get(chromaOf(pc)) ?? scale.spelled.get(chromaOf(pc)) ?? plain(pc));
+      notes.push(read.spelled[c] ?? scale.spelled[c] ?? plain(pc));
       functions.push(fn);
       roles.push(degree ? 'chord-tone' : TENSIONS.has(fn) ? 'tension' : 'other');
     }
@@ -286,10 +391,10 @@ function findFits(chord: string): ChordFit[] {
     found.push({
       fit: { pair, scale: scale.name, functions, altered, notes, roles },
       keys: [
-        -named.filter((st) => held.includes(st)).length,
+        -heldCount(listed.mask, named),
         named.length === 0 && altered ? 1 : 0,
         qualities.every((q) => q === 'major') && (wholeStep === 2 || wholeStep === 10) ? 0 : 1,
-        -guides.filter((st) => held.includes(st)).length,
+        -heldCount(listed.mask, guides),
         qualities.every((q) => q === 'major' || q === 'minor') ? 0 : 1,
         scale.order,
         mod12(chromaOf(pair.a.root) - rootChroma),

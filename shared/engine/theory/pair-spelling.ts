@@ -1,5 +1,6 @@
 import { Interval, Note } from 'tonal';
 import type { Quality } from '../types';
+import { spelledPc } from './spelling';
 import { QUALITY_SUFFIX } from './triads';
 
 /** A pair given by its two roots and qualities; roots are pitch-class names ("F#", "Eb"). */
@@ -27,42 +28,79 @@ const ROOT_ORDER = ['C', 'Db', 'D', 'Eb', 'E', 'F', 'F#', 'G', 'Ab', 'A', 'Bb', 
  * // ['F', 'A', 'C', 'Eb', 'G', 'Bb']
  */
 export function pairNotes(p: PairRoots): string[] {
-  const notes: string[] = [];
-  for (const t of [p.a, p.b]) {
-    for (const iv of TRIAD_INTERVALS[t.quality]) notes.push(Note.transpose(t.root, iv));
-  }
-  return notes;
+  return [...triadRead(p.a.root, p.a.quality).notes, ...triadRead(p.b.root, p.b.quality).notes];
 }
 
-/** Semitones past a single sharp or flat, over all six notes and both roots (Ebb counts 1, Fbbb 2). */
-function doubles(p: PairRoots): number {
-  let n = 0;
-  for (const name of [...pairNotes(p), p.a.root, p.b.root]) {
-    const alt = Math.abs(Note.get(name).alt);
-    if (alt > 1) n += alt - 1;
-  }
-  return n;
+/** A triad's three names and what the spelling rule counts in them, read with tonal once. */
+interface TriadRead {
+  notes: string[];
+  /** semitones past a single sharp or flat (Ebb counts 1, Fbbb 2) */
+  doubles: number;
+  /** how many of Cb, Fb, E#, B# */
+  awkward: number;
+  /** how many notes carry a sharp or flat */
+  accidentals: number;
 }
 
+const triadCache = new Map<string, TriadRead>();
+
+function triadRead(root: string, quality: Quality): TriadRead {
+  const key = `${root} ${quality}`;
+  let read = triadCache.get(key);
+  if (!read) {
+    const notes = TRIAD_INTERVALS[quality].map((iv) => Note.transpose(root, iv));
+    const alts = notes.map((n) => spelledPc(n).alt);
+    read = {
+      notes,
+      doubles: alts.reduce((sum, alt) => sum + doublesOf(alt), 0),
+      awkward: notes.filter((n) => AWKWARD.has(n)).length,
+      accidentals: alts.filter((a) => a !== 0).length,
+    };
+    triadCache.set(key, read);
+  }
+  return read;
+}
+
+function doublesOf(alt: number): number {
+  const a = Math.abs(alt);
+  return a > 1 ? a - 1 : 0;
+}
+
+/**
+ * In order: semitones past a single sharp or flat over all six notes and both roots; a unit or
+ * not; Cb, Fb, E#, B# among the roots, then among the notes; accidentals; a's root's place.
+ */
 function score(p: PairRoots, unit: boolean): number[] {
-  const notes = pairNotes(p);
-  const roots = [p.a.root, p.b.root];
-  const alts = notes.map((n) => Note.get(n).alt);
+  const a = triadRead(p.a.root, p.a.quality);
+  const b = triadRead(p.b.root, p.b.quality);
   const rootIndex = ROOT_ORDER.indexOf(p.a.root);
   return [
-    doubles(p),
+    a.doubles + b.doubles + doublesOf(spelledPc(p.a.root).alt) + doublesOf(spelledPc(p.b.root).alt),
     unit ? 0 : 1,
-    roots.filter((r) => AWKWARD.has(r)).length,
-    notes.filter((n) => AWKWARD.has(n)).length,
-    alts.filter((a) => a !== 0).length,
+    (AWKWARD.has(p.a.root) ? 1 : 0) + (AWKWARD.has(p.b.root) ? 1 : 0),
+    a.awkward + b.awkward,
+    a.accidentals + b.accidentals,
     rootIndex < 0 ? ROOT_ORDER.length : rootIndex,
   ];
 }
 
+const transposeCache = new Map<string, string>();
+
+/** Note.transpose, remembered: spelling tries the same few dozen names again and again. */
+function transposed(name: string, interval: string): string {
+  const key = `${name} ${interval}`;
+  let out = transposeCache.get(key);
+  if (out === undefined) {
+    out = Note.transpose(name, interval);
+    transposeCache.set(key, out);
+  }
+  return out;
+}
+
 function respell(p: PairRoots, aInterval: string, bInterval: string): PairRoots {
   return {
-    a: { ...p.a, root: aInterval === '1P' ? p.a.root : Note.transpose(p.a.root, aInterval) },
-    b: { ...p.b, root: bInterval === '1P' ? p.b.root : Note.transpose(p.b.root, bInterval) },
+    a: { ...p.a, root: aInterval === '1P' ? p.a.root : transposed(p.a.root, aInterval) },
+    b: { ...p.b, root: bInterval === '1P' ? p.b.root : transposed(p.b.root, bInterval) },
   };
 }
 
@@ -85,6 +123,19 @@ const SHIFTS = ['1P', '2d', '-2d'];
  * // { a: { root: 'Ab', quality: 'major' }, b: { root: 'Gb', quality: 'major' } }
  */
 export function spellPairAsUnit(p: PairRoots): PairRoots {
+  const key = `${p.a.root} ${p.a.quality}|${p.b.root} ${p.b.quality}`;
+  let best = unitCache.get(key);
+  if (!best) {
+    const found = spellPairUncached(p);
+    best = { a: { ...found.a }, b: { ...found.b } };
+    unitCache.set(key, best);
+  }
+  return { a: { ...best.a }, b: { ...best.b } };
+}
+
+const unitCache = new Map<string, PairRoots>();
+
+function spellPairUncached(p: PairRoots): PairRoots {
   let best = p;
   let bestScore = score(p, true);
   const consider = (c: PairRoots, unit: boolean) => {
