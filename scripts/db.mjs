@@ -130,9 +130,13 @@ export const SERVER_SETTINGS = {
   log_autovacuum_min_duration: '1s',
 };
 
-/** SERVER_SETTINGS as postgres command-line options. */
-export function serverOptions() {
-  return Object.entries(SERVER_SETTINGS)
+/** SERVER_SETTINGS as postgres command-line options, for the server's major version. */
+export function serverOptions(major = 15) {
+  const settings = { ...SERVER_SETTINGS };
+  // lz4 for WAL came in PostgreSQL 15 and for TOAST in 14; older servers compress WAL with pglz.
+  if (major < 15) settings.wal_compression = 'on';
+  if (major < 14) delete settings.default_toast_compression;
+  return Object.entries(settings)
     .map(([name, value]) => `-c ${name}=${value}`)
     .join(' ');
 }
@@ -197,7 +201,8 @@ export function ensure() {
   if (!isRunning(bin, dataDir)) {
     clearStalePid(dataDir);
     const sock = socketDir(dataDir);
-    const opts = `-p ${dbPort()} -k ${sock} -c listen_addresses=127.0.0.1 ${serverOptions()}`;
+    const major = Number(bin.split('/').at(-2)) || 15;
+    const opts = `-p ${dbPort()} -k ${sock} -c listen_addresses=127.0.0.1 ${serverOptions(major)}`;
     log(`starting PostgreSQL on 127.0.0.1:${dbPort()}`);
     const started = runPg(join(bin, 'pg_ctl'), [
       '-D',
