@@ -1,6 +1,6 @@
 import { type InstrumentId, instruments } from '@shared/engine';
 import type { PlayerSettings } from '@shared/schemas/settings';
-import { type FormEvent, useEffect, useState } from 'react';
+import { type FormEvent, useEffect, useRef, useState } from 'react';
 import { RangeFields } from '@/components/range/range-fields';
 import { Button } from '@/components/ui/button';
 import { ApiError } from '@/lib/api-client';
@@ -9,6 +9,15 @@ import { pitchFrame } from '../lib/pitch-frame';
 import { PitchLabel } from './pitch-label';
 
 const field = 'mt-1 rounded-md border border-line bg-surface px-2 py-1.5 text-body';
+
+/** The new settings, with every field the player changed from `was` kept as they left it. */
+export function keepEdits(draft: PlayerSettings, was: PlayerSettings, next: PlayerSettings): PlayerSettings {
+  const out: PlayerSettings = { ...next };
+  for (const key of Object.keys(draft) as Array<keyof PlayerSettings>) {
+    if (JSON.stringify(draft[key]) !== JSON.stringify(was[key])) Object.assign(out, { [key]: draft[key] });
+  }
+  return out;
+}
 
 /**
  * The settings every drill starts from, kept on the server: instrument, written-pitch input,
@@ -19,9 +28,14 @@ export function PracticeDefaults({ settings }: { settings: PlayerSettings }) {
   const [draft, setDraft] = useState(settings);
   const [useRange, setUseRange] = useState(settings.range !== null);
   const [done, setDone] = useState(false);
+  // The settings the form last started from: fresh settings (a latency just measured, another
+  // tab) replace only the fields the player has not changed, so no typing is lost.
+  const base = useRef(settings);
   useEffect(() => {
-    setDraft(settings);
-    setUseRange(settings.range !== null);
+    const was = base.current;
+    base.current = settings;
+    setDraft((d) => keepEdits(d, was, settings));
+    setUseRange((u) => (u === (was.range !== null) ? settings.range !== null : u));
   }, [settings]);
   const inst = instruments[draft.instrument];
   const frame = pitchFrame(draft.instrument);
