@@ -1,10 +1,9 @@
-import { type FormEvent, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { FormMessage } from '@/components/ui/form-message';
 import { TextField } from '@/components/ui/text-field';
-import { ApiError } from '@/lib/api-client';
+import { useSchemaForm } from '@/components/form/use-schema-form';
 import { useAcceptInvite, useInvitePreview, useInviteSignUp } from '../api/invites';
 
 /**
@@ -21,8 +20,9 @@ export function InvitePanel({
   const preview = useInvitePreview(token);
   const accept = useAcceptInvite(token);
   const signUp = useInviteSignUp(token, preview.data?.invite.studio.id ?? '');
-  const [name, setName] = useState('');
-  const [password, setPassword] = useState('');
+  const form = useSchemaForm(() => import('@shared/schemas/studios').then((m) => m.InviteSignUpInput), {
+    defaultValues: { name: '', password: '' },
+  });
 
   if (!token)
     return <FormMessage tone="error">This link is missing its token; open it from the e-mail again.</FormMessage>;
@@ -30,11 +30,7 @@ export function InvitePanel({
   if (preview.error) return <FormMessage tone="error">{preview.error.message}</FormMessage>;
   const { invite } = preview.data;
   const joined = accept.data?.studio.studioId;
-  const onSignUp = (e: FormEvent) => {
-    e.preventDefault();
-    signUp.mutate({ name, password });
-  };
-  const fields = signUp.error instanceof ApiError ? (signUp.error.fields ?? {}) : {};
+  const onSignUp = form.handleSubmit((input) => signUp.mutate(input, { onError: form.fromError }));
   const next = encodeURIComponent(`/invite?token=${token}`);
   return (
     <Card className="grid max-w-xl gap-4">
@@ -69,28 +65,19 @@ export function InvitePanel({
       ) : (
         <form onSubmit={onSignUp} className="grid gap-3" noValidate aria-label="Sign up and join">
           <TextField label="E-mail" value={invite.email} readOnly />
-          <TextField
-            label="Your name"
-            value={name}
-            onChange={(e) => setName(e.target.value)}
-            errors={fields.name}
-            autoComplete="name"
-          />
+          <TextField label="Your name" errors={form.errorsOf('name')} autoComplete="name" {...form.register('name')} />
           <TextField
             label="Choose a password"
             type="password"
-            value={password}
-            onChange={(e) => setPassword(e.target.value)}
-            errors={fields.password}
             autoComplete="new-password"
             hint="At least 8 characters"
+            errors={form.errorsOf('password')}
+            {...form.register('password')}
           />
           <Button type="submit" disabled={signUp.isPending}>
             Sign up and join
           </Button>
-          {signUp.error && !(signUp.error instanceof ApiError && signUp.error.fields) ? (
-            <FormMessage tone="error">{signUp.error.message}</FormMessage>
-          ) : null}
+          {form.formError ? <FormMessage tone="error">{form.formError}</FormMessage> : null}
         </form>
       )}
     </Card>
