@@ -11,5 +11,5 @@ export type { InstrumentClef, InstrumentEntry } from './instruments';
 export * from './files';
 export * from './scoring';
 export { takeToMidi } from './files/take-midi';
-export { notate } from './notation';
+export { notate, ottavaOctaves } from './notation';
 export { beatGroups, isCompound, quarterTempo } from './patterns/timing';

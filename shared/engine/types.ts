@@ -234,8 +234,11 @@ export interface LiveScorer {
 /** A clef a part is printed in; 'treble-8vb' reads an octave lower than written (guitar). */
 export type Clef = 'treble' | 'bass' | 'treble-8vb';
 
-/** An ottava line over a note: 8 under an 8va line (printed an octave lower than written), -8 under an 8vb line. */
-export type Ottava = 0 | 8 | -8;
+/**
+ * An ottava line over a note: 8 under an 8va line (printed an octave lower than written), -8
+ * under an 8vb line (an octave higher); 15 and -15 are the two-octave lines, 15ma and 15mb.
+ */
+export type Ottava = 0 | 8 | -8 | 15 | -15;
 
 /** One note or rest as printed: the one notation model the screen, print and MusicXML share. */
 export interface NotatedEvent {
@@ -252,7 +255,7 @@ export interface NotatedEvent {
   written?: string;
   /** the sign printed, null when none is printed */
   accidental: '#' | 'b' | 'n' | null;
-  /** 8: under an 8va line (printed an octave lower than written); -8: under an 8vb line */
+  /** 8: under an 8va line (printed an octave lower than written); -8: under an 8vb line; 15 and -15 likewise two octaves (15ma, 15mb) */
   ottava: Ottava;
   /** id of its beam group, unique in the measure */
   beam?: number;

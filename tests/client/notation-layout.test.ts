@@ -25,6 +25,12 @@ describe('what the staff prints for a note of the model', () => {
     expect(vexKey(printedOctave('C4', 0))).toBe('c/4');
   });
 
+  it('prints a note under a 15ma line two octaves lower, under 15mb two octaves higher (common practice)', () => {
+    expect(vexKey(printedOctave('C8', 15))).toBe('c/6');
+    expect(vexKey(printedOctave('Bb7', 15))).toBe('bb/5');
+    expect(vexKey(printedOctave('D0', -15))).toBe('d/2');
+  });
+
   it('counts diatonic steps from C0, so E4 sits a third above C4', () => {
     expect(diatonicStep(parseWritten('E4')) - diatonicStep(parseWritten('C4'))).toBe(2);
     expect(diatonicStep(parseWritten('Cb4'))).toBe(diatonicStep(parseWritten('C4')));

@@ -38,7 +38,10 @@ function ledgerLines(step: number, clef: keyof typeof STAFF_LINES): number {
   if (step < bottom) return Math.floor((bottom - step) / 2);
   return 0;
 }
-const printedStep = (e: NotatedEvent) => stepOf(e.written!) - (e.ottava === 8 ? 7 : e.ottava === -8 ? -7 : 0);
+// common practice: an 8va line prints the notes under it an octave lower than written, a 15ma
+// line two octaves lower; 8vb and 15mb print them higher
+const SHIFT_STEPS: Record<NotatedEvent['ottava'], number> = { 0: 0, 8: 7, [-8]: -7, 15: 14, [-15]: -14 };
+const printedStep = (e: NotatedEvent) => stepOf(e.written!) - SHIFT_STEPS[e.ottava];
 
 /** A hand-made drill of eighths (or any length) with the given concert names, for exact cases. */
 function handDrill(
@@ -299,6 +302,69 @@ describe('ottava lines', () => {
     for (const e of notes) expect(ledgerLines(printedStep(e), 'treble')).toBeLessThanOrEqual(4);
   });
 
+  it("puts the piano's top notes under a 15ma line, one line over the passage", () => {
+    // common practice: B7 and C8 need eight and nine ledger lines over the treble staff, still
+    // five under an 8va line, so only a two-octave line brings them within four
+    const drill = generateDrill({
+      pair: ['F', 'Eb'],
+      pattern: 'weave',
+      direction: 'up',
+      instrument: 'piano',
+      range: { low: 84, high: 108 },
+    });
+    const n = notate(drill);
+    const notes = n.measures.flatMap((m) => m.events.filter((e) => e.kind === 'note'));
+    expect(notes.some((e) => drill.notes[e.noteIndex!].midi >= 107)).toBe(true);
+    for (const e of notes) {
+      expect(ledgerLines(printedStep(e), n.staves[e.staff])).toBeLessThanOrEqual(4);
+      if (drill.notes[e.noteIndex!].midi >= 107) expect(e.ottava).toBe(15);
+      // a note reaches under a 15ma line only beside one that needs it (one line per passage)
+      if (e.ottava === 15) expect(ledgerLines(stepOf(e.written!), 'treble')).toBeGreaterThan(0);
+    }
+    expect(notes.some((e) => e.ottava === 15)).toBe(true);
+    expect(notes.every((e) => e.ottava !== -15 && e.ottava !== -8)).toBe(true);
+  });
+
+  it('keeps the smallest line: a run that tops out at A7 stays under 8va', () => {
+    // A7 needs eight ledger lines over the treble staff and four under an 8va line (common practice)
+    const n = notate(handDrill(['E7', 'F7', 'G7', 'A7', 'G7', 'F7', 'E7', 'D7'], { instrument: 'piano' }));
+    const notes = n.measures.flatMap((m) => m.events.filter((e) => e.kind === 'note'));
+    expect(notes.map((e) => e.ottava)).toEqual([8, 8, 8, 8, 8, 8, 8, 8]);
+  });
+
+  it('joins a passage that reaches C8 under one 15ma line rather than 8va broken by 15ma', () => {
+    const n = notate(handDrill(['D7', 'F7', 'A7', 'C8', 'A7', 'F7', 'D7', 'B6'], { instrument: 'piano' }));
+    const notes = n.measures.flatMap((m) => m.events.filter((e) => e.kind === 'note'));
+    expect(notes.map((e) => e.ottava)).toEqual([15, 15, 15, 15, 15, 15, 15, 15]);
+    for (const e of notes) expect(ledgerLines(printedStep(e), 'treble')).toBeLessThanOrEqual(4);
+  });
+
+  it('brings a piano drill down to A0 within four ledger lines with an 8vb line', () => {
+    // A0 needs six ledger lines under the bass staff, three over an 8vb line (common practice)
+    const drill = generateDrill({
+      pair: ['F', 'Eb'],
+      pattern: 'stack',
+      direction: 'down',
+      instrument: 'piano',
+      range: { low: 21, high: 48 },
+    });
+    const n = notate(drill);
+    const notes = n.measures.flatMap((m) => m.events.filter((e) => e.kind === 'note'));
+    expect(notes.some((e) => drill.notes[e.noteIndex!].midi <= 23)).toBe(true);
+    expect(notes.some((e) => e.ottava === -8)).toBe(true);
+    expect(notes.every((e) => e.ottava !== -15)).toBe(true);
+    for (const e of notes) expect(ledgerLines(printedStep(e), n.staves[e.staff])).toBeLessThanOrEqual(4);
+  });
+
+  it('marks 15mb where an 8vb line is not enough (a range far under the bass staff)', () => {
+    // D0 needs eight ledger lines under the bass staff, five under an 8vb line, one under 15mb
+    // (common practice)
+    const n = notate(handDrill(['D1', 'A0', 'D0', 'A0', 'D1'], { instrument: 'piano' }));
+    const notes = n.measures.flatMap((m) => m.events.filter((e) => e.kind === 'note'));
+    expect(notes.map((e) => e.ottava)).toEqual([-15, -15, -15, -15, -15]);
+    for (const e of notes) expect(ledgerLines(printedStep(e), 'bass')).toBeLessThanOrEqual(4);
+  });
+
   it('keeps measure numbers of a slice', () => {
     const drill = generateDrill({ pair: ['F', 'B'], pattern: 'four-three', direction: 'up', start: 57 });
     expect(notate(sliceDrill(drill, 2, 3)).measures.map((m) => m.number)).toEqual([2, 3]);
@@ -396,8 +462,9 @@ describe('notate over every preset, meter and instrument (property)', () => {
               seen.add(e.noteIndex!);
               expect(e.written).toBe(note.written);
               expect(m.number).toBe(note.measure);
-              // no note more than four ledger lines from its staff (the piano's B7 and C8 excepted)
-              if (note.midi < 107) expect(ledgerLines(printedStep(e), n.staves[s])).toBeLessThanOrEqual(4);
+              // no note more than four ledger lines from its staff (common practice), the piano's
+              // B7 and C8 included
+              expect(ledgerLines(printedStep(e), n.staves[s])).toBeLessThanOrEqual(4);
               // a reader applying the signs printed so far in the bar hears the written note
               const pos = printedStep(e);
               const alt = Note.get(e.written!).alt;

@@ -1,1 +1,2 @@
 export { notate } from './notate';
+export { ottavaOctaves } from './staff-position';

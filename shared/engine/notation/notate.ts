@@ -1,7 +1,7 @@
 import { instruments } from '../instruments';
 import { beatGroups, isCompound, measureLength } from '../patterns/timing';
 import type { Clef, Drill, Meter, NotatedEvent, NotatedMeasure, Notation, Ottava } from '../types';
-import { diatonicStep, ledgerLines, middleLine, staffNote } from './staff-position';
+import { diatonicStep, ledgerLines, middleLine, ottavaOctaves, staffNote } from './staff-position';
 
 /** Ticks per quarter note: eighths (12), triplet eighths (8), sixteenths (6), 32nds (3) are whole. */
 const TPQ = 24;
@@ -34,7 +34,8 @@ const toTicks = (quarters: number): number => Math.round(quarters * TPQ);
  *
  * Rules (common practice for printed exercises): piano reads a grand staff with notes below
  * middle C on the bass staff; no note sits more than four ledger lines from its staff (an
- * 8va or 8vb line takes it back; only the piano's B7 and C8 still need five); an accidental holds to the
+ * 8va or 8vb line takes it back, a 15ma or 15mb line where one octave is not enough, as for
+ * the piano's B7 and C8); an accidental holds to the
  * end of its bar on its staff and printed octave; beams group notes shorter than a quarter
  * within one beat and a triplet is one tuplet of three under one beam; rests sit on the beat
  * and fill every bar exactly, on every staff (a staff with nothing in a bar gets one rest as
@@ -337,7 +338,7 @@ function setStems(events: NotatedEvent[], clef: Clef, notes: Placed[]): void {
 }
 
 function shiftSteps(ottava: Ottava): number {
-  return ottava === 8 ? 7 : ottava === -8 ? -7 : 0;
+  return 7 * ottavaOctaves(ottava);
 }
 
 const SIGN: Record<number, '#' | 'b' | 'n'> = { 1: '#', [-1]: 'b', 0: 'n', 2: '#', [-2]: 'b' };
@@ -363,22 +364,27 @@ function printAccidentals(events: NotatedEvent[], notes: Placed[]): void {
 
 /**
  * Ottava shifts for one staff's notes in playing order. A note that needs more than four ledger
- * lines goes under an 8va (above) or 8vb (below) line; the line then reaches over neighbours that sit off the staff the same way and still
- * read within four ledger lines, and joins two lines a few notes apart, so it marks a passage
- * rather than a note here and there.
+ * lines goes under an 8va (above) or 8vb (below) line, or under a 15ma or 15mb line when one
+ * octave still leaves it more than four lines off (the piano's B7 and C8 on the treble staff).
+ * A line then reaches over neighbours that sit off the staff the same way and still read within
+ * four ledger lines, and joins two lines a few notes apart, so it marks a passage rather than a
+ * note here and there. A passage takes the smallest shift that keeps all of its notes within
+ * four ledger lines: one 15ma line over a run rather than an 8va line broken by a 15ma line,
+ * when every note of the run reads within four lines two octaves down (common practice).
  */
 export function ottavaShifts(steps: number[], clef: Clef): Ottava[] {
-  const k: number[] = steps.map((s) => {
-    const lines = ledgerLines(s, clef);
-    // one octave is the most the model marks: the piano's top B7 and C8 still read with five
-    if (lines > MAX_LEDGER) return 1;
-    if (lines < -MAX_LEDGER) return -1;
-    return 0;
-  });
+  // shifts are counted in octaves here: 1 = 8va, 2 = 15ma, negative below the staff
   const fits = (i: number, o: number) => {
     const l = ledgerLines(steps[i] - 7 * o, clef);
     return l <= MAX_LEDGER && l >= -MAX_LEDGER;
   };
+  const k: number[] = steps.map((s, i) => {
+    const lines = ledgerLines(s, clef);
+    if (lines <= MAX_LEDGER && lines >= -MAX_LEDGER) return 0;
+    // the smallest line that brings the note back; two octaves is the most the model marks
+    const side = Math.sign(lines);
+    return fits(i, side) ? side : 2 * side;
+  });
   // reach over neighbours off the staff on the same side
   for (let pass = 0; pass < 2; pass++) {
     for (let i = 0; i < k.length; i++) {
@@ -394,20 +400,40 @@ export function ottavaShifts(steps: number[], clef: Clef): Ottava[] {
       }
     }
   }
-  // join lines of the same direction a few notes apart
+  // join lines of the same direction a few notes apart, with the smaller shift when it serves
   const GAP = 3;
   let lastEnd = -1;
   for (let i = 0; i < k.length; i++) {
     if (k[i] === 0) continue;
     if (lastEnd >= 0 && i - lastEnd - 1 > 0 && i - lastEnd - 1 <= GAP && Math.sign(k[lastEnd]) === Math.sign(k[i])) {
-      const o = k[i];
-      let ok = true;
-      for (let j = lastEnd + 1; j < i; j++) if (!fits(j, o)) ok = false;
-      if (ok) for (let j = lastEnd + 1; j < i; j++) k[j] = o;
+      const sizes = [Math.min(Math.abs(k[lastEnd]), Math.abs(k[i])), Math.max(Math.abs(k[lastEnd]), Math.abs(k[i]))];
+      const o = sizes
+        .map((size) => size * Math.sign(k[i]))
+        .find((c) => {
+          for (let j = lastEnd + 1; j < i; j++) if (!fits(j, c)) return false;
+          return true;
+        });
+      if (o !== undefined) for (let j = lastEnd + 1; j < i; j++) k[j] = o;
     }
     lastEnd = i;
   }
-  return k.map((o) => (o === 1 ? 8 : o === -1 ? -8 : 0));
+  // one line per passage: a run on one side takes the largest shift any of its notes needs,
+  // when all of them still read within four ledger lines under it
+  for (let i = 0; i < k.length; ) {
+    if (k[i] === 0) {
+      i++;
+      continue;
+    }
+    let j = i;
+    while (j < k.length && k[j] !== 0 && Math.sign(k[j]) === Math.sign(k[i])) j++;
+    const run = k.slice(i, j);
+    const most = run.reduce((m, o) => (Math.abs(o) > Math.abs(m) ? o : m), run[0]);
+    let all = true;
+    for (let x = i; x < j; x++) if (!fits(x, most)) all = false;
+    if (all) for (let x = i; x < j; x++) k[x] = most;
+    i = j;
+  }
+  return k.map((o): Ottava => (o >= 2 ? 15 : o === 1 ? 8 : o === -1 ? -8 : o <= -2 ? -15 : 0));
 }
 
 /** A rest between two notes under the same ottava line on its staff stays under it. */

@@ -1,5 +1,5 @@
 import { Note } from 'tonal';
-import type { Clef } from '../types';
+import type { Clef, Ottava } from '../types';
 
 const LETTERS = 'CDEFGAB';
 
@@ -68,4 +68,16 @@ export function ledgerLines(step: number, clef: Clef): number {
  */
 export function middleLine(clef: Clef): number {
   return LINES[clef].middle;
+}
+
+/**
+ * How many octaves an ottava line moves the notes under it on the page: 1 for 8va, 2 for 15ma,
+ * negative for the lines below the staff (8vb, 15mb), which print notes higher than written.
+ *
+ * @example
+ * ottavaOctaves(15) // 2: a C8 under a 15ma line is printed as C6
+ * ottavaOctaves(-8) // -1
+ */
+export function ottavaOctaves(ottava: Ottava): number {
+  return Math.sign(ottava) * (Math.abs(ottava) === 15 ? 2 : Math.abs(ottava) === 8 ? 1 : 0);
 }

@@ -2,7 +2,7 @@
  * Where the lanes' contents go on a drawn line: a tag over each cell, ottava lines over the
  * notes the model puts under one, chord symbols over the events they start on.
  */
-import type { Drill, Notation } from '@shared/engine';
+import type { Drill, Notation, Ottava } from '@shared/engine';
 import type { Stave } from 'vexflow/core';
 import { drawCellTag, drawChordSymbol, drawOttava } from './lanes';
 import type { SystemPlan } from './layout';
@@ -62,14 +62,14 @@ export function placeOttavaLines(
       const o = j < onStaff.length ? onStaff[j].event.ottava : 0;
       const prev = start >= 0 ? onStaff[start].event.ottava : 0;
       if (start >= 0 && o !== prev) {
-        const kind = prev as 8 | -8;
+        const kind = prev as Exclude<Ottava, 0>;
         const last = onStaff[j - 1];
         const next = nextEventOnStaff(notation, plan.measures[plan.measures.length - 1], s);
         const closes = j < onStaff.length || !next || next.ottava !== kind;
         drawOttava(
           lanes,
           { x0: onStaff[start].note.getNoteHeadBeginX() - 2, x1: last.note.getNoteHeadEndX() + 4 },
-          ottavaY(onStaff.slice(start, j), kind, kind === 8 ? layout.ottavaUp[s] : layout.ottavaDown[s]),
+          ottavaY(onStaff.slice(start, j), kind > 0, kind > 0 ? layout.ottavaUp[s] : layout.ottavaDown[s]),
           kind,
           closes,
         );
@@ -118,10 +118,10 @@ function nextEventOnStaff(notation: Notation, measureIndex: number, staff: numbe
  * How high an ottava line sits: just clear of the notes under it (their stems, beams and
  * triplet brackets) and of the staff, never farther out than the lane kept for it on the line.
  */
-function ottavaY(run: DrawnEvent[], kind: 8 | -8, lane: number): number {
+function ottavaY(run: DrawnEvent[], above: boolean, lane: number): number {
   const stave = run[0].note.getStave();
   if (!stave) return lane;
-  if (kind === 8) {
+  if (above) {
     let top = stave.getYForLine(0) - 20;
     for (const { note, event } of run) {
       const { topY, baseY } = note.getStemExtents();

@@ -2,6 +2,7 @@
  * What is drawn in lanes beside the staff rather than on it: ottava lines, the a/b tag over
  * each cell, and chord symbols. Plain SVG, placed from the geometry of the drawn notes.
  */
+import type { Ottava } from '@shared/engine';
 import { svgEl } from './svg';
 
 export interface Span {
@@ -9,18 +10,23 @@ export interface Span {
   x1: number;
 }
 
+/** The sign at the start of an ottava line (common practice): one octave 8va/8vb, two 15ma/15mb. */
+const OTTAVA_LABEL: Record<Exclude<Ottava, 0>, string> = { 8: '8va', [-8]: '8vb', 15: '15ma', [-15]: '15mb' };
+
 /**
- * An ottava line: "8va" (or "8vb") at the start, a dashed line to the last note under it, and a
- * short hook toward the staff where the passage ends (none when it runs on to the next line).
+ * An ottava line: "8va", "8vb", "15ma" or "15mb" at the start, a dashed line to the last note
+ * under it, and a short hook toward the staff where the passage ends (none when it runs on to
+ * the next line).
  */
-export function drawOttava(parent: Element, span: Span, y: number, kind: 8 | -8, closes: boolean): void {
-  const g = svgEl(parent, 'g', { class: 'sf-ottava', 'data-ottava': kind === 8 ? '8va' : '8vb' });
-  const label = kind === 8 ? '8va' : '8vb';
+export function drawOttava(parent: Element, span: Span, y: number, kind: Exclude<Ottava, 0>, closes: boolean): void {
+  const label = OTTAVA_LABEL[kind];
+  const g = svgEl(parent, 'g', { class: 'sf-ottava', 'data-ottava': label });
   svgEl(g, 'text', { x: span.x0, y: y + 4, class: 'sf-ottava-text' }, label);
-  const lineStart = span.x0 + 22;
+  // the two-digit sign is wider: the dashes start after it
+  const lineStart = span.x0 + (label.length > 3 ? 28 : 22);
   const end = Math.max(lineStart + 6, span.x1);
   svgEl(g, 'line', { x1: lineStart, y1: y, x2: end, y2: y, class: 'sf-ottava-line' });
-  if (closes) svgEl(g, 'line', { x1: end, y1: y, x2: end, y2: y + (kind === 8 ? 7 : -7), class: 'sf-ottava-hook' });
+  if (closes) svgEl(g, 'line', { x1: end, y1: y, x2: end, y2: y + (kind > 0 ? 7 : -7), class: 'sf-ottava-hook' });
 }
 
 /**

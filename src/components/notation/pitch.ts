@@ -1,4 +1,4 @@
-import type { Clef } from '@shared/engine';
+import { type Clef, type Ottava, ottavaOctaves } from '@shared/engine';
 
 const NOTE_RE = /^([A-Ga-g])(#{1,2}|b{1,2})?(-?\d+)$/;
 const LETTERS = 'CDEFGAB';
@@ -16,10 +16,13 @@ export function parseWritten(written: string | undefined): SpelledPitch {
   return { letter: m[1].toUpperCase(), accidental: m[2] ?? '', octave: Number(m[3]) };
 }
 
-/** The octave a note is printed in: an 8va line prints it an octave lower than written, 8vb higher. */
-export function printedOctave(written: string | undefined, ottava: 0 | 8 | -8): SpelledPitch {
+/**
+ * The octave a note is printed in: an 8va line prints it an octave lower than written, a 15ma
+ * line two octaves lower; 8vb and 15mb print it higher by as much.
+ */
+export function printedOctave(written: string | undefined, ottava: Ottava): SpelledPitch {
   const p = parseWritten(written);
-  return { ...p, octave: p.octave - Math.sign(ottava) };
+  return { ...p, octave: p.octave - ottavaOctaves(ottava) };
 }
 
 /** Diatonic steps from C0 ("E4" -> 30), as printed. */

@@ -100,15 +100,16 @@ export interface SystemLayout {
   chordY: number;
   cellY: number;
   marksY: number;
-  /** per staff: y of an 8va line above it and an 8vb line below it */
+  /** per staff: y of an 8va or 15ma line above it and an 8vb or 15mb line below it */
   ottavaUp: number[];
   ottavaDown: number[];
   bottom: number;
 }
 
-const hasOttava = (notation: Notation, plan: SystemPlan, staff: number, kind: 8 | -8) =>
+/** Whether a staff on this line has notes under an ottava line above it (8va, 15ma) or below it (8vb, 15mb). */
+const hasOttava = (notation: Notation, plan: SystemPlan, staff: number, side: 1 | -1) =>
   plan.measures.some((mi) =>
-    notation.measures[mi].events.some((e) => e.staff === staff && e.kind === 'note' && e.ottava === kind),
+    notation.measures[mi].events.some((e) => e.staff === staff && e.kind === 'note' && Math.sign(e.ottava) === side),
   );
 
 export function layoutSystem(
@@ -129,8 +130,8 @@ export function layoutSystem(
   let chordY = 0;
   let prevBottom = 0;
   notation.staves.forEach((_clef, s) => {
-    const up = hasOttava(notation, plan, s, 8) ? 20 : 0;
-    const down = hasOttava(notation, plan, s, -8) ? 20 : 0;
+    const up = hasOttava(notation, plan, s, 1) ? 20 : 0;
+    const down = hasOttava(notation, plan, s, -1) ? 20 : 0;
     // Room over the staff: the notes' own reach, and at least the measure number's.
     const above = Math.max(reaches[s].above, s === 0 ? 16 : 0);
     let topLine: number;
