@@ -250,6 +250,26 @@ describe('the drills page in Chromium', () => {
     expect(browser.errors).toEqual([]);
   });
 
+  it('says why weave cannot be written in 7/8 (the message names both) and draws no staff', async () => {
+    const { page } = browser;
+    const spec = { pair: ['G', 'Db'], pattern: 'weave', direction: 'down', instrument: 'guitar', meter: [7, 8] };
+    await page.goto(`${server.url}/drills?spec=${encodeURIComponent(JSON.stringify(spec))}`, {
+      waitUntil: 'networkidle',
+    });
+    const problem = page.getByTestId('drill-problem');
+    await problem.waitFor();
+    const text = (await problem.textContent()) ?? '';
+    expect(text).toMatch(/Weave/);
+    expect(text).toMatch(/triplets/);
+    expect(text).toMatch(/7\/8/);
+    expect(await page.getByTestId('drill-staff').count()).toBe(0);
+    // Choosing a meter triplets fill draws the drill.
+    await page.getByLabel('Meter').selectOption('6/8');
+    await page.getByTestId('drill-staff').waitFor();
+    expect(await problem.count()).toBe(0);
+    expect(browser.errors).toEqual([]);
+  });
+
   it('prints the key cycle: 12 staves in written pitch, then a PDF', async () => {
     const { page } = browser;
     await page.goto(`${server.url}/drills?spec=${encodeURIComponent(JSON.stringify(EXPECTED_SPEC))}&order=chromatic`, {
