@@ -32,7 +32,20 @@ describe('the progression editor on the drills page, in Chromium', () => {
 
   it('plays the drill through a starting progression, a pair for each chord', async () => {
     const { page } = browser;
-    await page.getByLabel('Play the pattern through a progression, a pair for each chord').check();
+    const toggle = page.getByLabel('Play the pattern through a progression, a pair for each chord');
+    const pairFields = page.getByRole('textbox', { name: /^Triad [ab]$/ });
+    const padChord = page.getByRole('textbox', { name: 'Chord (for the pad)' });
+    expect(await pairFields.count()).toBe(2);
+    await toggle.check();
+    // the progression sets the pairs and the pad: the single pair and the pad's chord stand aside
+    await page.getByTestId('progression-sets-pair').waitFor();
+    expect(await pairFields.count()).toBe(0);
+    expect(await padChord.count()).toBe(0);
+    await toggle.uncheck();
+    await expect.poll(() => pairFields.count()).toBe(2);
+    expect(await padChord.count()).toBe(1);
+    expect(await page.getByTestId('progression-sets-pair').count()).toBe(0);
+    await toggle.check();
     await page.getByLabel('Start from').selectOption('blues');
     const chords = page.getByTestId('progression-chord');
     // F7 Bb7 F7 (two bars) Bb7 (two bars) F7 D7 Gm7 C7 F7 C7: a chord held over a bar line is one change

@@ -50,6 +50,8 @@ export function DrillSettings({
   savedPatterns: CustomPattern[];
 }) {
   const range = draft.range ?? instruments[draft.instrument].drillRange;
+  // Over a progression each chord brings its own pair and the pad plays the changes.
+  const progression = draft.changes !== null;
   const patternOptions = [
     ...PRESET_IDS.map((id) => ({ value: id, label: presets[id].name })),
     ...savedPatterns.map((p) => ({ value: `saved:${p.id}`, label: `${p.name}${p.mine ? '' : ` — ${p.owner.name}`}` })),
@@ -60,23 +62,30 @@ export function DrillSettings({
       <h2 id="settings-heading" className="text-lead font-bold">
         The drill
       </h2>
-      <div className="grid items-start gap-3 sm:grid-cols-2">
-        <TextField
-          className="min-w-0"
-          label="Triad a"
-          value={draft.pair[0]}
-          errors={pick(fields, 'pair.0')}
-          onChange={(e) => update({ pair: [e.target.value, draft.pair[1]] })}
-        />
-        <TextField
-          className="min-w-0"
-          label="Triad b"
-          value={draft.pair[1]}
-          errors={pick(fields, 'pair.1')}
-          onChange={(e) => update({ pair: [draft.pair[0], e.target.value] })}
-        />
-      </div>
-      {fields.pair ? (
+      {progression ? (
+        <p className="text-caption text-muted" data-testid="progression-sets-pair">
+          The progression sets the pair for each chord, and the pad plays its chords. Turn the progression off to choose
+          one pair and a chord for the pad.
+        </p>
+      ) : (
+        <div className="grid items-start gap-3 sm:grid-cols-2">
+          <TextField
+            className="min-w-0"
+            label="Triad a"
+            value={draft.pair[0]}
+            errors={pick(fields, 'pair.0')}
+            onChange={(e) => update({ pair: [e.target.value, draft.pair[1]] })}
+          />
+          <TextField
+            className="min-w-0"
+            label="Triad b"
+            value={draft.pair[1]}
+            errors={pick(fields, 'pair.1')}
+            onChange={(e) => update({ pair: [draft.pair[0], e.target.value] })}
+          />
+        </div>
+      )}
+      {fields.pair && !progression ? (
         <p
           role="alert"
           className="text-caption font-semibold text-ember-700 dark:text-ember-100"
@@ -150,14 +159,16 @@ export function DrillSettings({
           ]}
           onChange={(e) => update({ order: e.target.value as Draft['order'] })}
         />
-        <TextField
-          className="min-w-0"
-          label="Chord (for the pad)"
-          value={draft.chord}
-          errors={pick(fields, 'chord')}
-          placeholder="none"
-          onChange={(e) => update({ chord: e.target.value })}
-        />
+        {progression ? null : (
+          <TextField
+            className="min-w-0"
+            label="Chord (for the pad)"
+            value={draft.chord}
+            errors={pick(fields, 'chord')}
+            placeholder="none"
+            onChange={(e) => update({ chord: e.target.value })}
+          />
+        )}
       </div>
       {fields.start ? (
         <p role="alert" className="text-caption font-semibold text-ember-700 dark:text-ember-100">
