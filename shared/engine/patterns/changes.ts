@@ -15,8 +15,8 @@ import type {
   PatternDef,
   TriadCellDef,
 } from '../types';
-import { type Ladders, runCells } from './cells';
-import { cellsToFit, laddersFor } from './generate';
+import type { Ladders } from './cells';
+import { defaultStart, laddersFor, snapStart, startLadder } from './generate';
 import type { Ladder } from './ladder';
 import { checkDirection, resolveInstrument, resolveMeter, resolvePattern, resolveRange, resolveTempo } from './spec';
 import { checkMeterFits, measureLength, measuresFor, noteLength, tidy } from './timing';
@@ -265,40 +265,6 @@ function nearestFit(
   return null;
 }
 
-/** The first triad of the drill's first cell (a for every preset). */
-function firstLadder(def: PatternDef, ladders: Ladders): Ladder {
-  return def.source === 'triads' && def.cells[0].triad === 'b' ? ladders.b : ladders.a;
-}
-
-/** The lowest (up) or highest (down) tone of the first triad from which the first a and b cells fit. */
-function defaultStart(def: PatternDef, ladders: Ladders, spec: FilledDrillSpec, descending: boolean): number {
-  const lad = firstLadder(def, ladders);
-  const need = cellsToFit(def);
-  const { low, high } = spec.range;
-  const step = descending ? -1 : 1;
-  const edge = descending ? high : low;
-  const first = lad.indexOf[edge] >= 0 ? lad.indexOf[edge] : descending ? lad.below[edge] : lad.above[edge];
-  for (let i = first; i >= 0 && i < lad.midi.length; i += step) {
-    const start = lad.midi[i];
-    if (start < low || start > high) break;
-    const notes = runCells(def, ladders, { start, range: spec.range, descending, maxCells: need });
-    if (notes.length > 0 && notes[notes.length - 1].cell === need - 1) return start;
-  }
-  throw new EngineError(
-    `The range ${low}-${high} is too narrow for this pattern on ${spec.pair[0]}/${spec.pair[1]}: widen it.`,
-  );
-}
-
-function snapStart(start: number, lad: Ladder, descending: boolean): number {
-  if (!Number.isInteger(start) || start < 0 || start > 127) {
-    throw new EngineError('The start note is a MIDI note number from 0 to 127.');
-  }
-  if (lad.indexOf[start] >= 0) return start;
-  const m = lad.midi[descending ? lad.below[start] : lad.above[start]];
-  if (m === undefined) throw new EngineError('No tone of the first triad lies that way from the start note.');
-  return m;
-}
-
 /**
  * Generates a drill over a progression (spec.changes, spec.choruses times): the line runs on
  * through every chord in that chord's pair, each chord starting a new cell that enters above
@@ -346,7 +312,7 @@ export function generateChangesDrill(spec: DrillSpec): Drill {
   const start =
     spec.start === undefined
       ? defaultStart(def, firstLadders, filled, descending)
-      : snapStart(spec.start, firstLadder(def, firstLadders), descending);
+      : snapStart(spec.start, startLadder(def, firstLadders), descending);
   filled.start = start;
 
   const notes: DrillNote[] = [];

@@ -33,7 +33,7 @@ export function laddersFor(pair: TriadPair, transposition: number): Ladders {
 }
 
 /** The triad whose tones the drill starts on: the first cell's (a for every preset). */
-function startLadder(def: PatternDef, ladders: Ladders): Ladder {
+export function startLadder(def: PatternDef, ladders: Ladders): Ladder {
   return def.source === 'triads' && def.cells[0].triad === 'b' ? ladders.b : ladders.a;
 }
 
@@ -50,7 +50,7 @@ export function cellsToFit(def: PatternDef): number {
   return Math.max(firstA, firstB) + 1;
 }
 
-function defaultStart(def: PatternDef, ladders: Ladders, spec: FilledDrillSpec, descending: boolean): number {
+export function defaultStart(def: PatternDef, ladders: Ladders, spec: FilledDrillSpec, descending: boolean): number {
   const lad = startLadder(def, ladders);
   const need = cellsToFit(def);
   const { low, high } = spec.range;
@@ -70,7 +70,7 @@ function defaultStart(def: PatternDef, ladders: Ladders, spec: FilledDrillSpec, 
 }
 
 /** Moves a start that is not a tone of the first triad to the next one in the drill's direction. */
-function snapStart(start: number, lad: Ladder, descending: boolean): number {
+export function snapStart(start: number, lad: Ladder, descending: boolean): number {
   if (!Number.isInteger(start) || start < 0 || start > 127) {
     throw new EngineError('The start note is a MIDI note number from 0 to 127.');
   }
