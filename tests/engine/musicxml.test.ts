@@ -54,6 +54,26 @@ function read(xml: string) {
 const midiOf = (p: NonNullable<XmlNote['pitch']>) =>
   (Number(p.octave) + 1) * 12 + (Note.chroma(p.step) ?? 0) + Number(p.alter ?? 0);
 
+/** A piano drill whose top notes, B7 and C8, need a two-octave line. */
+const PIANO_TO_C8: DrillSpec = {
+  pair: ['F', 'Eb'],
+  pattern: 'weave',
+  direction: 'up-down',
+  instrument: 'piano',
+  range: { low: 72, high: 108 },
+};
+
+// fast-xml-parser's document-order form: each node is { tag: children, ':@': attributes }
+type OrderedNode = Record<string, unknown>;
+const childrenOf = (nodes: OrderedNode[], tag: string): OrderedNode[] =>
+  nodes.filter((n) => tag in n).flatMap((n) => n[tag] as OrderedNode[]);
+const attrsOf = (node: OrderedNode): Attr =>
+  Object.fromEntries(Object.entries((node[':@'] ?? {}) as Attr).map(([k, v]) => [k.replace(/^@_/, ''), String(v)]));
+const textOf = (nodes: OrderedNode[], tag: string): string | undefined => {
+  const text = childrenOf(nodes, tag).find((n) => '#text' in n)?.['#text'];
+  return text === undefined ? undefined : String(text);
+};
+
 const SPECS: [string, DrillSpec][] = [
   ['piano, weave up-down, default range', { pair: ['F', 'Eb'], pattern: 'weave', direction: 'up-down' }],
   [
@@ -208,6 +228,60 @@ describe('drillToMusicXml, read back by fast-xml-parser', () => {
     expect(types.filter((t) => t === 'stop')).toHaveLength(types.filter((t) => t !== 'stop').length);
   });
 
+  it('marks the top of a piano drill reaching C8 with a two-octave <octave-shift> and prints it two octaves down', () => {
+    const drill = generateDrill(PIANO_TO_C8);
+    expect(Math.max(...drill.notes.map((n) => n.midi))).toBe(108);
+    const xml = drillToMusicXml(drill);
+    // read in document order, so each note is seen under the octave shift that precedes it
+    const ordered = new XMLParser({ ignoreAttributes: false, preserveOrder: true }).parse(xml) as OrderedNode[];
+    const measures = childrenOf(childrenOf(childrenOf(ordered, 'score-partwise'), 'part'), 'measure');
+    const active = new Map<string, { type: string; size: number }>();
+    const shifts: Attr[] = [];
+    let underTwo = 0;
+    for (const node of measures) {
+      if ('direction' in node) {
+        const shift = childrenOf(childrenOf([node], 'direction'), 'direction-type').find((t) => 'octave-shift' in t);
+        if (!shift) continue;
+        const attrs = attrsOf(shift);
+        shifts.push(attrs);
+        if (attrs.type === 'stop') active.delete(attrs.number);
+        else active.set(attrs.number, { type: attrs.type, size: Number(attrs.size) });
+      }
+      if ('note' in node) {
+        const note = childrenOf([node], 'note');
+        const pitch = childrenOf(note, 'pitch');
+        if (pitch.length === 0) continue;
+        const staff = Number(textOf(note, 'staff') ?? 1);
+        const step = textOf(pitch, 'step')!;
+        const octave = Number(textOf(pitch, 'octave'));
+        // MusicXML 4.0: <pitch> is the note as written; an octave-shift of type "down" and size 8
+        // or 15 shows it one or two octaves below, "up" above
+        const shift = active.get(String(staff));
+        const octaves = shift ? (shift.size === 15 ? 2 : 1) * (shift.type === 'down' ? 1 : -1) : 0;
+        const shown = (octave - octaves) * 7 + 'CDEFGAB'.indexOf(step);
+        if (shift?.size === 15) {
+          underTwo++;
+          expect(shift.type).toBe('down');
+        }
+        // common practice: no note more than four ledger lines off its staff, as printed
+        // (treble lines E4 to F5, bass G2 to A3)
+        const [bottom, top] = staff === 1 ? [30, 38] : [18, 26];
+        const lines =
+          shown > top ? Math.floor((shown - top) / 2) : shown < bottom ? Math.floor((bottom - shown) / 2) : 0;
+        expect(lines, `${step}${octave}`).toBeLessThanOrEqual(4);
+      }
+    }
+    expect(underTwo).toBeGreaterThan(0);
+    // MusicXML 4.0: size 15 for a two-octave line, its stop with the same size
+    expect(shifts.some((x) => x.size === '15' && x.type === 'down')).toBe(true);
+    expect(shifts.filter((x) => x.size === '15' && x.type === 'stop')).toHaveLength(
+      shifts.filter((x) => x.size === '15' && x.type !== 'stop').length,
+    );
+    // the model agrees: the notes under the two-octave line are its 15ma notes
+    const fifteen = notate(drill).measures.flatMap((m) => m.events.filter((e) => e.kind === 'note' && e.ottava === 15));
+    expect(fifteen).toHaveLength(underTwo);
+  });
+
   it("keeps a slice's measure numbers", () => {
     const drill = generateDrill({ pair: ['F', 'B'], pattern: 'four-three', direction: 'up', start: 57 });
     const { measures } = read(drillToMusicXml(sliceDrill(drill, 2, 3)));
@@ -256,6 +330,7 @@ describe.skipIf(!hasLilyPond)('musicxml2ly (LilyPond) imports the files with no 
 
   const LILY: [string, DrillSpec][] = [
     ...SPECS.slice(0, 5),
+    ['piano up to C8', PIANO_TO_C8],
     [
       'alto sax over changes',
       {
@@ -283,6 +358,8 @@ describe.skipIf(!hasLilyPond)('musicxml2ly (LilyPond) imports the files with no 
     // the engraver got the notes: LilyPond pitches and a final bar line
     const ly = readFileSync(out, 'utf8');
     expect(ly).toContain('\\bar "|."');
+    // LilyPond writes a two-octave line up as \ottava #2 (its own notation for 15ma)
+    if (label === 'piano up to C8') expect(ly).toContain('\\ottava #2');
   });
 });
 

@@ -302,7 +302,7 @@ describe('ottava lines', () => {
     for (const e of notes) expect(ledgerLines(printedStep(e), 'treble')).toBeLessThanOrEqual(4);
   });
 
-  it("puts the piano's top notes under a 15ma line, one line over the passage", () => {
+  it("puts the piano's top notes under a 15ma line and keeps 8va for the rest", () => {
     // common practice: B7 and C8 need eight and nine ledger lines over the treble staff, still
     // five under an 8va line, so only a two-octave line brings them within four
     const drill = generateDrill({
@@ -318,10 +318,10 @@ describe('ottava lines', () => {
     for (const e of notes) {
       expect(ledgerLines(printedStep(e), n.staves[e.staff])).toBeLessThanOrEqual(4);
       if (drill.notes[e.noteIndex!].midi >= 107) expect(e.ottava).toBe(15);
-      // a note reaches under a 15ma line only beside one that needs it (one line per passage)
-      if (e.ottava === 15) expect(ledgerLines(stepOf(e.written!), 'treble')).toBeGreaterThan(0);
+      // a 15ma line covers only notes that one octave's shift would not serve on their own
+      if (e.ottava === 15) expect(ledgerLines(stepOf(e.written!), 'treble')).toBeGreaterThan(4);
     }
-    expect(notes.some((e) => e.ottava === 15)).toBe(true);
+    expect(notes.some((e) => e.ottava === 8)).toBe(true);
     expect(notes.every((e) => e.ottava !== -15 && e.ottava !== -8)).toBe(true);
   });
 
@@ -332,10 +332,18 @@ describe('ottava lines', () => {
     expect(notes.map((e) => e.ottava)).toEqual([8, 8, 8, 8, 8, 8, 8, 8]);
   });
 
-  it('joins a passage that reaches C8 under one 15ma line rather than 8va broken by 15ma', () => {
+  it('uses 15ma only for the note an 8va line does not serve', () => {
+    // C8 needs nine ledger lines over the treble staff, five under 8va, two under 15ma (common practice)
     const n = notate(handDrill(['D7', 'F7', 'A7', 'C8', 'A7', 'F7', 'D7', 'B6'], { instrument: 'piano' }));
     const notes = n.measures.flatMap((m) => m.events.filter((e) => e.kind === 'note'));
-    expect(notes.map((e) => e.ottava)).toEqual([15, 15, 15, 15, 15, 15, 15, 15]);
+    expect(notes.map((e) => e.ottava)).toEqual([8, 8, 8, 15, 8, 8, 8, 8]);
+    for (const e of notes) expect(ledgerLines(printedStep(e), 'treble')).toBeLessThanOrEqual(4);
+  });
+
+  it('runs one 15ma line between two notes that need it rather than breaking it for 8va', () => {
+    const n = notate(handDrill(['A7', 'Bb7', 'G7', 'Eb7', 'F7', 'A7', 'C8', 'A7'], { instrument: 'piano' }));
+    const notes = n.measures.flatMap((m) => m.events.filter((e) => e.kind === 'note'));
+    expect(notes.map((e) => e.ottava)).toEqual([8, 15, 15, 15, 15, 15, 15, 8]);
     for (const e of notes) expect(ledgerLines(printedStep(e), 'treble')).toBeLessThanOrEqual(4);
   });
 
@@ -361,7 +369,7 @@ describe('ottava lines', () => {
     // (common practice)
     const n = notate(handDrill(['D1', 'A0', 'D0', 'A0', 'D1'], { instrument: 'piano' }));
     const notes = n.measures.flatMap((m) => m.events.filter((e) => e.kind === 'note'));
-    expect(notes.map((e) => e.ottava)).toEqual([-15, -15, -15, -15, -15]);
+    expect(notes.map((e) => e.ottava)).toEqual([-8, -8, -15, -8, -8]);
     for (const e of notes) expect(ledgerLines(printedStep(e), 'bass')).toBeLessThanOrEqual(4);
   });
 

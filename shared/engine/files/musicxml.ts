@@ -103,6 +103,9 @@ interface StaffState {
   ottava: number;
 }
 
+/** MusicXML 4.0 octave-shift size: 8 for one octave, 15 for two. */
+const shiftSize = (ottava: number): number => (Math.abs(ottava) === 15 ? 15 : 8);
+
 /**
  * One staff's events in a measure as <note>s, with the beams, tuplets, stems, accidentals and
  * octave-shift directions notate() decided.
@@ -128,9 +131,10 @@ function staffXml(
   for (const e of events) {
     out.push(before(e));
     if (e.ottava !== state.ottava && e.ottava !== 0) {
-      // MusicXML 4.0: type "down" for an 8va line (shown an octave below the pitch), "up" for 8vb
+      // MusicXML 4.0: type "down" for an 8va or 15ma line (shown one or two octaves below the
+      // pitch), "up" for 8vb or 15mb; size 8 or 15. <pitch> stays the note as written.
       out.push(
-        `<direction><direction-type><octave-shift type="${e.ottava > 0 ? 'down' : 'up'}" size="8" number="${voice}"/>` +
+        `<direction><direction-type><octave-shift type="${e.ottava > 0 ? 'down' : 'up'}" size="${shiftSize(e.ottava)}" number="${voice}"/>` +
           `</direction-type>${staffTag}</direction>`,
       );
       state.ottava = e.ottava;
@@ -175,7 +179,7 @@ function staffXml(
     out.push(`<note>${body}</note>`);
     if (state.ottava !== 0 && isLastOfStaff(e)) {
       out.push(
-        `<direction><direction-type><octave-shift type="stop" size="8" number="${voice}"/></direction-type>${staffTag}</direction>`,
+        `<direction><direction-type><octave-shift type="stop" size="${shiftSize(state.ottava)}" number="${voice}"/></direction-type>${staffTag}</direction>`,
       );
       state.ottava = 0;
     }

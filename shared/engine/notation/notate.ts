@@ -364,13 +364,15 @@ function printAccidentals(events: NotatedEvent[], notes: Placed[]): void {
 
 /**
  * Ottava shifts for one staff's notes in playing order. A note that needs more than four ledger
- * lines goes under an 8va (above) or 8vb (below) line, or under a 15ma or 15mb line when one
- * octave still leaves it more than four lines off (the piano's B7 and C8 on the treble staff).
- * A line then reaches over neighbours that sit off the staff the same way and still read within
- * four ledger lines, and joins two lines a few notes apart, so it marks a passage rather than a
- * note here and there. A passage takes the smallest shift that keeps all of its notes within
- * four ledger lines: one 15ma line over a run rather than an 8va line broken by a 15ma line,
- * when every note of the run reads within four lines two octaves down (common practice).
+ * lines goes under an 8va (above) or 8vb (below) line; the line then reaches over neighbours
+ * that sit off the staff the same way and still read within four ledger lines, and joins two
+ * lines a few notes apart, so it marks a passage rather than a note here and there.
+ *
+ * Inside such a passage, a note that one octave still leaves more than four ledger lines off
+ * (the piano's B7 and C8 on the treble staff) goes under a 15ma (or 15mb) line, and that line
+ * runs on to the next such note when every note between reads within four ledger lines two
+ * octaves off; the rest of the passage keeps the one-octave line, the smallest shift that
+ * serves it (common practice: a two-octave line only where one octave is not enough).
  */
 export function ottavaShifts(steps: number[], clef: Clef): Ottava[] {
   // shifts are counted in octaves here: 1 = 8va, 2 = 15ma, negative below the staff
@@ -378,13 +380,11 @@ export function ottavaShifts(steps: number[], clef: Clef): Ottava[] {
     const l = ledgerLines(steps[i] - 7 * o, clef);
     return l <= MAX_LEDGER && l >= -MAX_LEDGER;
   };
-  const k: number[] = steps.map((s, i) => {
+  const side = steps.map((s) => {
     const lines = ledgerLines(s, clef);
-    if (lines <= MAX_LEDGER && lines >= -MAX_LEDGER) return 0;
-    // the smallest line that brings the note back; two octaves is the most the model marks
-    const side = Math.sign(lines);
-    return fits(i, side) ? side : 2 * side;
+    return lines > MAX_LEDGER ? 1 : lines < -MAX_LEDGER ? -1 : 0;
   });
+  const k = [...side];
   // reach over neighbours off the staff on the same side
   for (let pass = 0; pass < 2; pass++) {
     for (let i = 0; i < k.length; i++) {
@@ -400,40 +400,35 @@ export function ottavaShifts(steps: number[], clef: Clef): Ottava[] {
       }
     }
   }
-  // join lines of the same direction a few notes apart, with the smaller shift when it serves
+  // join lines of the same direction a few notes apart
   const GAP = 3;
   let lastEnd = -1;
   for (let i = 0; i < k.length; i++) {
     if (k[i] === 0) continue;
     if (lastEnd >= 0 && i - lastEnd - 1 > 0 && i - lastEnd - 1 <= GAP && Math.sign(k[lastEnd]) === Math.sign(k[i])) {
-      const sizes = [Math.min(Math.abs(k[lastEnd]), Math.abs(k[i])), Math.max(Math.abs(k[lastEnd]), Math.abs(k[i]))];
-      const o = sizes
-        .map((size) => size * Math.sign(k[i]))
-        .find((c) => {
-          for (let j = lastEnd + 1; j < i; j++) if (!fits(j, c)) return false;
-          return true;
-        });
-      if (o !== undefined) for (let j = lastEnd + 1; j < i; j++) k[j] = o;
+      const o = k[i];
+      let ok = true;
+      for (let j = lastEnd + 1; j < i; j++) if (!fits(j, o)) ok = false;
+      if (ok) for (let j = lastEnd + 1; j < i; j++) k[j] = o;
     }
     lastEnd = i;
   }
-  // one line per passage: a run on one side takes the largest shift any of its notes needs,
-  // when all of them still read within four ledger lines under it
-  for (let i = 0; i < k.length; ) {
-    if (k[i] === 0) {
-      i++;
-      continue;
+  // two octaves where one is not enough, run on between such notes of one passage
+  let lastTwice = -1;
+  for (let i = 0; i < k.length; i++) {
+    if (side[i] === 0 || fits(i, side[i])) continue;
+    const o = 2 * side[i];
+    k[i] = o;
+    if (lastTwice >= 0 && k[lastTwice] === o) {
+      const between = Array.from({ length: i - lastTwice - 1 }, (_, x) => lastTwice + 1 + x);
+      const inPassage = between.every((j) => Math.sign(k[j]) === side[i] && fits(j, o));
+      // a short dip, or notes that all need a line themselves, stay under the one line
+      const joins = between.length <= GAP || between.every((j) => side[j] === side[i]);
+      if (inPassage && joins) for (const j of between) k[j] = o;
     }
-    let j = i;
-    while (j < k.length && k[j] !== 0 && Math.sign(k[j]) === Math.sign(k[i])) j++;
-    const run = k.slice(i, j);
-    const most = run.reduce((m, o) => (Math.abs(o) > Math.abs(m) ? o : m), run[0]);
-    let all = true;
-    for (let x = i; x < j; x++) if (!fits(x, most)) all = false;
-    if (all) for (let x = i; x < j; x++) k[x] = most;
-    i = j;
+    lastTwice = i;
   }
-  return k.map((o): Ottava => (o >= 2 ? 15 : o === 1 ? 8 : o === -1 ? -8 : o <= -2 ? -15 : 0));
+  return k.map((o): Ottava => (o === 2 ? 15 : o === 1 ? 8 : o === -1 ? -8 : o === -2 ? -15 : 0));
 }
 
 /** A rest between two notes under the same ottava line on its staff stays under it. */
