@@ -384,7 +384,7 @@ export function ottavaShifts(steps: number[], clef: Clef): Ottava[] {
     const lines = ledgerLines(s, clef);
     return lines > MAX_LEDGER ? 1 : lines < -MAX_LEDGER ? -1 : 0;
   });
-  const k = [...side];
+  const k: number[] = [...side];
   // reach over neighbours off the staff on the same side
   for (let pass = 0; pass < 2; pass++) {
     for (let i = 0; i < k.length; i++) {
