@@ -34,6 +34,15 @@ const HIGH_WIND: DrillSpec = {
   range: { low: 67, high: 96 },
 };
 
+/** Piano up to C8: B7 and C8 sit under a 15ma line, the rest of the high passage under 8va. */
+const PIANO_TO_C8: DrillSpec = {
+  pair: ['F', 'Eb'],
+  pattern: 'weave',
+  direction: 'up-down',
+  instrument: 'piano',
+  range: { low: 84, high: 108 },
+};
+
 const drillsUrl = (base: string, spec: DrillSpec) =>
   `${base}/drills?${new URLSearchParams({ spec: JSON.stringify(spec), order: 'chromatic' }).toString()}`;
 
@@ -122,6 +131,46 @@ describe('the staff drawn from the notation model, in Chromium', () => {
     expect(await staff.locator('[data-ottava="8va"]').count()).toBeGreaterThan(0);
     expect(await staff.locator('.sf-ottava-text').first().textContent()).toBe('8va');
     await b.page.screenshot({ path: join(shots, 'drills-wind-8va-desktop.png'), fullPage: true });
+  });
+
+  it('puts B7 and C8 under a 15ma line, their noteheads two octaves below the written pitch', async () => {
+    const drill = await openDrill(PIANO_TO_C8);
+    const events = notate(drill).measures.flatMap((m) => m.events.filter((e) => e.kind === 'note'));
+    const staff = b.page.getByTestId('drill-staff');
+    expect(await staff.locator('[data-ottava="15ma"]').count()).toBeGreaterThan(0);
+    expect(await staff.locator('[data-ottava="8va"]').count()).toBeGreaterThan(0);
+    const labels = await staff.locator('.sf-ottava-text').allTextContents();
+    expect(labels).toContain('15ma');
+    // each drawn notehead's centre, by note index
+    const centre = async (i: number) =>
+      staff
+        .locator(`[data-index="${i}"] .vf-notehead`)
+        .first()
+        .evaluate((el) => {
+          const r = el.getBoundingClientRect();
+          return r.top + r.height / 2;
+        });
+    // C8 under 15ma and C7 under 8va both print as C6 (common practice), so on one line of
+    // music their noteheads sit at one height; an A7 under 15ma sits an octave lower on the
+    // page than an A7 under 8va
+    const c8 = events.find((e) => e.written === 'C8' && e.ottava === 15)!;
+    const c7 = events.find((e) => e.written === 'C7' && e.ottava === 8 && e.noteIndex! > c8.noteIndex!)!;
+    expect(c8 && c7).toBeTruthy();
+    expect(Math.abs((await centre(c8.noteIndex!)) - (await centre(c7.noteIndex!)))).toBeLessThan(1);
+    const a7Two = events.find((e) => e.written === 'A7' && e.ottava === 15)!;
+    const a7One = events.find((e) => e.written === 'A7' && e.ottava === 8 && e.noteIndex! > a7Two.noteIndex!)!;
+    // an octave is seven staff steps, three and a half line spaces (VexFlow draws a space 10 units high)
+    const scale = await staff
+      .locator('.vf-stave')
+      .first()
+      .evaluate((el) => {
+        const svg = el.closest('svg')!;
+        return svg.getBoundingClientRect().width / svg.viewBox.baseVal.width;
+      });
+    const drop = (await centre(a7Two.noteIndex!)) - (await centre(a7One.noteIndex!));
+    expect(drop / scale).toBeCloseTo(35, 0);
+    await b.page.screenshot({ path: join(shots, 'drills-piano-15ma-desktop.png'), fullPage: true });
+    expect(b.errors).toEqual([]);
   });
 
   it('writes the chord symbols of a drill over changes above the staff', async () => {
