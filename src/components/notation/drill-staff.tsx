@@ -1,4 +1,4 @@
-import { type Drill, instruments, type Notation, notate } from '@shared/engine';
+import { type Drill, instruments, type Notation, notate, writtenPair } from '@shared/engine';
 import { useEffect, useLayoutEffect, useMemo, useRef, useState } from 'react';
 import { type NoteMark, markFromClass } from './marks';
 import type { MarkLayer } from './marks';
@@ -152,9 +152,15 @@ export function DrillStaff({
 
   const inst = instruments[drill.spec.instrument];
   const staves = notation instanceof Error ? [] : notation.staves;
+  // the pair as written (spelled as a unit, as the notes are), with the concert pair beside it
+  const { pair } = drill.spec;
+  const pairName =
+    inst.transposition % 12 === 0
+      ? pair.join(' / ')
+      : `${writtenPair([pair[0], pair[1]], drill.spec.instrument).join(' / ')} (concert ${pair.join(' / ')})`;
   const name =
     label ??
-    `${drill.spec.pair.join(' / ')} for ${inst.label}, written pitch${staves.length > 1 ? ' on a grand staff' : ''}, ${drill.notes.length} notes in ${drill.measures} measures`;
+    `${pairName} for ${inst.label}, written pitch${staves.length > 1 ? ' on a grand staff' : ''}, ${drill.notes.length} notes in ${drill.measures} measures`;
   return (
     <figure
       className={`sf-staff m-0 grid min-w-0 gap-2 ${faded ? 'sf-faded' : ''}`}

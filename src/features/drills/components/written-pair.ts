@@ -1,20 +1,13 @@
-import { type Drill, instruments, parseTriad, ROOT_SPELLINGS } from '@shared/engine';
-import { Note } from 'tonal';
+import { type Drill, instruments, writtenPair } from '@shared/engine';
 
-const SUFFIX = { major: '', minor: 'm', diminished: 'dim', augmented: 'aug' } as const;
-
-/** A triad symbol as the instrument reads it (D on alto sax is written B), as ENGINE.md spells it. */
-export function writtenTriad(symbol: string, transposition: number): string {
-  const t = parseTriad(symbol);
-  const chroma = Note.chroma(t.root) ?? 0;
-  return ROOT_SPELLINGS[(((chroma - transposition) % 12) + 12) % 12] + SUFFIX[t.quality];
-}
-
-/** "D / C", with "(written B / A)" for a transposing instrument. */
+/**
+ * "D / C", with "(written B / A)" for a transposing instrument: the written pair spelled as one
+ * unit by the engine, so it names the same notes the staff writes (concert F# / E on trumpet
+ * reads Ab / Gb).
+ */
 export function pairTitle(drill: Drill): string {
   const { pair, instrument } = drill.spec;
-  const tr = instruments[instrument].transposition;
   const concert = pair.join(' / ');
-  if (tr % 12 === 0) return concert;
-  return `${concert} (written ${pair.map((p) => writtenTriad(p, tr)).join(' / ')})`;
+  if (instruments[instrument].transposition % 12 === 0) return concert;
+  return `${concert} (written ${writtenPair([pair[0], pair[1]], instrument).join(' / ')})`;
 }

@@ -33,7 +33,7 @@ export function KeyButtons({
         >
           {frame.transposing ? (
             <>
-              <span className="block">{frame.key(drillKey(d.spec))}</span>
+              <span className="block">{frame.drillKey(d.spec)}</span>
               <small className="block text-[10px] font-normal leading-none">
                 <span className="sr-only">concert </span>
                 {drillKey(d.spec)}

@@ -1,6 +1,7 @@
-import { type InstrumentId, instruments } from '@shared/engine';
-import { movePair, semitoneInterval } from '@shared/engine/theory/pair-spelling';
+import { type DrillSpec, type InstrumentId, instruments, parseTriad, writtenPair } from '@shared/engine';
+import { semitoneInterval } from '@shared/engine/theory/pair-spelling';
 import { chromaOf, rootSpelling } from '@shared/engine/theory/spelling';
+import { drillKey } from '@shared/practice/drill-identity';
 import { Chord, Note } from 'tonal';
 
 /**
@@ -15,7 +16,13 @@ export interface PitchFrame {
   transposition: number;
   /** a key (root name) in the frame: concert Eb reads C on an alto saxophone */
   key(concertKey: string): string;
-  /** a pair's two triad symbols in the frame, spelled as one unit */
+  /**
+   * A drill's key in the frame. Concert: its key as the key map counts it. Written: the root of
+   * the written pair's first triad, spelled as the pair is (concert B / A on alto reads Ab, Bm / A
+   * reads G#), or over a progression the root of the first chord as written.
+   */
+  drillKey(spec: Pick<DrillSpec, 'pair' | 'changes'>): string;
+  /** a pair's two triad symbols in the frame, spelled as one unit (the engine's writtenPair) */
   pair(pair: readonly [string, string]): [string, string];
   /** a chord symbol in the frame */
   chord(symbol: string): string;
@@ -41,12 +48,20 @@ export function pitchFrame(instrument: InstrumentId): PitchFrame {
   const transposition = instruments[instrument].transposition;
   const transposing = transposition % 12 !== 0;
   const up = semitoneInterval(-transposition);
+  const chord = (c: string) => (transposing ? Chord.transpose(c, up) || c : c);
   return {
     transposing,
     transposition,
     key: (k) => (transposing ? rootSpelling((((chromaOf(k) - transposition) % 12) + 12) % 12) : k),
-    pair: (p) => (transposing ? movePair([p[0], p[1]], up) : [p[0], p[1]]),
-    chord: (c) => (transposing ? Chord.transpose(c, up) || c : c),
+    drillKey: (spec) => {
+      if (!transposing) return drillKey(spec);
+      const first = spec.changes?.[0];
+      if (first) return Chord.tokenize(chord(first.chord))[0] || drillKey(spec);
+      if (!spec.pair) return drillKey(spec);
+      return parseTriad(writtenPair([spec.pair[0], spec.pair[1]], instrument)[0]).root;
+    },
+    pair: (p) => (transposing ? writtenPair([p[0], p[1]], instrument) : [p[0], p[1]]),
+    chord,
     written: (m) => m - transposition,
     name: (m, like) => spell(m, like),
   };
