@@ -1,6 +1,6 @@
 import type { DrillNote } from '@shared/engine';
 import type { Remark } from '@shared/schemas/remarks';
-import { type FormEvent, useState } from 'react';
+import { useSchemaForm } from '@/components/form/use-schema-form';
 import { Button } from '@/components/ui/button';
 import { FormMessage } from '@/components/ui/form-message';
 import { useCreateRemark } from '../api/remarks';
@@ -13,26 +13,29 @@ export const noteLabel = (notes: DrillNote[], i: number) => {
 
 function Reply({ takeId, parentId }: { takeId: string; parentId: string }) {
   const create = useCreateRemark(takeId);
-  const [body, setBody] = useState('');
-  const onSubmit = (e: FormEvent) => {
-    e.preventDefault();
-    create.mutate({ body, parentId }, { onSuccess: () => setBody('') });
-  };
+  const form = useSchemaForm(() => import('@shared/schemas/remarks').then((m) => m.CreateRemarkInput), {
+    defaultValues: { body: '' },
+  });
+  const body = form.watch('body') ?? '';
+  const onSubmit = form.handleSubmit((input) =>
+    create.mutate({ ...input, parentId }, { onSuccess: () => form.reset({ body: '' }), onError: form.fromError }),
+  );
   return (
     <form onSubmit={onSubmit} className="mt-2 flex flex-wrap items-end gap-2" aria-label="Answer">
       <label className="grid flex-1 gap-1 text-caption font-semibold">
         Your answer
         <textarea
-          value={body}
-          onChange={(e) => setBody(e.target.value)}
           rows={2}
+          {...form.register('body')}
           className="rounded-lg border border-line bg-raised px-3 py-2 text-body font-normal"
         />
       </label>
       <Button type="submit" variant="quiet" disabled={create.isPending || !body.trim()}>
         Send answer
       </Button>
-      {create.error ? <FormMessage tone="error">{create.error.message}</FormMessage> : null}
+      {form.formError || form.errorsOf('body') ? (
+        <FormMessage tone="error">{form.formError ?? form.errorsOf('body')?.join(' ')}</FormMessage>
+      ) : null}
     </form>
   );
 }

@@ -1,14 +1,14 @@
 import { type Drill, generateDrill, sliceDrill } from '@shared/engine';
-import { type FormEvent, useMemo, useState } from 'react';
+import { useMemo, useState } from 'react';
 import type { NoteMarks } from '@/components/notation/drill-staff';
 import { readNotes } from '@/components/review/note-readings';
 import { NoteStrip } from '@/components/review/note-strip';
 import { ReviewStaff } from '@/components/review/review-staff';
 import { SlipList } from '@/components/review/slip-list';
+import { useSchemaForm } from '@/components/form/use-schema-form';
 import { Button } from '@/components/ui/button';
 import { FormMessage } from '@/components/ui/form-message';
 import { SelectField } from '@/components/ui/select-field';
-import { ApiError } from '@/lib/api-client';
 import { useCreateRemark, useRemarks } from '../api/remarks';
 import { type ReviewTake, useTake } from '../api/take';
 import { useTakeReplay } from '../hooks/use-take-replay';
@@ -38,16 +38,21 @@ function RemarkForm({
   setPin: (pin: string) => void;
 }) {
   const create = useCreateRemark(take.id);
-  const [body, setBody] = useState('');
+  const form = useSchemaForm(() => import('@shared/schemas/remarks').then((m) => m.CreateRemarkInput), {
+    defaultValues: { body: '' },
+  });
+  const body = form.watch('body') ?? '';
   const options = [
     { value: '', label: 'Not pinned: the whole take' },
     ...take.score.results.map((r, i) => ({ value: String(i), label: `${noteLabel(drill.notes, i)}: ${r.verdict}` })),
   ];
-  const onSubmit = (e: FormEvent) => {
-    e.preventDefault();
-    create.mutate({ body, noteIndex: pin === '' ? null : Number(pin) }, { onSuccess: () => setBody('') });
-  };
-  const fields = create.error instanceof ApiError ? (create.error.fields ?? {}) : {};
+  // The pin comes from the staff, the strip or the list as well as this form's own field.
+  const onSubmit = form.handleSubmit((input) =>
+    create.mutate(
+      { ...input, noteIndex: pin === '' ? null : Number(pin) },
+      { onSuccess: () => form.reset({ body: '' }), onError: form.fromError },
+    ),
+  );
   return (
     <form onSubmit={onSubmit} className="grid gap-3" aria-label="Leave a remark">
       <SelectField
@@ -56,15 +61,14 @@ function RemarkForm({
         value={pin}
         onChange={(e) => setPin(e.target.value)}
         options={options}
-        errors={fields.noteIndex}
+        errors={form.errorsOf('noteIndex')}
       />
       <label className="grid gap-1 font-semibold">
         Remark
         <textarea
           id="sf-remark-body"
-          value={body}
-          onChange={(e) => setBody(e.target.value)}
           rows={3}
+          {...form.register('body')}
           className="rounded-lg border border-line bg-raised px-3 py-2 font-normal"
         />
       </label>
@@ -73,10 +77,8 @@ function RemarkForm({
           Leave the remark
         </Button>
       </div>
-      {create.error && !(create.error instanceof ApiError && create.error.fields) ? (
-        <FormMessage tone="error">{create.error.message}</FormMessage>
-      ) : null}
-      {fields.body ? <FormMessage tone="error">{fields.body.join(' ')}</FormMessage> : null}
+      {form.formError ? <FormMessage tone="error">{form.formError}</FormMessage> : null}
+      {form.errorsOf('body') ? <FormMessage tone="error">{form.errorsOf('body')!.join(' ')}</FormMessage> : null}
     </form>
   );
 }
