@@ -161,6 +161,12 @@ describe('practice page in Chromium with the fake MIDI device', () => {
     );
     await takeDone(page);
     expect(await page.getByTestId('accuracy').textContent()).toBe('100%');
+    // Replayed twice: the second replay stops the first (one at a time), and the page stays whole.
+    const replay = page.getByRole('button', { name: 'Replay against the drill' });
+    await replay.click();
+    await replay.click();
+    await page.waitForTimeout(500);
+    expect(b.errors).toEqual([]);
     // Common practice for a tempo climb, as the practice issue sets it: clean -> +4 bpm.
     await page.waitForSelector('[data-testid="tempo-climb"][data-tempo="104"]', { timeout: 10_000 });
     await page.getByRole('button', { name: 'Use 104 bpm' }).click();

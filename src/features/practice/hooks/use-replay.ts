@@ -1,32 +1,27 @@
 import type { Drill, PlayedNote } from '@shared/engine';
 import { useCallback, useEffect, useRef } from 'react';
-import { replayTake } from '../lib/replay';
+import { type Replay, replayTake } from '@/lib/audio/replay';
 
 /**
- * One replay at a time: starting a replay stops the one before it (also when it is still
- * loading), and leaving the page stops whatever is playing.
+ * Replays a finished take over its drill. One replay at a time (starting one stops the one
+ * before, also while it is still loading), and leaving the page stops this page's replay.
  */
 export function useReplay() {
-  const playing = useRef<Promise<{ stop(): void }> | null>(null);
+  const mine = useRef<Replay | null>(null);
 
   const stop = useCallback(() => {
-    const prev = playing.current;
-    playing.current = null;
-    void prev?.then((r) => r.stop()).catch(() => undefined);
+    mine.current?.stop();
+    mine.current = null;
   }, []);
 
-  const play = useCallback(
-    (drill: Drill, played: PlayedNote[]) => {
-      stop();
-      const next = replayTake(drill, played);
-      playing.current = next;
-      // No sound device: nothing to replay, and nothing to stop later.
-      next.catch(() => {
-        if (playing.current === next) playing.current = null;
-      });
-    },
-    [stop],
-  );
+  const play = useCallback((drill: Drill, played: PlayedNote[]) => {
+    const replay = replayTake(drill, played);
+    mine.current = replay;
+    // No sound device: nothing to replay, and nothing to stop later.
+    replay.ready.catch(() => {
+      if (mine.current === replay) mine.current = null;
+    });
+  }, []);
 
   useEffect(() => stop, [stop]);
   return { play, stop };
