@@ -1,10 +1,11 @@
 import { memo, type PointerEvent, useEffect, useRef } from 'react';
+import { Midi } from 'tonal';
 
 const BLACK = new Set([1, 3, 6, 8, 10]);
-const NAMES = ['C', 'C#', 'D', 'D#', 'E', 'F', 'F#', 'G', 'G#', 'A', 'A#', 'B'];
 
 export const isBlackKey = (midi: number) => BLACK.has(((midi % 12) + 12) % 12);
-export const keyLabel = (midi: number) => `${NAMES[((midi % 12) + 12) % 12]}${Math.floor(midi / 12) - 1}`;
+/** A key's name with its octave, as tonal names MIDI notes (sharps, as the keys read). */
+export const keyLabel = (midi: number) => Midi.midiToNoteName(midi, { sharps: true });
 
 /** A mark on one key: a colour class for the fill and a word for screen readers. */
 export interface KeyMark {

@@ -1,6 +1,6 @@
 import { type Clef, type Ottava, ottavaOctaves } from '@shared/engine';
+import { Note } from 'tonal';
 
-const NOTE_RE = /^([A-Ga-g])(#{1,2}|b{1,2})?(-?\d+)$/;
 const LETTERS = 'CDEFGAB';
 
 export interface SpelledPitch {
@@ -11,9 +11,10 @@ export interface SpelledPitch {
 
 /** Reads a spelled name with its octave ("Bb4"); a name that is not one reads as B4, the middle line. */
 export function parseWritten(written: string | undefined): SpelledPitch {
-  const m = NOTE_RE.exec(written ?? '');
-  if (!m) return { letter: 'B', accidental: '', octave: 4 };
-  return { letter: m[1].toUpperCase(), accidental: m[2] ?? '', octave: Number(m[3]) };
+  // tonal reads the name; only a full name with an octave places a note.
+  const n = Note.get(written ?? '');
+  if (n.empty || n.oct === undefined) return { letter: 'B', accidental: '', octave: 4 };
+  return { letter: n.letter, accidental: n.acc, octave: n.oct };
 }
 
 /**
