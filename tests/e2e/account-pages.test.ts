@@ -33,7 +33,7 @@ describe('sign-up, password reset, account settings and MIDI import in Chromium'
     await server?.stop();
   });
 
-  it('a newcomer signs up as a player and lands on the home page', async () => {
+  it('a newcomer signs up as a player and lands on the home page', { timeout: 90_000 }, async () => {
     const { page } = browser;
     await page.goto(`${server.url}/sign-up`, { waitUntil: 'networkidle' });
     expect(await violationsInBothThemes(page)).toEqual({ light: [], dark: [] });
@@ -50,7 +50,7 @@ describe('sign-up, password reset, account settings and MIDI import in Chromium'
     expect(browser.errors).toEqual([]);
   });
 
-  it('changes the name and the password on the account page', async () => {
+  it('changes the name and the password on the account page', { timeout: 90_000 }, async () => {
     const { page } = browser;
     await page.goto(`${server.url}/account`, { waitUntil: 'networkidle' });
     await page.getByRole('heading', { name: 'Account settings' }).waitFor();
@@ -68,7 +68,7 @@ describe('sign-up, password reset, account settings and MIDI import in Chromium'
     expect(browser.errors).toEqual([]);
   });
 
-  it('imports a take from a MIDI file and opens it scored', async () => {
+  it('imports a take from a MIDI file and opens it scored', { timeout: 90_000 }, async () => {
     const { page } = browser;
     const spec: DrillSpec = { pair: ['D', 'C'], pattern: 'four-three', direction: 'up', tempo: 100 };
     const midi = drillToMidi(generateDrill(spec));
@@ -92,7 +92,7 @@ describe('sign-up, password reset, account settings and MIDI import in Chromium'
     expect(browser.errors).toEqual([]);
   });
 
-  it('a signed-out player resets the password through the e-mailed link', async () => {
+  it('a signed-out player resets the password through the e-mailed link', { timeout: 90_000 }, async () => {
     const fresh = await openBrowser(server.url);
     try {
       const { page } = fresh;
@@ -100,7 +100,7 @@ describe('sign-up, password reset, account settings and MIDI import in Chromium'
       expect(await violationsInBothThemes(page)).toEqual({ light: [], dark: [] });
       await page.getByLabel('E-mail').fill(email);
       await page.getByRole('button', { name: 'Send me a link' }).click();
-      await page.getByText(`If an account uses ${email}`).waitFor();
+      await page.getByText(`If an account uses ${email}`).waitFor({ timeout: 15_000 });
       const adminClient = await signedIn(server.app, admin);
       const [mail] = await waitForMail(adminClient, email);
       expect(mail.subject).toMatch(/password/i);
@@ -110,6 +110,7 @@ describe('sign-up, password reset, account settings and MIDI import in Chromium'
       expect(await seriousViolations(page)).toEqual([]);
       await page.getByLabel('New password', { exact: true }).fill('the third time');
       await page.getByRole('button', { name: 'Set new password' }).click();
+      await page.getByText('Your new password is set').waitFor({ timeout: 15_000 });
       await signInThroughPage(page, server.url, { email, password: 'the third time' });
       // The link works once.
       await page.goto(`${server.url}/reset-password?token=${token}`, { waitUntil: 'networkidle' });
