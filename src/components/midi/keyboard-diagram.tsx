@@ -1,11 +1,11 @@
 import { memo, type PointerEvent, useEffect, useRef } from 'react';
-import { Midi } from 'tonal';
+import { ROOT_SPELLINGS } from '@shared/engine';
 
 const BLACK = new Set([1, 3, 6, 8, 10]);
 
 export const isBlackKey = (midi: number) => BLACK.has(((midi % 12) + 12) % 12);
-/** A key's name with its octave, as tonal names MIDI notes (sharps, as the keys read). */
-export const keyLabel = (midi: number) => Midi.midiToNoteName(midi, { sharps: true });
+/** A key's name with its octave, spelled as the app names keys (C Db D Eb E F F# G Ab A Bb B). */
+export const keyLabel = (midi: number) => `${ROOT_SPELLINGS[((midi % 12) + 12) % 12]}${Math.floor(midi / 12) - 1}`;
 
 /** A mark on one key: a colour class for the fill and a word for screen readers. */
 export interface KeyMark {
