@@ -4,6 +4,7 @@ import type { Server as HttpServer } from 'node:http';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { type DrillSpec, generateDrill } from '../../shared/engine';
 import { type BrowserSession, openBrowser, signInThroughPage } from '../helpers/browser';
+import { playFromOrigin, startTake, takeDone } from '../helpers/practice-page';
 import { createUser, type TestUser } from '../helpers/factories';
 import { createTestApp } from '../helpers/test-server';
 
@@ -105,25 +106,12 @@ describe('a take finished while the database is out of reach', () => {
     });
 
     relay.down();
-    await page.getByRole('button', { name: 'Start the take' }).click();
-    await page.waitForFunction(() => document.querySelector('[data-testid="practice"]')?.getAttribute('data-origin'));
-    const origin = Number(await page.getByTestId('practice').getAttribute('data-origin'));
-    const notes = generateDrill(SPEC).notes.map((n) => ({ midi: n.midi, t: n.beat * 500 }));
-    await page.evaluate(
-      ({ origin, notes }) => {
-        for (const n of notes)
-          setTimeout(
-            () => window.__fakeMidi.noteOn(n.midi, 90, 1, origin + n.t),
-            Math.max(0, origin + n.t - performance.now()),
-          );
-      },
-      { origin, notes },
+    await startTake(page);
+    await playFromOrigin(
+      page,
+      generateDrill(SPEC).notes.map((n) => ({ midi: n.midi, t: n.beat * 500 })),
     );
-    await page.waitForFunction(
-      () => document.querySelector('[data-testid="practice"]')?.getAttribute('data-phase') === 'done',
-      null,
-      { timeout: 20_000 },
-    );
+    await takeDone(page);
     // The server answered 503 with Retry-After (its database is down), and the page says so in plain words.
     await page.waitForFunction(() =>
       document.querySelector('[data-testid="queue-waiting"]')?.textContent?.includes('server is busy'),

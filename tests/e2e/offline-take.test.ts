@@ -3,6 +3,7 @@ import type { AddressInfo } from 'node:net';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { type DrillSpec, generateDrill } from '../../shared/engine';
 import { type BrowserSession, openBrowser, signInThroughPage } from '../helpers/browser';
+import { playFromOrigin, startTake, takeDone } from '../helpers/practice-page';
 import { createUser, type TestUser } from '../helpers/factories';
 import { createTestApp } from '../helpers/test-server';
 
@@ -60,25 +61,12 @@ describe('a take finished while the server is down', () => {
     );
 
     await halt();
-    await page.getByRole('button', { name: 'Start the take' }).click();
-    await page.waitForFunction(() => document.querySelector('[data-testid="practice"]')?.getAttribute('data-origin'));
-    const origin = Number(await page.getByTestId('practice').getAttribute('data-origin'));
-    const notes = generateDrill(SPEC).notes.map((n) => ({ midi: n.midi, t: n.beat * 500 }));
-    await page.evaluate(
-      ({ origin, notes }) => {
-        for (const n of notes)
-          setTimeout(
-            () => window.__fakeMidi.noteOn(n.midi, 90, 1, origin + n.t),
-            Math.max(0, origin + n.t - performance.now()),
-          );
-      },
-      { origin, notes },
+    await startTake(page);
+    await playFromOrigin(
+      page,
+      generateDrill(SPEC).notes.map((n) => ({ midi: n.midi, t: n.beat * 500 })),
     );
-    await page.waitForFunction(
-      () => document.querySelector('[data-testid="practice"]')?.getAttribute('data-phase') === 'done',
-      null,
-      { timeout: 20_000 },
-    );
+    await takeDone(page);
     await page.getByTestId('queue-waiting').waitFor();
     expect(await page.getByTestId('queue-waiting').textContent()).toMatch(/1 take waiting/);
     const before = await ctx.pool.query('SELECT count(*)::int AS n FROM takes WHERE player_id = $1', [player.id]);

@@ -2,9 +2,10 @@ import { Note } from 'tonal';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { type DrillSpec, expectedTimeMs, generateDrill, sliceDrill } from '../../shared/engine';
 import { seriousViolations, violationsInBothThemes } from '../helpers/axe';
-import { type BrowserSession, openBrowser, signInThroughPage } from '../helpers/browser';
-import { createUser, type TestUser } from '../helpers/factories';
-import { startTestServer } from '../helpers/test-server';
+import type { BrowserSession } from '../helpers/browser';
+import type { TestUser } from '../helpers/factories';
+import { playerWithKeyboard, takeDone as takeScored } from '../helpers/practice-page';
+import type { startTestServer } from '../helpers/test-server';
 
 /**
  * The practice page's live marks, loop, ladder and pitch frame in Chromium with the fake MIDI
@@ -88,13 +89,7 @@ async function watchMarks(page: Page, times: number[]) {
   }, times);
 }
 
-async function takeDone(page: Page) {
-  await page.waitForFunction(
-    () => document.querySelector('[data-testid="practice"]')?.getAttribute('data-phase') === 'done',
-    null,
-    { timeout: 30_000 },
-  );
-}
+const takeDone = (page: Page) => takeScored(page, 30_000);
 
 async function finalMarks(page: Page): Promise<string[]> {
   return page.evaluate(() =>
@@ -110,13 +105,7 @@ describe('practice page: live marks, loop, ladder and pitch frame in Chromium', 
   let player: TestUser;
 
   beforeAll(async () => {
-    server = await startTestServer();
-    player = await createUser(server.db, { role: 'player', name: 'Ada Quill' });
-    b = await openBrowser(server.url, {
-      fakeMidi: true,
-      midiOptions: { inputs: [{ id: 'kb', name: 'Fake Keyboard', manufacturer: 'Test' }], outputs: [] },
-    });
-    await signInThroughPage(b.page, server.url, player);
+    ({ server, player, b } = await playerWithKeyboard('Ada Quill'));
   });
   afterAll(async () => {
     await b?.close();

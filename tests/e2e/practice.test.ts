@@ -3,9 +3,10 @@ import { parseMidi } from 'midi-file';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { type DrillSpec, generateDrill, sliceDrill } from '../../shared/engine';
 import { seriousViolations } from '../helpers/axe';
-import { type BrowserSession, openBrowser, signInThroughPage } from '../helpers/browser';
-import { createUser, type TestUser } from '../helpers/factories';
-import { startTestServer } from '../helpers/test-server';
+import type { BrowserSession } from '../helpers/browser';
+import type { TestUser } from '../helpers/factories';
+import { playerWithKeyboard, playFromOrigin, type ScriptNote, startTake, takeDone } from '../helpers/practice-page';
+import type { startTestServer } from '../helpers/test-server';
 
 // A short drill at 100 bpm: a beat is 600 ms, so the default hit window is 75 ms and triplet
 // notes are 200 ms apart (match window 150 ms). Scripted mistakes sit well inside those.
@@ -19,40 +20,9 @@ const SPEC: DrillSpec = {
 };
 const msPerBeat = 600;
 
-type ScriptNote = { midi: number; t: number };
-
-/** Plays notes on the fake device at their times on the take's clock, each with its own timestamp. */
+/** Plays notes on the fake device at their times on the take's clock, each key let go 120 ms later. */
 async function play(page: BrowserSession['page'], notes: ScriptNote[]) {
-  const origin = Number(await page.getByTestId('practice').getAttribute('data-origin'));
-  expect(origin).toBeGreaterThan(0);
-  await page.evaluate(
-    ({ origin, notes }) => {
-      for (const n of notes) {
-        const at = origin + n.t;
-        setTimeout(
-          () => {
-            window.__fakeMidi.noteOn(n.midi, 90, 1, at);
-            setTimeout(() => window.__fakeMidi.noteOff(n.midi, 0, 1, at + 120), 120);
-          },
-          Math.max(0, at - performance.now()),
-        );
-      }
-    },
-    { origin, notes },
-  );
-}
-
-async function takeDone(page: BrowserSession['page']) {
-  await page.waitForFunction(
-    () => document.querySelector('[data-testid="practice"]')?.getAttribute('data-phase') === 'done',
-    null,
-    { timeout: 20_000 },
-  );
-}
-
-async function startTake(page: BrowserSession['page']) {
-  await page.getByRole('button', { name: /Start (the|another) take/ }).click();
-  await page.waitForFunction(() => document.querySelector('[data-testid="practice"]')?.getAttribute('data-origin'));
+  expect(await playFromOrigin(page, notes, 120)).toBeGreaterThan(0);
 }
 
 describe('practice page in Chromium with the fake MIDI device', () => {
@@ -61,13 +31,7 @@ describe('practice page in Chromium with the fake MIDI device', () => {
   let player: TestUser;
 
   beforeAll(async () => {
-    server = await startTestServer();
-    player = await createUser(server.db, { role: 'player', name: 'Theo Park' });
-    b = await openBrowser(server.url, {
-      fakeMidi: true,
-      midiOptions: { inputs: [{ id: 'kb', name: 'Fake Keyboard', manufacturer: 'Test' }], outputs: [] },
-    });
-    await signInThroughPage(b.page, server.url, player);
+    ({ server, player, b } = await playerWithKeyboard('Theo Park'));
   });
   afterAll(async () => {
     await b?.close();

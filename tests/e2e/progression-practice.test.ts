@@ -1,8 +1,9 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { type DrillSpec, generateDrill } from '../../shared/engine';
-import { type BrowserSession, openBrowser, signInThroughPage } from '../helpers/browser';
-import { createUser, type TestUser } from '../helpers/factories';
-import { startTestServer } from '../helpers/test-server';
+import type { BrowserSession } from '../helpers/browser';
+import type { TestUser } from '../helpers/factories';
+import { playerWithKeyboard, playFromOrigin, startTake, takeDone } from '../helpers/practice-page';
+import type { startTestServer } from '../helpers/test-server';
 
 // A short ii-V-I at 100 bpm (a beat is 600 ms): 8 beats of triplets, 24 notes, about 5 s.
 const SPEC: DrillSpec = {
@@ -25,13 +26,7 @@ describe('practising a progression drill in Chromium with the fake MIDI device',
   let player: TestUser;
 
   beforeAll(async () => {
-    server = await startTestServer();
-    player = await createUser(server.db, { role: 'player', name: 'Sam Okafor' });
-    b = await openBrowser(server.url, {
-      fakeMidi: true,
-      midiOptions: { inputs: [{ id: 'kb', name: 'Fake Keyboard', manufacturer: 'Test' }], outputs: [] },
-    });
-    await signInThroughPage(b.page, server.url, player);
+    ({ server, player, b } = await playerWithKeyboard('Sam Okafor'));
   });
   afterAll(async () => {
     await b?.close();
@@ -56,29 +51,9 @@ describe('practising a progression drill in Chromium with the fake MIDI device',
       midi: drill.changes?.[n.chordIndex as number].chord === 'G7' ? n.midi + 1 : n.midi,
       t: n.beat * msPerBeat,
     }));
-    await page.getByRole('button', { name: /Start (the|another) take/ }).click();
-    await page.waitForFunction(() => document.querySelector('[data-testid="practice"]')?.getAttribute('data-origin'));
-    const origin = Number(await page.getByTestId('practice').getAttribute('data-origin'));
-    await page.evaluate(
-      ({ origin, notes }) => {
-        for (const n of notes) {
-          const at = origin + n.t;
-          setTimeout(
-            () => {
-              window.__fakeMidi.noteOn(n.midi, 90, 1, at);
-              setTimeout(() => window.__fakeMidi.noteOff(n.midi, 0, 1, at + 120), 120);
-            },
-            Math.max(0, at - performance.now()),
-          );
-        }
-      },
-      { origin, notes: script },
-    );
-    await page.waitForFunction(
-      () => document.querySelector('[data-testid="practice"]')?.getAttribute('data-phase') === 'done',
-      null,
-      { timeout: 20_000 },
-    );
+    await startTake(page);
+    await playFromOrigin(page, script, 120);
+    await takeDone(page);
     const g7 = drill.notes.filter((n) => drill.changes?.[n.chordIndex as number].chord === 'G7').length;
     const pct = Math.round(((drill.notes.length - g7) / drill.notes.length) * 100);
     expect(await page.getByTestId('accuracy').textContent()).toBe(`${pct}%`);
