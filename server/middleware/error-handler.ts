@@ -1,21 +1,12 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { ZodError } from 'zod';
 import { EngineError } from '../../shared/engine/errors';
+import { fieldErrors } from '../../shared/schemas/field-errors';
 import { classifyDbError } from '../db/errors';
 import { AppError } from '../errors';
 
 /** Seconds a client should wait before trying again while the database is unreachable. */
 export const DB_RETRY_AFTER_SECONDS = 5;
-
-/** Field errors keyed by dotted path, for a 400 that says which field was wrong and why. */
-export function zodFields(err: ZodError): Record<string, string[]> {
-  const fields: Record<string, string[]> = {};
-  for (const issue of err.issues) {
-    const key = issue.path.map(String).join('.') || '_';
-    fields[key] = [...(fields[key] ?? []), issue.message];
-  }
-  return fields;
-}
 
 export const notFoundApi: RequestHandler = (req, _res, next) => {
   next(new AppError('not_found', `No API route for ${req.method} ${req.path}`));
@@ -23,7 +14,7 @@ export const notFoundApi: RequestHandler = (req, _res, next) => {
 
 export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
   if (err instanceof ZodError) {
-    const fields = zodFields(err);
+    const fields = fieldErrors(err.issues);
     const names = Object.keys(fields).join(', ');
     res.status(400).json({ error: { code: 'validation', message: `Check these fields: ${names}`, fields } });
     return;
