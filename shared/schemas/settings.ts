@@ -16,7 +16,7 @@ export const PlayerSettings = z.object({
     .refine((r) => r.low < r.high, { error: 'The lowest note must be below the highest' })
     .nullable(),
   defaultTempo: z
-    .number()
+    .number({ error: 'Tempo runs from 20 to 400' })
     .min(20, { error: 'Tempo runs from 20 to 400' })
     .max(400, { error: 'Tempo runs from 20 to 400' }),
   latency: z.record(z.string().max(200), z.number().min(-500).max(500)),

@@ -1,23 +1,42 @@
-import { type InstrumentId, instruments } from '@shared/engine';
+import { instruments } from '@shared/engine';
 import type { PlayerSettings } from '@shared/schemas/settings';
-import { type FormEvent, useEffect, useRef, useState } from 'react';
+import { useEffect, useRef, useState } from 'react';
+import { useSchemaForm } from '@/components/form/use-schema-form';
 import { RangeFields } from '@/components/range/range-fields';
 import { Button } from '@/components/ui/button';
-import { ApiError } from '@/lib/api-client';
+import { CheckboxField } from '@/components/ui/check-field';
+import { FormMessage } from '@/components/ui/form-message';
+import { NumberField } from '@/components/ui/number-field';
+import { SelectField } from '@/components/ui/select-field';
 import { useUpdateSettings } from '../api/settings';
 import { pitchFrame } from '../lib/pitch-frame';
 import { PitchLabel } from './pitch-label';
 
-const field = 'mt-1 rounded-md border border-line bg-surface px-2 py-1.5 text-body';
-
-/** The new settings, with every field the player changed from `was` kept as they left it. */
-export function keepEdits(draft: PlayerSettings, was: PlayerSettings, next: PlayerSettings): PlayerSettings {
-  const out: PlayerSettings = { ...next };
-  for (const key of Object.keys(draft) as Array<keyof PlayerSettings>) {
+/** The new values, with every field the player changed from `was` kept as they left it. */
+export function keepEdits<T extends object>(draft: T, was: T, next: T): T {
+  const out: T = { ...next };
+  for (const key of Object.keys(draft) as Array<keyof T>) {
     if (JSON.stringify(draft[key]) !== JSON.stringify(was[key])) Object.assign(out, { [key]: draft[key] });
   }
   return out;
 }
+
+type Values = Pick<PlayerSettings, 'instrument' | 'writtenPitchInput' | 'octaveShift' | 'defaultTempo' | 'range'>;
+
+const valuesOf = (s: PlayerSettings): Values => ({
+  instrument: s.instrument,
+  writtenPitchInput: s.writtenPitchInput,
+  octaveShift: s.octaveShift,
+  defaultTempo: s.defaultTempo,
+  range: s.range,
+});
+
+const SHIFTS = [-2, -1, 0, 1, 2].map((o) => ({
+  value: String(o),
+  label: o === 0 ? 'None' : `${o > 0 ? '+' : ''}${o} octave${Math.abs(o) > 1 ? 's' : ''}`,
+}));
+
+const INSTRUMENTS = Object.entries(instruments).map(([id, i]) => ({ value: id, label: i.label }));
 
 /**
  * The settings every drill starts from, kept on the server: instrument, written-pitch input,
@@ -25,112 +44,91 @@ export function keepEdits(draft: PlayerSettings, was: PlayerSettings, next: Play
  */
 export function PracticeDefaults({ settings }: { settings: PlayerSettings }) {
   const update = useUpdateSettings();
-  const [draft, setDraft] = useState(settings);
-  const [useRange, setUseRange] = useState(settings.range !== null);
+  const form = useSchemaForm(() => import('@shared/schemas/settings').then((m) => m.UpdateSettingsInput), {
+    defaultValues: valuesOf(settings),
+  });
   const [done, setDone] = useState(false);
   // The settings the form last started from: fresh settings (a latency just measured, another
   // tab) replace only the fields the player has not changed, so no typing is lost.
   const base = useRef(settings);
   useEffect(() => {
     const was = base.current;
+    if (was === settings) return;
     base.current = settings;
-    setDraft((d) => keepEdits(d, was, settings));
-    setUseRange((u) => (u === (was.range !== null) ? settings.range !== null : u));
-  }, [settings]);
+    form.reset(keepEdits(form.getValues() as Values, valuesOf(was), valuesOf(settings)));
+  }, [settings, form]);
+  const draft = form.watch() as Values;
   const inst = instruments[draft.instrument];
   const frame = pitchFrame(draft.instrument);
-  const range = draft.range ?? inst.range;
-  const errors = update.error instanceof ApiError ? (update.error.fields ?? {}) : {};
+  // The range typed last, back when "narrower" is ticked again.
+  const lastRange = useRef(settings.range);
+  const range = draft.range ?? lastRange.current ?? inst.range;
 
-  const submit = (e: FormEvent) => {
-    e.preventDefault();
+  const submit = form.handleSubmit((input) => {
     setDone(false);
-    update.mutate(
-      {
-        instrument: draft.instrument,
-        writtenPitchInput: draft.writtenPitchInput,
-        octaveShift: draft.octaveShift,
-        defaultTempo: draft.defaultTempo,
-        range: useRange ? range : null,
-      },
-      { onSuccess: () => setDone(true) },
-    );
-  };
+    update.mutate(input, { onSuccess: () => setDone(true), onError: form.fromError });
+  });
 
   return (
     <details className="rounded-card border border-line bg-raised p-4">
       <summary className="cursor-pointer text-lead font-bold">My practice settings</summary>
-      <form onSubmit={submit} className="mt-3 grid gap-4" aria-label="My practice settings">
+      <form onSubmit={submit} className="mt-3 grid gap-4" aria-label="My practice settings" noValidate>
         <div className="flex flex-wrap gap-4">
-          <label className="flex flex-col text-caption font-semibold">
-            Instrument
-            <select
-              className={field}
-              value={draft.instrument}
-              onChange={(e) => setDraft({ ...draft, instrument: e.target.value as InstrumentId, range: null })}
-            >
-              {Object.entries(instruments).map(([id, i]) => (
-                <option key={id} value={id}>
-                  {i.label}
-                </option>
-              ))}
-            </select>
-          </label>
-          <label className="flex flex-col text-caption font-semibold">
-            Default tempo (bpm)
-            <input
-              className={`${field} w-24`}
-              type="number"
-              min={20}
-              max={400}
-              value={draft.defaultTempo}
-              onChange={(e) => setDraft({ ...draft, defaultTempo: Number(e.target.value) })}
-              aria-invalid={errors.defaultTempo ? true : undefined}
-            />
-          </label>
-          <label className="flex flex-col text-caption font-semibold">
-            Keyboard octave shift
-            <select
-              className={field}
-              value={draft.octaveShift}
-              onChange={(e) => setDraft({ ...draft, octaveShift: Number(e.target.value) })}
-            >
-              {[-2, -1, 0, 1, 2].map((o) => (
-                <option key={o} value={o}>
-                  {o === 0 ? 'None' : `${o > 0 ? '+' : ''}${o} octave${Math.abs(o) > 1 ? 's' : ''}`}
-                </option>
-              ))}
-            </select>
-          </label>
-        </div>
-        <label className="flex items-center gap-2 text-body">
-          <input
-            type="checkbox"
-            className="h-4 w-4 accent-brass-600"
-            checked={draft.writtenPitchInput}
-            onChange={(e) => setDraft({ ...draft, writtenPitchInput: e.target.checked })}
+          <SelectField
+            label="Instrument"
+            options={INSTRUMENTS}
+            errors={form.errorsOf('instrument')}
+            {...form.register('instrument', {
+              // Another instrument starts from its own range.
+              onChange: (e) => {
+                lastRange.current = null;
+                if (form.getValues('range'))
+                  form.setValue('range', instruments[e.target.value as Values['instrument']].range);
+              },
+            })}
           />
-          My keyboard plays written pitch for {inst.label}
-        </label>
+          <NumberField
+            label="Default tempo (bpm)"
+            className="w-36"
+            min={20}
+            max={400}
+            errors={form.errorsOf('defaultTempo')}
+            {...form.register('defaultTempo', { valueAsNumber: true })}
+          />
+          <SelectField
+            label="Keyboard octave shift"
+            options={SHIFTS}
+            errors={form.errorsOf('octaveShift')}
+            {...form.register('octaveShift', { setValueAs: Number })}
+          />
+        </div>
+        <CheckboxField
+          label={`My keyboard plays written pitch for ${inst.label}`}
+          errors={form.errorsOf('writtenPitchInput')}
+          {...form.register('writtenPitchInput')}
+        />
         <fieldset className="flex flex-wrap items-end gap-4">
           <legend className="text-caption font-semibold">My range (drills stay inside it)</legend>
-          <label className="flex items-center gap-2 text-body">
-            <input
-              type="checkbox"
-              className="h-4 w-4 accent-brass-600"
-              checked={useRange}
-              onChange={(e) => setUseRange(e.target.checked)}
-            />
-            Narrower than the instrument's <PitchLabel frame={frame} midi={inst.range.low} />–
-            <PitchLabel frame={frame} midi={inst.range.high} />
-          </label>
-          {useRange ? (
+          <CheckboxField
+            label={
+              <span>
+                Narrower than the instrument's <PitchLabel frame={frame} midi={inst.range.low} />–
+                <PitchLabel frame={frame} midi={inst.range.high} />
+              </span>
+            }
+            checked={draft.range !== null}
+            onChange={(e) => {
+              if (!e.target.checked) lastRange.current = draft.range;
+              form.setValue('range', e.target.checked ? range : null, { shouldDirty: true });
+            }}
+          />
+          {draft.range ? (
             <RangeFields
               instrument={draft.instrument}
-              range={range}
-              onChange={(r) => setDraft({ ...draft, range: r })}
-              lowErrors={errors['range.low'] ?? errors.range}
-              highErrors={errors['range.high']}
+              range={draft.range}
+              onChange={(r) => form.setValue('range', r, { shouldDirty: true })}
+              lowErrors={form.errorsOf('range.low') ?? form.errorsOf('range')}
+              highErrors={form.errorsOf('range.high')}
             />
           ) : null}
         </fieldset>
@@ -140,9 +138,9 @@ export function PracticeDefaults({ settings }: { settings: PlayerSettings }) {
           </Button>
           <p role="status" className="text-body">
             {done ? 'Saved. New drills start from these.' : ''}
-            {update.error ? `Not saved: ${update.error.message} ${Object.values(errors).flat().join(' ')}` : ''}
           </p>
         </div>
+        {form.formError ? <FormMessage tone="error">{form.formError}</FormMessage> : null}
       </form>
     </details>
   );
