@@ -1,32 +1,39 @@
 import type { TakeSummary } from '@shared/schemas/history';
 import { KEYS, TAKE_SORTS } from '@shared/schemas/history';
-import { type ColumnDef, flexRender, getCoreRowModel, type SortingState, useReactTable } from '@tanstack/react-table';
+import type { ColumnDef, OnChangeFn, SortingState } from '@tanstack/react-table';
 import { Link, useSearchParams } from 'react-router-dom';
 import { type TakeListParams, useTakes } from '../api/takes';
-import { TableScroll } from '@/components/ui/table-scroll';
+import { DataTable } from '@/components/ui/data-table';
 import { formatDateTime } from '@/lib/format-date';
 
 const columns: ColumnDef<TakeSummary>[] = [
   {
     id: 'startedAt',
     header: 'Date',
+    meta: { nowrap: true },
     cell: ({ row }) => (
       <Link to={`/history/${row.original.id}`} className="font-semibold underline-offset-2 hover:underline">
         {formatDateTime(row.original.startedAt)}
       </Link>
     ),
   },
-  { id: 'pair', header: 'Pair', accessorKey: 'pair', enableSorting: false },
-  { id: 'pattern', header: 'Pattern', accessorKey: 'pattern', enableSorting: false },
-  { id: 'key', header: 'Key', accessorKey: 'key' },
-  { id: 'instrument', header: 'Instrument', accessorKey: 'instrument', enableSorting: false },
-  { id: 'tempo', header: 'Tempo', accessorKey: 'tempo' },
-  { id: 'accuracy', header: 'Accuracy', cell: ({ row }) => `${Math.round(row.original.accuracy * 100)}%` },
+  { id: 'pair', header: 'Pair', accessorKey: 'pair', enableSorting: false, meta: { nowrap: true } },
+  { id: 'pattern', header: 'Pattern', accessorKey: 'pattern', enableSorting: false, meta: { nowrap: true } },
+  { id: 'key', header: 'Key', accessorKey: 'key', meta: { nowrap: true } },
+  { id: 'instrument', header: 'Instrument', accessorKey: 'instrument', enableSorting: false, meta: { nowrap: true } },
+  { id: 'tempo', header: 'Tempo', accessorKey: 'tempo', meta: { numeric: true } },
+  {
+    id: 'accuracy',
+    header: 'Accuracy',
+    cell: ({ row }) => `${Math.round(row.original.accuracy * 100)}%`,
+    meta: { numeric: true },
+  },
   {
     id: 'meanOffsetMs',
     header: 'Mean offset',
     enableSorting: false,
     cell: ({ row }) => (row.original.meanOffsetMs === null ? '—' : `${Math.round(row.original.meanOffsetMs)} ms`),
+    meta: { numeric: true, nowrap: true },
   },
 ];
 
@@ -55,20 +62,11 @@ export function HistoryTable() {
     setParams(p, { replace: true });
   };
   const sorting: SortingState = [{ id: query.sort ?? 'startedAt', desc: query.dir === 'desc' }];
-  const table = useReactTable({
-    data: data?.takes ?? [],
-    columns,
-    manualSorting: true,
-    manualPagination: true,
-    state: { sorting },
-    rowCount: data?.total ?? 0,
-    onSortingChange: (up) => {
-      const next = typeof up === 'function' ? up(sorting) : up;
-      const s = next[0] ?? { id: 'startedAt', desc: true };
-      set({ sort: s.id, dir: s.desc ? 'desc' : 'asc', page: undefined });
-    },
-    getCoreRowModel: getCoreRowModel(),
-  });
+  const onSortingChange: OnChangeFn<SortingState> = (up) => {
+    const next = typeof up === 'function' ? up(sorting) : up;
+    const s = next[0] ?? { id: 'startedAt', desc: true };
+    set({ sort: s.id, dir: s.desc ? 'desc' : 'asc', page: undefined });
+  };
   const pages = data ? Math.max(1, Math.ceil(data.total / data.pageSize)) : 1;
   return (
     <div className="grid gap-4">
@@ -110,54 +108,17 @@ export function HistoryTable() {
         ))}
       </form>
       {error ? <p role="alert">{error.message}</p> : null}
-      <TableScroll label="Takes, scrolls sideways">
-        <table className="w-full text-left text-body" data-testid="history-table" aria-busy={isFetching}>
-          <caption className="sr-only">Takes, {data ? `${data.total} in all` : 'loading'}</caption>
-          <thead className="border-b border-line text-caption uppercase tracking-wider text-muted">
-            {table.getHeaderGroups().map((hg) => (
-              <tr key={hg.id}>
-                {hg.headers.map((h) => {
-                  const sorted = h.column.getIsSorted();
-                  return (
-                    <th
-                      key={h.id}
-                      scope="col"
-                      className="whitespace-nowrap px-3 py-2"
-                      aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}
-                    >
-                      {h.column.getCanSort() ? (
-                        <button
-                          type="button"
-                          onClick={h.column.getToggleSortingHandler()}
-                          className="uppercase tracking-wider hover:text-text"
-                        >
-                          {flexRender(h.column.columnDef.header, h.getContext())}{' '}
-                          {sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : ''}
-                        </button>
-                      ) : (
-                        flexRender(h.column.columnDef.header, h.getContext())
-                      )}
-                    </th>
-                  );
-                })}
-              </tr>
-            ))}
-          </thead>
-          <tbody>
-            {table.getRowModel().rows.map((r) => (
-              <tr key={r.id} className="border-b border-line last:border-0">
-                {r.getVisibleCells().map((c) => (
-                  <td key={c.id} className="whitespace-nowrap px-3 py-2 tabular-nums">
-                    {flexRender(c.column.columnDef.cell, c.getContext())}
-                  </td>
-                ))}
-              </tr>
-            ))}
-          </tbody>
-        </table>
-        {isPending ? <p className="p-4 text-muted">Loading takes…</p> : null}
-        {data && data.total === 0 ? <p className="p-4 text-muted">No takes match.</p> : null}
-      </TableScroll>
+      <DataTable
+        data={data?.takes ?? []}
+        columns={columns}
+        getRowId={(t) => t.id}
+        caption={`Takes, ${data ? `${data.total} in all` : 'loading'}`}
+        scrollLabel="Takes, scrolls sideways"
+        testId="history-table"
+        busy={isFetching}
+        sorting={{ state: sorting, onChange: onSortingChange }}
+        empty={isPending ? 'Loading takes…' : data && data.total === 0 ? 'No takes match.' : null}
+      />
       <nav className="flex items-center gap-3" aria-label="Pages">
         <button
           type="button"
