@@ -1,4 +1,5 @@
 import { useEffect } from 'react';
+import { SelectField } from '@/components/ui/select-field';
 import { useMicrophone } from '@/hooks/use-microphone';
 import type { InputStatus, NoteInput } from '@/lib/midi-input';
 import { MicPanel } from './mic-panel';
@@ -63,40 +64,27 @@ export function InputPanel({
       </h2>
       {ready ? (
         <div className="mt-3 flex flex-wrap gap-4">
-          <label className="flex flex-col text-caption font-semibold">
-            {microphone ? 'Play with' : 'MIDI device'}
-            <select
-              className="mt-1 min-w-56 rounded-md border border-line bg-surface px-2 py-1.5 text-body"
-              value={micOn ? MICROPHONE : status.state === 'ready' ? (status.selected ?? '') : ''}
-              onChange={(e) => pick(e.target.value)}
-            >
-              <option value="">None (keyboards only)</option>
-              {status.state === 'ready'
-                ? status.devices.map((d) => (
-                    <option key={d.id} value={d.id}>
-                      {d.name}
-                    </option>
-                  ))
-                : null}
-              {microphone ? <option value={MICROPHONE}>Microphone (an acoustic instrument)</option> : null}
-            </select>
-          </label>
+          <SelectField
+            label={microphone ? 'Play with' : 'MIDI device'}
+            className="min-w-56"
+            value={micOn ? MICROPHONE : status.state === 'ready' ? (status.selected ?? '') : ''}
+            onChange={(e) => pick(e.target.value)}
+            options={[
+              { value: '', label: 'None (keyboards only)' },
+              ...(status.state === 'ready' ? status.devices.map((d) => ({ value: d.id, label: d.name })) : []),
+              ...(microphone ? [{ value: MICROPHONE, label: 'Microphone (an acoustic instrument)' }] : []),
+            ]}
+          />
           {micOn ? null : (
-            <label className="flex flex-col text-caption font-semibold">
-              Channel
-              <select
-                className="mt-1 rounded-md border border-line bg-surface px-2 py-1.5 text-body"
-                value={String(input.channel)}
-                onChange={(e) => input.setChannel(e.target.value === 'all' ? 'all' : Number(e.target.value))}
-              >
-                <option value="all">All channels</option>
-                {CHANNELS.map((c) => (
-                  <option key={c} value={c}>
-                    {c}
-                  </option>
-                ))}
-              </select>
-            </label>
+            <SelectField
+              label="Channel"
+              value={String(input.channel)}
+              onChange={(e) => input.setChannel(e.target.value === 'all' ? 'all' : Number(e.target.value))}
+              options={[
+                { value: 'all', label: 'All channels' },
+                ...CHANNELS.map((c) => ({ value: String(c), label: String(c) })),
+              ]}
+            />
           )}
         </div>
       ) : null}

@@ -1,4 +1,5 @@
 import { useEffect, useRef, useState } from 'react';
+import { RangeField } from '@/components/ui/range-field';
 import { GATE_MAX_DB, GATE_MIN_DB, type MicInput } from '@/lib/mic-input';
 
 const FLOOR_DB = -80;
@@ -49,21 +50,17 @@ export function MicPanel({ mic }: { mic: MicInput }) {
           <div className="absolute inset-y-0 w-0.5 bg-ember-500" style={{ left: pct(gate) }} title="gate" />
         </div>
       </div>
-      <label className="flex flex-col text-caption font-semibold">
-        Gate: {gate} dBFS (quieter sound is never a note)
-        <input
-          type="range"
-          min={GATE_MIN_DB}
-          max={GATE_MAX_DB}
-          step={1}
-          value={gate}
-          onChange={(e) => {
-            mic.setGate(Number(e.target.value));
-            setGate(mic.gateDb);
-          }}
-          className="mt-1"
-        />
-      </label>
+      <RangeField
+        label={`Gate: ${gate} dBFS (quieter sound is never a note)`}
+        min={GATE_MIN_DB}
+        max={GATE_MAX_DB}
+        step={1}
+        value={gate}
+        onChange={(e) => {
+          mic.setGate(Number(e.target.value));
+          setGate(mic.gateDb);
+        }}
+      />
       <p className="text-caption text-muted">
         Set the gate just above the room: with your instrument silent the bar should stay left of the red line, and
         every note you play should cross it.

@@ -1,4 +1,7 @@
 import { useEffect, useState } from 'react';
+import { CheckboxField } from '@/components/ui/check-field';
+import { RangeField } from '@/components/ui/range-field';
+import { SelectField } from '@/components/ui/select-field';
 import { listOutputs } from '@/lib/midi-output';
 
 export interface HearSettings {
@@ -19,43 +22,30 @@ export function HearYourself({ value, onChange }: { value: HearSettings; onChang
     <fieldset className="rounded-card border border-line bg-raised p-4">
       <legend className="px-1 text-lead font-bold">Hear yourself</legend>
       <div className="flex flex-wrap items-end gap-4">
-        <label className="flex flex-col text-caption font-semibold">
-          Volume
-          <input
-            type="range"
-            min={-40}
-            max={0}
-            step={1}
-            value={value.volumeDb}
-            onChange={(e) => onChange({ ...value, volumeDb: Number(e.target.value) })}
-            className="mt-2 w-40 accent-brass-600"
-            aria-valuetext={`${value.volumeDb} dB`}
-          />
-        </label>
-        <label className="flex items-center gap-2 text-body">
-          <input
-            type="checkbox"
-            checked={value.muted}
-            onChange={(e) => onChange({ ...value, muted: e.target.checked })}
-            className="h-4 w-4 accent-brass-600"
-          />
-          Mute
-        </label>
-        <label className="flex flex-col text-caption font-semibold">
-          Sound from
-          <select
-            className="mt-1 rounded-md border border-line bg-surface px-2 py-1.5 text-body"
-            value={value.outputId ?? ''}
-            onChange={(e) => onChange({ ...value, outputId: e.target.value || null })}
-          >
-            <option value="">Sixfold's synth</option>
-            {outputs.map((o) => (
-              <option key={o.id} value={o.id}>
-                MIDI out: {o.name}
-              </option>
-            ))}
-          </select>
-        </label>
+        <RangeField
+          label="Volume"
+          className="w-40"
+          min={-40}
+          max={0}
+          step={1}
+          value={value.volumeDb}
+          onChange={(e) => onChange({ ...value, volumeDb: Number(e.target.value) })}
+          aria-valuetext={`${value.volumeDb} dB`}
+        />
+        <CheckboxField
+          label="Mute"
+          checked={value.muted}
+          onChange={(e) => onChange({ ...value, muted: e.target.checked })}
+        />
+        <SelectField
+          label="Sound from"
+          value={value.outputId ?? ''}
+          onChange={(e) => onChange({ ...value, outputId: e.target.value || null })}
+          options={[
+            { value: '', label: "Sixfold's synth" },
+            ...outputs.map((o) => ({ value: o.id, label: `MIDI out: ${o.name}` })),
+          ]}
+        />
       </div>
     </fieldset>
   );

@@ -1,8 +1,8 @@
-import { useEffect, useId, useState } from 'react';
+import { useEffect, useId, useRef } from 'react';
+import { useSchemaForm } from '@/components/form/use-schema-form';
 import { Button } from '@/components/ui/button';
+import { NumberField } from '@/components/ui/number-field';
 import type { LoopState } from '../hooks/use-loop';
-
-const field = 'mt-1 w-20 rounded-md border border-line bg-surface px-2 py-1.5 text-body';
 
 /**
  * Loop a passage: pick the measures and a slower tempo; every pass is a take, counted in, and
@@ -24,20 +24,21 @@ export function LoopPanel({
   onEnd: () => void;
 }) {
   const id = useId();
-  const [from, setFrom] = useState(1);
-  const [to, setTo] = useState(Math.min(2, measures));
-  const [tempo, setTempo] = useState(Math.max(20, Math.round(targetTempo * 0.8)));
+  const limits = useRef({ measures, targetTempo });
+  limits.current = { measures, targetTempo };
+  const form = useSchemaForm(() => import('@shared/schemas/practice').then((m) => m.loopInput(() => limits.current)), {
+    mode: 'onChange',
+    defaultValues: { from: 1, to: Math.min(2, measures), tempo: Math.max(20, Math.round(targetTempo * 0.8)) },
+  });
+  // A shorter drill or a slower tempo pulls the passage inside it.
   useEffect(() => {
-    setFrom((f) => Math.min(f, measures));
-    setTo((t) => Math.min(t, measures));
-  }, [measures]);
-  useEffect(() => setTempo((t) => Math.min(t, targetTempo)), [targetTempo]);
-  const bad =
-    from < 1 || to > measures || from > to
-      ? `Choose measures between 1 and ${measures}, the first no later than the last.`
-      : tempo < 20 || tempo > targetTempo
-        ? `Choose a tempo from 20 to the drill's ${targetTempo} bpm.`
-        : null;
+    const v = form.getValues();
+    if (v.from > measures) form.setValue('from', measures);
+    if (v.to > measures) form.setValue('to', measures);
+    if (v.tempo > targetTempo) form.setValue('tempo', targetTempo);
+  }, [measures, targetTempo, form]);
+  const invalid = Object.keys(form.formState.errors).length > 0;
+  const submit = form.handleSubmit((v) => onStart(v.from, v.to, v.tempo));
 
   if (loop) {
     return (
@@ -68,55 +69,43 @@ export function LoopPanel({
     <form
       aria-labelledby={`${id}-h`}
       className="grid gap-3 rounded-card border border-line bg-raised p-4"
-      onSubmit={(e) => {
-        e.preventDefault();
-        if (!bad) onStart(from, to, tempo);
-      }}
+      onSubmit={submit}
+      noValidate
     >
       <h2 id={`${id}-h`} className="text-lead font-bold">
         Loop a passage
       </h2>
-      <fieldset disabled={disabled} className="flex flex-wrap items-end gap-4">
-        <label className="flex flex-col text-caption font-semibold">
-          From measure
-          <input
-            className={field}
-            type="number"
-            min={1}
-            max={measures}
-            value={from}
-            onChange={(e) => setFrom(Math.round(Number(e.target.value)) || 1)}
-          />
-        </label>
-        <label className="flex flex-col text-caption font-semibold">
-          To measure
-          <input
-            className={field}
-            type="number"
-            min={1}
-            max={measures}
-            value={to}
-            onChange={(e) => setTo(Math.round(Number(e.target.value)) || 1)}
-          />
-        </label>
-        <label className="flex flex-col text-caption font-semibold">
-          Loop tempo (bpm)
-          <input
-            className={field}
-            type="number"
-            min={20}
-            max={targetTempo}
-            value={tempo}
-            onChange={(e) => setTempo(Math.round(Number(e.target.value)) || 20)}
-          />
-        </label>
-        <Button type="submit" disabled={bad !== null}>
+      <fieldset disabled={disabled} className="flex flex-wrap items-start gap-4">
+        <NumberField
+          label="From measure"
+          className="w-32"
+          min={1}
+          max={measures}
+          errors={form.errorsOf('from')}
+          {...form.register('from', { valueAsNumber: true, deps: ['to'] })}
+        />
+        <NumberField
+          label="To measure"
+          className="w-32"
+          min={1}
+          max={measures}
+          errors={form.errorsOf('to')}
+          {...form.register('to', { valueAsNumber: true, deps: ['from'] })}
+        />
+        <NumberField
+          label="Loop tempo (bpm)"
+          className="w-36"
+          min={20}
+          max={targetTempo}
+          errors={form.errorsOf('tempo')}
+          {...form.register('tempo', { valueAsNumber: true })}
+        />
+        <Button type="submit" className="self-end" disabled={invalid}>
           Loop these measures
         </Button>
       </fieldset>
-      <p className="text-caption text-muted" role={bad ? 'alert' : undefined}>
-        {bad ??
-          `Each pass is counted in and saved as a take; after a clean pass the tempo climbs toward ${targetTempo} bpm.`}
+      <p className="text-caption text-muted">
+        Each pass is counted in and saved as a take; after a clean pass the tempo climbs toward {targetTempo} bpm.
       </p>
     </form>
   );
