@@ -120,7 +120,6 @@ export function DataTable<T>({
                     scope="col"
                     aria-sort={h.column.getCanSort() ? ariaSort(sorted) : undefined}
                     className={cx(
-                      meta?.hiddenHeader && 'sr-only',
                       !grid && 'px-3 py-2 font-semibold',
                       !grid && !meta?.wrapHeader && 'whitespace-nowrap',
                       meta?.numeric && 'text-right',
@@ -136,6 +135,8 @@ export function DataTable<T>({
                         {label}
                         <span aria-hidden="true">{sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : '↕'}</span>
                       </button>
+                    ) : meta?.hiddenHeader ? (
+                      <span className="sr-only">{label}</span>
                     ) : (
                       label
                     )}

@@ -1,4 +1,6 @@
 import type { AuditEntry } from '@shared/schemas/admin';
+import type { ColumnDef } from '@tanstack/react-table';
+import { DataTable } from '@/components/ui/data-table';
 import { useAudit } from '../api/audit';
 import { formatDateTime } from '@/lib/format-date';
 
@@ -8,6 +10,22 @@ function describe(e: AuditEntry): string {
   if (e.action === 'account.enable') return 'switched back on';
   return e.action;
 }
+
+const columns: ColumnDef<AuditEntry>[] = [
+  {
+    id: 'at',
+    header: 'When',
+    cell: ({ row }) => formatDateTime(row.original.at),
+    meta: { nowrap: true, cellClassName: 'text-muted' },
+  },
+  { id: 'admin', header: 'Admin', cell: ({ row }) => row.original.actor?.name ?? '(removed)' },
+  {
+    id: 'account',
+    header: 'Account',
+    cell: ({ row: { original: e } }) => (e.target ? `${e.target.name} <${e.target.email}>` : '(removed)'),
+  },
+  { id: 'change', header: 'Change', cell: ({ row }) => describe(row.original) },
+];
 
 /** The audit log for admins. */
 export function AuditTable() {
@@ -19,38 +37,13 @@ export function AuditTable() {
         {error.message}
       </p>
     );
-  if (data.entries.length === 0) return <p className="text-muted">Nothing changed yet.</p>;
   return (
-    <div className="overflow-x-auto rounded-card border border-line bg-raised">
-      <table className="w-full text-left text-body">
-        <caption className="sr-only">Audit log</caption>
-        <thead className="border-b border-line text-caption uppercase tracking-wider text-muted">
-          <tr>
-            <th scope="col" className="px-4 py-3">
-              When
-            </th>
-            <th scope="col" className="px-4 py-3">
-              Admin
-            </th>
-            <th scope="col" className="px-4 py-3">
-              Account
-            </th>
-            <th scope="col" className="px-4 py-3">
-              Change
-            </th>
-          </tr>
-        </thead>
-        <tbody>
-          {data.entries.map((e) => (
-            <tr key={e.id} className="border-b border-line last:border-0">
-              <td className="px-4 py-3 text-muted">{formatDateTime(e.at)}</td>
-              <td className="px-4 py-3">{e.actor?.name ?? '(removed)'}</td>
-              <td className="px-4 py-3">{e.target ? `${e.target.name} <${e.target.email}>` : '(removed)'}</td>
-              <td className="px-4 py-3">{describe(e)}</td>
-            </tr>
-          ))}
-        </tbody>
-      </table>
-    </div>
+    <DataTable
+      data={data.entries}
+      columns={columns}
+      getRowId={(e) => String(e.id)}
+      caption="Audit log"
+      empty="Nothing changed yet."
+    />
   );
 }

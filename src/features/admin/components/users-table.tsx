@@ -1,7 +1,9 @@
+import type { AdminUser } from '@shared/schemas/admin';
 import type { Role } from '@shared/schemas/auth';
+import type { ColumnDef } from '@tanstack/react-table';
 import { useState } from 'react';
 import { ConfirmDialog } from '@/components/ui/confirm-dialog';
-import { TableScroll } from '@/components/ui/table-scroll';
+import { DataTable } from '@/components/ui/data-table';
 import { useMe } from '@/features/auth/api/session';
 import { useAdminUsers, useUpdateAdminUser } from '../api/users';
 import { formatDate } from '@/lib/format-date';
@@ -21,6 +23,64 @@ export function UsersTable() {
         {error.message}
       </p>
     );
+  const columns: ColumnDef<AdminUser>[] = [
+    { id: 'name', header: 'Name', accessorKey: 'name', meta: { rowHeader: true, nowrap: true } },
+    { id: 'email', header: 'E-mail', accessorKey: 'email' },
+    {
+      id: 'role',
+      header: 'Role',
+      cell: ({ row: { original: u } }) =>
+        u.id === me?.id ? (
+          <span className="capitalize">{u.role}</span>
+        ) : (
+          <select
+            aria-label={`Role of ${u.name}`}
+            value={pending?.id === u.id ? pending.to : u.role}
+            disabled={update.isPending}
+            onChange={(e) => setPending({ id: u.id, name: u.name, from: u.role, to: e.target.value as Role })}
+            className="rounded-lg border border-line bg-raised px-2 py-1 capitalize"
+          >
+            {ROLES.map((r) => (
+              <option key={r} value={r}>
+                {r}
+              </option>
+            ))}
+          </select>
+        ),
+    },
+    {
+      id: 'status',
+      header: 'Status',
+      cell: ({ row: { original: u } }) =>
+        u.disabled ? (
+          <span className="text-ember-700 dark:text-ember-100">Switched off</span>
+        ) : (
+          <span className="text-reed-700 dark:text-reed-100">Active</span>
+        ),
+    },
+    {
+      id: 'joined',
+      header: 'Joined',
+      cell: ({ row: { original: u } }) => formatDate(u.createdAt),
+      meta: { nowrap: true, cellClassName: 'text-muted' },
+    },
+    {
+      id: 'switch',
+      header: 'Switch',
+      meta: { hiddenHeader: true },
+      cell: ({ row: { original: u } }) =>
+        u.id === me?.id ? null : (
+          <button
+            type="button"
+            className="whitespace-nowrap rounded-lg border border-line px-3 py-1 font-semibold hover:border-ink-300"
+            disabled={update.isPending}
+            onClick={() => update.mutate({ id: u.id, disabled: !u.disabled })}
+          >
+            {u.disabled ? `Switch ${u.name} on` : `Switch ${u.name} off`}
+          </button>
+        ),
+    },
+  ];
   return (
     <div className="grid gap-2">
       {update.error ? (
@@ -49,80 +109,13 @@ export function UsersTable() {
             } The change is written to the audit log.`
           : null}
       </ConfirmDialog>
-      <TableScroll label="Accounts, scrolls sideways">
-        <table className="w-full text-left text-body">
-          <caption className="sr-only">Accounts</caption>
-          <thead className="border-b border-line text-caption uppercase tracking-wider text-muted">
-            <tr>
-              <th scope="col" className="px-4 py-3">
-                Name
-              </th>
-              <th scope="col" className="px-4 py-3">
-                E-mail
-              </th>
-              <th scope="col" className="px-4 py-3">
-                Role
-              </th>
-              <th scope="col" className="px-4 py-3">
-                Status
-              </th>
-              <th scope="col" className="px-4 py-3">
-                Joined
-              </th>
-              <th scope="col" className="px-4 py-3">
-                <span className="sr-only">Switch</span>
-              </th>
-            </tr>
-          </thead>
-          <tbody>
-            {data.users.map((u) => (
-              <tr key={u.id} className="border-b border-line last:border-0">
-                <td className="whitespace-nowrap px-4 py-3 font-semibold">{u.name}</td>
-                <td className="px-4 py-3">{u.email}</td>
-                <td className="px-4 py-3">
-                  {u.id === me?.id ? (
-                    <span className="capitalize">{u.role}</span>
-                  ) : (
-                    <select
-                      aria-label={`Role of ${u.name}`}
-                      value={pending?.id === u.id ? pending.to : u.role}
-                      disabled={update.isPending}
-                      onChange={(e) => setPending({ id: u.id, name: u.name, from: u.role, to: e.target.value as Role })}
-                      className="rounded-lg border border-line bg-raised px-2 py-1 capitalize"
-                    >
-                      {ROLES.map((r) => (
-                        <option key={r} value={r}>
-                          {r}
-                        </option>
-                      ))}
-                    </select>
-                  )}
-                </td>
-                <td className="px-4 py-3">
-                  {u.disabled ? (
-                    <span className="text-ember-700 dark:text-ember-100">Switched off</span>
-                  ) : (
-                    <span className="text-reed-700 dark:text-reed-100">Active</span>
-                  )}
-                </td>
-                <td className="px-4 py-3 text-muted">{formatDate(u.createdAt)}</td>
-                <td className="px-4 py-3">
-                  {u.id === me?.id ? null : (
-                    <button
-                      type="button"
-                      className="whitespace-nowrap rounded-lg border border-line px-3 py-1 font-semibold hover:border-ink-300"
-                      disabled={update.isPending}
-                      onClick={() => update.mutate({ id: u.id, disabled: !u.disabled })}
-                    >
-                      {u.disabled ? `Switch ${u.name} on` : `Switch ${u.name} off`}
-                    </button>
-                  )}
-                </td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      </TableScroll>
+      <DataTable
+        data={data.users}
+        columns={columns}
+        getRowId={(u) => u.id}
+        caption="Accounts"
+        empty="No accounts yet."
+      />
     </div>
   );
 }
