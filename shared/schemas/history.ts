@@ -89,3 +89,17 @@ export const ImportTakeFields = z.object({
   mode: z.enum(['timed', 'free']).optional(),
 });
 export type ImportTakeFields = z.infer<typeof ImportTakeFields>;
+
+/**
+ * The import form in the browser: the file, the drill it was played from and the downbeat,
+ * checked as the server checks the multipart fields (`ImportTakeFields`) and the file's size.
+ */
+export const ImportTakeInput = z.object({
+  file: z
+    .custom<File>((v) => typeof File !== 'undefined' && v instanceof File, { error: 'Choose a MIDI file' })
+    .refine((f) => f.size > 0, { error: 'That file is empty' })
+    .refine((f) => f.size <= MAX_IMPORT_BYTES, { error: 'At most 1 MB; a MIDI take is far smaller' }),
+  spec: DrillSpec,
+  offsetMs: ImportTakeFields.shape.offsetMs,
+});
+export type ImportTakeInput = z.infer<typeof ImportTakeInput>;

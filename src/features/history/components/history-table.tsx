@@ -4,6 +4,9 @@ import type { ColumnDef, OnChangeFn, SortingState } from '@tanstack/react-table'
 import { Link, useSearchParams } from 'react-router-dom';
 import { type TakeListParams, useTakes } from '../api/takes';
 import { DataTable } from '@/components/ui/data-table';
+import { SelectField } from '@/components/ui/select-field';
+import { TextField } from '@/components/ui/text-field';
+import { ApiError } from '@/lib/api-client';
 import { formatDateTime } from '@/lib/format-date';
 
 const columns: ColumnDef<TakeSummary>[] = [
@@ -40,6 +43,7 @@ const columns: ColumnDef<TakeSummary>[] = [
 const FILTERS = ['key', 'pattern', 'pair', 'instrument', 'from', 'to'] as const;
 /** The text filters match exactly, so each shows an example of what it takes. */
 const FILTER_EXAMPLES = { pattern: 'four-three', pair: 'D/C', instrument: 'piano' } as const;
+const FILTER_LABELS = { pattern: 'Pattern', pair: 'Pair', instrument: 'Instrument', from: 'From', to: 'To' } as const;
 
 /** The player's takes, sorted, filtered and paged by the server; the address holds the state. */
 export function HistoryTable() {
@@ -56,6 +60,8 @@ export function HistoryTable() {
     player: read('player'),
   };
   const { data, isPending, error, isFetching } = useTakes(query);
+  // A filter the server refused shows its message on that filter.
+  const refused: Record<string, string[] | undefined> = error instanceof ApiError ? (error.fields ?? {}) : {};
   const set = (next: Record<string, string | undefined>) => {
     const p = new URLSearchParams(params);
     for (const [k, v] of Object.entries(next)) v ? p.set(k, v) : p.delete(k);
@@ -70,41 +76,34 @@ export function HistoryTable() {
   const pages = data ? Math.max(1, Math.ceil(data.total / data.pageSize)) : 1;
   return (
     <div className="grid gap-4">
-      <form className="flex flex-wrap items-end gap-3" aria-label="Filter takes" onSubmit={(e) => e.preventDefault()}>
-        <label className="grid gap-1 text-caption font-semibold">
-          Key
-          <select
-            value={read('key') ?? ''}
-            onChange={(e) => set({ key: e.target.value, page: undefined })}
-            className="rounded-lg border border-line bg-raised px-2 py-1"
-          >
-            <option value="">any</option>
-            {KEYS.map((k) => (
-              <option key={k}>{k}</option>
-            ))}
-          </select>
-        </label>
+      <form className="flex flex-wrap items-start gap-3" aria-label="Filter takes" onSubmit={(e) => e.preventDefault()}>
+        <SelectField
+          label="Key"
+          value={read('key') ?? ''}
+          onChange={(e) => set({ key: e.target.value, page: undefined })}
+          options={[{ value: '', label: 'any' }, ...KEYS.map((k) => ({ value: k, label: k }))]}
+          errors={refused.key}
+        />
         {(['pattern', 'pair', 'instrument'] as const).map((f) => (
-          <label key={f} className="grid gap-1 text-caption font-semibold capitalize">
-            {f}
-            <input
-              defaultValue={read(f) ?? ''}
-              placeholder={FILTER_EXAMPLES[f]}
-              onBlur={(e) => set({ [f]: e.target.value.trim(), page: undefined })}
-              className="w-32 rounded-lg border border-line bg-raised px-2 py-1"
-            />
-          </label>
+          <TextField
+            key={f}
+            label={FILTER_LABELS[f]}
+            className="w-36"
+            defaultValue={read(f) ?? ''}
+            placeholder={FILTER_EXAMPLES[f]}
+            onBlur={(e) => set({ [f]: e.target.value.trim(), page: undefined })}
+            errors={refused[f]}
+          />
         ))}
         {(['from', 'to'] as const).map((f) => (
-          <label key={f} className="grid gap-1 text-caption font-semibold capitalize">
-            {f}
-            <input
-              type="date"
-              value={read(f) ?? ''}
-              onChange={(e) => set({ [f]: e.target.value, page: undefined })}
-              className="rounded-lg border border-line bg-raised px-2 py-1"
-            />
-          </label>
+          <TextField
+            key={f}
+            label={FILTER_LABELS[f]}
+            type="date"
+            value={read(f) ?? ''}
+            onChange={(e) => set({ [f]: e.target.value, page: undefined })}
+            errors={refused[f]}
+          />
         ))}
       </form>
       {error ? <p role="alert">{error.message}</p> : null}
