@@ -1,5 +1,7 @@
-import { formatPrice } from '@shared/schemas/books';
+import { type BookSales, formatPrice } from '@shared/schemas/books';
+import type { ColumnDef } from '@tanstack/react-table';
 import { Bar, BarChart, CartesianGrid, Legend, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
+import { DataTable } from '@/components/ui/data-table';
 import { useSales } from '../api/books';
 
 /** Mid-tone colours that read on the light and the dark page alike. */
@@ -14,6 +16,34 @@ function lastDays(now = Date.now()): string[] {
     new Date(today - (DAYS_SHOWN - 1 - i) * DAY_MS).toISOString().slice(0, 10),
   );
 }
+
+const columns: ColumnDef<BookSales>[] = [
+  {
+    id: 'book',
+    header: 'Book',
+    cell: ({ row: { original: b } }) => (
+      <>
+        {b.title}
+        {b.published ? null : <span className="ml-2 text-caption font-normal text-muted">(draft)</span>}
+      </>
+    ),
+    meta: { rowHeader: true },
+  },
+  {
+    id: 'price',
+    header: 'Price',
+    cell: ({ row: { original: b } }) => formatPrice(b.priceMinor, b.currency),
+    meta: { numeric: true, nowrap: true },
+  },
+  { id: 'sold', header: 'Sold', accessorKey: 'sales', meta: { numeric: true } },
+  { id: 'refunded', header: 'Refunded', accessorKey: 'refunds', meta: { numeric: true } },
+  {
+    id: 'revenue',
+    header: 'Revenue',
+    cell: ({ row: { original: b } }) => `${(b.revenueMinor / 100).toFixed(2)} ${b.currency}`,
+    meta: { numeric: true, nowrap: true },
+  },
+];
 
 /** Sales per book (table) and books sold per day (chart, with its figures as a table too). */
 export function SalesReport() {
@@ -34,44 +64,13 @@ export function SalesReport() {
   const series = data.days.length > 0 ? [...byDay.values()] : [];
   return (
     <div className="grid gap-6">
-      <div className="overflow-x-auto rounded-card border border-line bg-raised">
-        <table className="w-full text-left text-body" data-testid="sales-table">
-          <caption className="sr-only">Sales per book</caption>
-          <thead className="border-b border-line text-caption uppercase tracking-wider text-muted">
-            <tr>
-              <th scope="col" className="px-4 py-3">
-                Book
-              </th>
-              <th scope="col" className="px-4 py-3">
-                Price
-              </th>
-              <th scope="col" className="px-4 py-3 text-right">
-                Sold
-              </th>
-              <th scope="col" className="px-4 py-3 text-right">
-                Refunded
-              </th>
-              <th scope="col" className="px-4 py-3 text-right">
-                Revenue
-              </th>
-            </tr>
-          </thead>
-          <tbody>
-            {data.books.map((b) => (
-              <tr key={b.id} className="border-b border-line last:border-0">
-                <th scope="row" className="px-4 py-3 font-semibold">
-                  {b.title}
-                  {b.published ? null : <span className="ml-2 text-caption font-normal text-muted">(draft)</span>}
-                </th>
-                <td className="px-4 py-3">{formatPrice(b.priceMinor, b.currency)}</td>
-                <td className="px-4 py-3 text-right tabular-nums">{b.sales}</td>
-                <td className="px-4 py-3 text-right tabular-nums">{b.refunds}</td>
-                <td className="px-4 py-3 text-right tabular-nums">{`${(b.revenueMinor / 100).toFixed(2)} ${b.currency}`}</td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      </div>
+      <DataTable
+        data={data.books}
+        columns={columns}
+        getRowId={(b) => b.id}
+        caption="Sales per book"
+        testId="sales-table"
+      />
       <section className="grid gap-2" aria-label="Books sold per day">
         <h2 className="text-lead font-bold">Sold per day, last 90 days</h2>
         {series.length === 0 ? (
