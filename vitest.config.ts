@@ -34,6 +34,7 @@ export default defineConfig({
         test: {
           name: 'server',
           include: ['tests/server/**/*.test.ts'],
+          setupFiles: ['tests/helpers/fast-check-seed.ts', 'tests/helpers/response-contract-setup.ts'],
           globalSetup: ['tests/helpers/global-setup.ts'],
         },
       },

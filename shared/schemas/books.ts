@@ -183,6 +183,10 @@ export const AdminPurchasesResponse = z.object({ purchases: z.array(AdminPurchas
 export type AdminPurchasesResponse = z.infer<typeof AdminPurchasesResponse>;
 export const AdminPurchaseResponse = z.object({ purchase: AdminPurchase });
 export type AdminPurchaseResponse = z.infer<typeof AdminPurchaseResponse>;
+/** `POST /api/payments/webhook`: the event was read; `granted` when this delivery granted a book. */
+export const PaymentWebhookResponse = z.object({ received: z.literal(true), granted: z.boolean() });
+export type PaymentWebhookResponse = z.infer<typeof PaymentWebhookResponse>;
+
 export const PurchaseParams = z.object({ id: z.uuid({ error: 'That is not a purchase id' }) });
 
 /** "12.00 EUR" */

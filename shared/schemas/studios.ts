@@ -91,6 +91,10 @@ export type InvitePreview = z.infer<typeof InvitePreview>;
 export const InvitePreviewResponse = z.object({ invite: InvitePreview });
 export type InvitePreviewResponse = z.infer<typeof InvitePreviewResponse>;
 
+/** `POST /api/invites/:token/accept`: the studio the signed-in player has joined. */
+export const AcceptInviteResponse = z.object({ studio: z.object({ studioId: z.string(), studioName: z.string() }) });
+export type AcceptInviteResponse = z.infer<typeof AcceptInviteResponse>;
+
 /** Sign up through an invite: the address is the invite's, the role is player. */
 export const InviteSignUpInput = z.object({ name: DisplayName, password: NewPassword });
 export type InviteSignUpInput = z.infer<typeof InviteSignUpInput>;

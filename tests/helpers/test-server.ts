@@ -5,6 +5,7 @@ import { parseEnv } from '../../server/env';
 import { type FakeSmtp, startFakeSmtp } from '../../server/mail/fake-smtp';
 import { createSmtpMailer } from '../../server/mail/mailer';
 import { startFakeCheckout } from '../../server/payments/fake-checkout';
+import { checkResponseContracts } from './response-contract';
 
 /**
  * An app on the real test database, as each server test file uses it. Mail goes through
@@ -39,6 +40,8 @@ export function createTestApp(overrides: Record<string, string> = {}) {
     from: env.MAIL_FROM,
   });
   const app = createApp({ db, pool, env, mailer });
+  // Every 2xx JSON answer is parsed with its route's schema; the server tests fail on a mismatch.
+  checkResponseContracts(app);
   return {
     app,
     db,
