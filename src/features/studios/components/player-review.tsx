@@ -1,9 +1,33 @@
+import type { TakeSummary } from '@shared/schemas/assignments';
+import type { ColumnDef } from '@tanstack/react-table';
 import { Link } from 'react-router-dom';
 import { useStudioPlayer } from '../api/board';
-import { TableScroll } from '@/components/ui/table-scroll';
+import { DataTable } from '@/components/ui/data-table';
 import { AssignmentTrend, creditRule } from './assignment-trend';
 import { pct, StatusBadge } from './status-badge';
 import { formatDateTime, formatDue } from '@/lib/format-date';
+
+const takeColumns: ColumnDef<TakeSummary>[] = [
+  {
+    id: 'when',
+    header: 'When',
+    cell: ({ row: { original: t } }) => (
+      <Link className="underline" to={`/takes/${t.id}`}>
+        {formatDateTime(t.startedAt)}
+      </Link>
+    ),
+    meta: { nowrap: true },
+  },
+  {
+    id: 'drill',
+    header: 'Drill',
+    cell: ({ row: { original: t } }) => `${t.pair} · ${t.pattern} · ${t.key}`,
+    meta: { nowrap: true },
+  },
+  { id: 'tempo', header: 'Tempo', accessorKey: 'tempo', meta: { numeric: true } },
+  { id: 'accuracy', header: 'Accuracy', cell: ({ row }) => pct(row.original.accuracy), meta: { numeric: true } },
+  { id: 'remarks', header: 'Remarks', cell: ({ row }) => row.original.remarkCount || '', meta: { numeric: true } },
+];
 
 /** One player as their teacher reviews them: assignments, their takes, and their own views (read-only). */
 export function PlayerReview({ studioId, playerId }: { studioId: string; playerId: string }) {
@@ -48,48 +72,15 @@ export function PlayerReview({ studioId, playerId }: { studioId: string; playerI
       </section>
       <section className="grid gap-2">
         <h2 className="text-lead font-bold">Takes</h2>
-        {data.takes.length === 0 ? <p className="text-muted">No takes yet.</p> : null}
-        <TableScroll label="Their takes, scrolls sideways">
-          <table className="w-full text-left text-body" data-testid="player-takes">
-            <caption className="sr-only">Takes</caption>
-            <thead className="text-caption text-muted">
-              <tr>
-                <th scope="col" className="px-3 py-2">
-                  When
-                </th>
-                <th scope="col" className="px-3 py-2">
-                  Drill
-                </th>
-                <th scope="col" className="px-3 py-2">
-                  Tempo
-                </th>
-                <th scope="col" className="px-3 py-2">
-                  Accuracy
-                </th>
-                <th scope="col" className="px-3 py-2">
-                  Remarks
-                </th>
-              </tr>
-            </thead>
-            <tbody>
-              {data.takes.map((t) => (
-                <tr key={t.id} className="border-t border-line">
-                  <td className="whitespace-nowrap px-3 py-2">
-                    <Link className="underline" to={`/takes/${t.id}`}>
-                      {formatDateTime(t.startedAt)}
-                    </Link>
-                  </td>
-                  <td className="whitespace-nowrap px-3 py-2">
-                    {t.pair} · {t.pattern} · {t.key}
-                  </td>
-                  <td className="px-3 py-2 tabular-nums">{t.tempo}</td>
-                  <td className="px-3 py-2 tabular-nums">{pct(t.accuracy)}</td>
-                  <td className="px-3 py-2">{t.remarkCount || ''}</td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
-        </TableScroll>
+        <DataTable
+          data={data.takes}
+          columns={takeColumns}
+          getRowId={(t) => t.id}
+          caption="Takes"
+          scrollLabel="Their takes, scrolls sideways"
+          testId="player-takes"
+          empty="No takes yet."
+        />
       </section>
     </div>
   );

@@ -1,6 +1,8 @@
+import type { BoardRow } from '@shared/schemas/assignments';
+import type { ColumnDef } from '@tanstack/react-table';
 import { Link } from 'react-router-dom';
 import { TrendBars, trendDomain } from '@/components/charts/trend-bars';
-import { TableScroll } from '@/components/ui/table-scroll';
+import { DataTable } from '@/components/ui/data-table';
 import { useBoard } from '../api/board';
 import { pct, StatusBadge } from './status-badge';
 import { formatDate, formatDue } from '@/lib/format-date';
@@ -24,64 +26,66 @@ export function StudioBoard({ studioId }: { studioId: string }) {
     data.rows.flatMap((r) => r.trend),
     { minSpan: 0.1, floor: 0, ceiling: 1 },
   );
+  const columns: ColumnDef<BoardRow>[] = [
+    {
+      id: 'player',
+      header: 'Player',
+      cell: ({ row: { original: r } }) => (
+        <Link
+          to={`/studio/${studioId}/players/${r.player.id}`}
+          className="underline decoration-brass-500 underline-offset-4"
+        >
+          {r.player.name}
+        </Link>
+      ),
+      meta: { rowHeader: true },
+    },
+    ...data.assignments.map(
+      (a): ColumnDef<BoardRow> => ({
+        id: a.id,
+        header: () => (
+          <>
+            <span className="block max-w-48">{a.title}</span>
+            <span className="font-normal">due {formatDue(a.dueAt)}</span>
+          </>
+        ),
+        cell: ({ row: { original: r } }) => (r.statuses[a.id] ? <StatusBadge status={r.statuses[a.id]} /> : '—'),
+        meta: { wrapHeader: true, headerClassName: 'normal-case tracking-normal' },
+      }),
+    ),
+    {
+      id: 'lastPractice',
+      header: 'Last practice',
+      cell: ({ row: { original: r } }) => (r.lastPracticeAt ? formatDate(r.lastPracticeAt) : 'Not yet'),
+      meta: { nowrap: true, cellClassName: 'text-muted' },
+    },
+    {
+      id: 'trend',
+      header: 'Accuracy, 6 weeks',
+      cell: ({ row: { original: r } }) => (
+        <>
+          <TrendBars
+            values={r.trend}
+            labels={WEEK_LABELS}
+            format={(v) => pct(v)}
+            what={`${r.player.name}'s accuracy`}
+            domain={domain}
+          />{' '}
+          <span className="ml-2 text-caption text-muted">
+            {r.takesThisWeek} {r.takesThisWeek === 1 ? 'take' : 'takes'} this week
+          </span>
+        </>
+      ),
+      meta: { nowrap: true },
+    },
+  ];
   return (
-    <TableScroll label="Players and assignments, scrolls sideways">
-      <table className="w-full text-left text-body" data-testid="studio-board">
-        <caption className="sr-only">Players and assignments</caption>
-        <thead className="border-b border-line text-caption text-muted">
-          <tr>
-            <th scope="col" className="px-3 py-2">
-              Player
-            </th>
-            {data.assignments.map((a) => (
-              <th scope="col" key={a.id} className="px-3 py-2 font-semibold">
-                <span className="block max-w-48">{a.title}</span>
-                <span className="font-normal">due {formatDue(a.dueAt)}</span>
-              </th>
-            ))}
-            <th scope="col" className="px-3 py-2">
-              Last practice
-            </th>
-            <th scope="col" className="px-3 py-2">
-              Accuracy, 6 weeks
-            </th>
-          </tr>
-        </thead>
-        <tbody>
-          {data.rows.map((r) => (
-            <tr key={r.player.id} className="border-b border-line last:border-0">
-              <th scope="row" className="px-3 py-2 font-semibold">
-                <Link
-                  to={`/studio/${studioId}/players/${r.player.id}`}
-                  className="underline decoration-brass-500 underline-offset-4"
-                >
-                  {r.player.name}
-                </Link>
-              </th>
-              {data.assignments.map((a) => (
-                <td key={a.id} className="px-3 py-2">
-                  {r.statuses[a.id] ? <StatusBadge status={r.statuses[a.id]} /> : '—'}
-                </td>
-              ))}
-              <td className="whitespace-nowrap px-3 py-2 text-muted">
-                {r.lastPracticeAt ? formatDate(r.lastPracticeAt) : 'Not yet'}
-              </td>
-              <td className="whitespace-nowrap px-3 py-2">
-                <TrendBars
-                  values={r.trend}
-                  labels={WEEK_LABELS}
-                  format={(v) => pct(v)}
-                  what={`${r.player.name}'s accuracy`}
-                  domain={domain}
-                />{' '}
-                <span className="ml-2 text-caption text-muted">
-                  {r.takesThisWeek} {r.takesThisWeek === 1 ? 'take' : 'takes'} this week
-                </span>
-              </td>
-            </tr>
-          ))}
-        </tbody>
-      </table>
-    </TableScroll>
+    <DataTable
+      data={data.rows}
+      columns={columns}
+      getRowId={(r) => r.player.id}
+      caption="Players and assignments"
+      testId="studio-board"
+    />
   );
 }
