@@ -14,8 +14,20 @@ import { MarkLayer, type NoteGeometry } from './marks';
 import { svgEl } from './svg';
 import type { DrawnEvent } from './measure';
 import { BRACE_ROOM, narrowestLine, planSystems } from './layout';
-import { buildSystem, LEFT, layoutSystem, reach, type SystemLayout, TOP_LINE } from './system';
+import {
+  type BuiltSystem,
+  buildSystem,
+  LEFT,
+  layoutSystem,
+  moveSystem,
+  reach,
+  type SystemLayout,
+  TOP_LINE,
+} from './system';
 import { aChromasOf, triadOf } from './triad-of';
+import { speedUpVexFlow } from './vexflow-speed';
+
+speedUpVexFlow();
 
 let fontsReady: Promise<void> | null = null;
 
@@ -53,7 +65,6 @@ export async function renderStaff(
   options: RenderOptions = {},
 ): Promise<RenderedStaff> {
   await loadNotationFonts();
-  host.replaceChildren();
   const grand = notation.staves.length > 1;
   const x0 = LEFT + (grand ? BRACE_ROOM : 0);
   // On a narrow screen, lay out at least one measure at a readable spacing and let the drawing
@@ -63,11 +74,13 @@ export async function renderStaff(
   const plans = planSystems(notation.measures, notation.staves.length, usable);
 
   const tagged = drill.notes.some((n) => n.source !== 'scale');
-  // First pass: build each line at y = 0 to see how far its notes reach, then stack the lines.
+  // Build each line once at y = 0 to see how far its notes reach, stack the lines, then move
+  // each line to its place.
   const layouts: SystemLayout[] = [];
+  const systems: BuiltSystem[] = [];
   let cursor = 0;
   for (const plan of plans) {
-    const trial = buildSystem(
+    const system = buildSystem(
       notation,
       drill,
       plan,
@@ -76,22 +89,27 @@ export async function renderStaff(
     );
     const reaches = notation.staves.map((_c, s) =>
       reach(
-        trial.built.map((parts) => parts[s]),
+        system.built.map((parts) => parts[s]),
         TOP_LINE,
       ),
     );
     const layout = layoutSystem(notation, plan, reaches, cursor, Boolean(options.marksRow), tagged);
+    moveSystem(system, layout.staveYs);
     layouts.push(layout);
+    systems.push(system);
     cursor = layout.bottom;
   }
   const height = Math.ceil(cursor + 4);
 
-  const renderer = new Renderer(host as HTMLDivElement, Renderer.Backends.SVG);
+  // Drawn off the page and put in at the end: thousands of elements added to a detached tree
+  // cost the browser far less than the same added one by one to the page.
+  const stage = document.createElement('div');
+  const renderer = new Renderer(stage, Renderer.Backends.SVG);
   renderer.resize(width, height);
   const ctx = renderer.getContext();
   ctx.setFillStyle('currentColor');
   ctx.setStrokeStyle('currentColor');
-  const svg = host.querySelector('svg') as SVGSVGElement;
+  const svg = stage.querySelector('svg') as SVGSVGElement;
   // The figure around the drawing carries the words; the drawing itself is decoration to a reader.
   svg.setAttribute('aria-hidden', 'true');
   svg.setAttribute('viewBox', `0 0 ${width} ${height}`);
@@ -109,7 +127,7 @@ export async function renderStaff(
 
   plans.forEach((plan, si) => {
     const layout = layouts[si];
-    const { staves, built } = buildSystem(notation, drill, plan, layout.staveYs, x0);
+    const { staves, built } = systems[si];
     // staves is [measure][staff]: the line's top staff and its bottom one.
     const topLine = staves[0][0].getYForLine(0);
     const systemBottomLine = staves[0][staves[0].length - 1].getYForLine(4);
@@ -137,10 +155,13 @@ export async function renderStaff(
     });
 
     const drawn: DrawnEvent[] = built.flatMap((parts) => parts.flatMap((p) => p.notes));
+    // The drawing is not on the page yet, so VexFlow's own lookup (by document id) finds nothing.
+    const groups = new Map<string, SVGElement>();
+    for (const g of svg.querySelectorAll<SVGElement>('g.vf-stavenote')) groups.set(g.id, g);
     for (const { event, note } of drawn) {
       const i = event.noteIndex;
       if (i === undefined || i < 0 || i >= drill.notes.length) continue;
-      const el = note.getSVGElement();
+      const el = groups.get(`vf-${note.getAttribute('id')}`);
       const begin = note.getNoteHeadBeginX();
       const end = note.getNoteHeadEndX();
       geometry[i] = { x: (begin + end) / 2, laneY: layout.marksY, top: topLine - 10, bottom: systemBottomLine + 10 };
@@ -176,6 +197,7 @@ export async function renderStaff(
 
   const markGroup = ctx.openGroup('sf-marks') as SVGGElement;
   ctx.closeGroup();
+  host.replaceChildren(svg);
   return { notes, height, marks: new MarkLayer(svg, notes, geometry, markGroup) };
 }
 

@@ -69,6 +69,21 @@ export function buildSystem(
   return { staves, built };
 }
 
+/**
+ * Moves a built line to its staves' final heights (one per staff), so a line is built and
+ * formatted once: the staves take their new y and every note, rest and invisible note takes
+ * its staff again, which places its heads and stems. Horizontal spacing and the beams' stem
+ * lengths do not depend on the height, so they stay as formatted.
+ */
+export function moveSystem(system: BuiltSystem, staveYs: number[]): void {
+  system.staves.forEach((row, k) => {
+    row.forEach((stave, s) => {
+      stave.setY(staveYs[s]);
+      for (const t of system.built[k][s].voice.getTickables()) t.setStave(stave);
+    });
+  });
+}
+
 /** How far a staff's drawing reaches above its top line and below its bottom line, in px. */
 export function reach(parts: BuiltStaffMeasure[], topLine: number): { above: number; below: number } {
   const bottomLine = topLine + STAFF_HEIGHT;
