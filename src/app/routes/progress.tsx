@@ -1,4 +1,5 @@
 import { useSearchParams } from 'react-router-dom';
+import { TextField } from '@/components/ui/text-field';
 import type { MapFilters } from '@/features/maps/api/maps';
 import { BeatMap } from '@/features/maps/components/beat-map';
 import { KeyMap } from '@/features/maps/components/key-map';
@@ -9,6 +10,7 @@ import { WeeklyByDrill } from '@/features/maps/components/weekly-by-drill';
 
 /** The text filters match exactly, so each shows an example of what it takes. */
 const FILTER_EXAMPLES = { instrument: 'piano', pattern: 'four-three', pair: 'D/C' } as const;
+const FILTER_LABELS = { instrument: 'Instrument', pattern: 'Pattern', pair: 'Pair', from: 'From', to: 'To' } as const;
 
 /** The key, range and beat maps and the charts; filters live in the address. */
 export function ProgressRoute() {
@@ -33,28 +35,29 @@ export function ProgressRoute() {
           Hover or focus a cell or bar for its figures; each map also reads as a table.
         </p>
       </header>
-      <form className="flex flex-wrap gap-3" aria-label="Filter the maps" onSubmit={(e) => e.preventDefault()}>
+      <form
+        className="flex flex-wrap items-start gap-3"
+        aria-label="Filter the maps"
+        onSubmit={(e) => e.preventDefault()}
+      >
         {(['instrument', 'pattern', 'pair'] as const).map((k) => (
-          <label key={k} className="grid gap-1 text-caption font-semibold capitalize">
-            {k}
-            <input
-              defaultValue={params.get(k) ?? ''}
-              placeholder={FILTER_EXAMPLES[k]}
-              onBlur={(e) => set(k, e.target.value.trim())}
-              className="w-32 rounded-lg border border-line bg-raised px-2 py-1"
-            />
-          </label>
+          <TextField
+            key={k}
+            label={FILTER_LABELS[k]}
+            className="w-36"
+            defaultValue={params.get(k) ?? ''}
+            placeholder={FILTER_EXAMPLES[k]}
+            onBlur={(e) => set(k, e.target.value.trim())}
+          />
         ))}
         {(['from', 'to'] as const).map((k) => (
-          <label key={k} className="grid gap-1 text-caption font-semibold capitalize">
-            {k}
-            <input
-              type="date"
-              value={params.get(k) ?? ''}
-              onChange={(e) => set(k, e.target.value)}
-              className="rounded-lg border border-line bg-raised px-2 py-1"
-            />
-          </label>
+          <TextField
+            key={k}
+            label={FILTER_LABELS[k]}
+            type="date"
+            value={params.get(k) ?? ''}
+            onChange={(e) => set(k, e.target.value)}
+          />
         ))}
       </form>
       <KeyMap filters={filters} />

@@ -4,17 +4,19 @@ type Props = SelectHTMLAttributes<HTMLSelectElement> & {
   label: string;
   options: ReadonlyArray<{ value: string; label: string }>;
   errors?: string[];
+  /** the label is read out but not shown (a heading beside the select already says it) */
+  hideLabel?: boolean;
 };
 
 /** A labelled select whose errors sit right under it (and are tied to it for screen readers). */
-export function SelectField({ label, options, errors, id, className = '', ...props }: Props) {
+export function SelectField({ label, options, errors, hideLabel, id, className = '', ...props }: Props) {
   const auto = useId();
   const selectId = id ?? auto;
   const errorId = `${selectId}-error`;
   const invalid = Boolean(errors && errors.length > 0);
   return (
     <div className={`grid min-w-0 gap-1 ${className}`}>
-      <label htmlFor={selectId} className="text-body font-semibold">
+      <label htmlFor={selectId} className={hideLabel ? 'sr-only' : 'text-body font-semibold'}>
         {label}
       </label>
       <select

@@ -1,5 +1,7 @@
-import { type FormEvent, useState } from 'react';
+import { useSchemaForm } from '@/components/form/use-schema-form';
+import { Button } from '@/components/ui/button';
 import { FormMessage } from '@/components/ui/form-message';
+import { NumberField } from '@/components/ui/number-field';
 import { type MapFilters, useCalendar, useSetWeeklyGoal } from '../api/maps';
 import { formatDayMonth, formatLongDay } from '@/lib/format-date';
 
@@ -33,39 +35,38 @@ function weeksOf(days: { day: string; minutes: number; takes: number }[], today:
   });
 }
 
+/** An empty box clears the goal; anything else is read as a number (the schema judges it). */
+const goalOf = (v: unknown) => (v === '' || v === null || v === undefined ? null : Number(v));
+
 function GoalForm({ goal }: { goal: number | null }) {
   const set = useSetWeeklyGoal();
-  const [value, setValue] = useState(goal === null ? '' : String(goal));
-  const onSubmit = (e: FormEvent) => {
-    e.preventDefault();
-    const v = value.trim();
-    set.mutate(v === '' ? null : Number(v));
-  };
+  // The server's own settings schema, narrowed to the goal.
+  const form = useSchemaForm(
+    () => import('@shared/schemas/settings').then((m) => m.UpdateSettingsInput.pick({ weeklyMinutesGoal: true })),
+    { defaultValues: { weeklyMinutesGoal: goal } },
+  );
+  const value = form.watch('weeklyMinutesGoal');
+  const onSubmit = form.handleSubmit((input) =>
+    set.mutate(input.weeklyMinutesGoal ?? null, { onError: form.fromError }),
+  );
   return (
-    <form onSubmit={onSubmit} className="flex flex-wrap items-end gap-2" aria-label="Weekly goal">
-      <label className="grid gap-1 text-caption font-semibold">
-        Your weekly goal, in minutes
-        <input
-          type="number"
-          inputMode="numeric"
-          min={10}
-          max={2000}
-          step={5}
-          value={value}
-          placeholder="e.g. 150"
-          onChange={(e) => setValue(e.target.value)}
-          className="w-32 rounded-lg border border-line bg-raised px-2 py-1 text-body"
-        />
-      </label>
-      <button
-        type="submit"
-        disabled={set.isPending}
-        className="rounded-lg border border-line bg-raised px-3 py-1.5 font-semibold hover:border-ink-300"
-      >
-        {value.trim() === '' && goal !== null ? 'Clear the goal' : 'Set the goal'}
-      </button>
-      {set.error ? <FormMessage tone="error">{set.error.message}</FormMessage> : null}
-      {set.isSuccess ? <span className="text-caption text-muted">Saved.</span> : null}
+    <form onSubmit={onSubmit} className="flex flex-wrap items-start gap-2" aria-label="Weekly goal" noValidate>
+      <NumberField
+        label="Your weekly goal, in minutes"
+        className="w-56"
+        inputMode="numeric"
+        min={10}
+        max={2000}
+        step={5}
+        placeholder="e.g. 150"
+        errors={form.errorsOf('weeklyMinutesGoal')}
+        {...form.register('weeklyMinutesGoal', { setValueAs: goalOf })}
+      />
+      <Button type="submit" variant="quiet" className="mt-7" disabled={set.isPending}>
+        {(value === null || Number.isNaN(value)) && goal !== null ? 'Clear the goal' : 'Set the goal'}
+      </Button>
+      {form.formError ? <FormMessage tone="error">{form.formError}</FormMessage> : null}
+      {set.isSuccess ? <span className="mt-9 text-caption text-muted">Saved.</span> : null}
     </form>
   );
 }

@@ -1,6 +1,7 @@
 import { KEYS } from '@shared/schemas/history';
 import { useState } from 'react';
 import { CartesianGrid, Legend, Line, LineChart, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
+import { SelectField } from '@/components/ui/select-field';
 import { type MapFilters, useTimeline } from '../api/maps';
 import { MapTable } from './map-table';
 
@@ -18,16 +19,13 @@ export function ProgressCharts({ filters }: { filters: MapFilters }) {
     <section className="grid gap-3" aria-label="Accuracy and tempo over time">
       <div className="flex flex-wrap items-center gap-3">
         <h2 className="text-lead font-bold">Accuracy and tempo, key of</h2>
-        <select
-          aria-label="Key"
+        <SelectField
+          label="Key"
+          hideLabel
           value={key}
           onChange={(e) => setChosen(e.target.value)}
-          className="rounded-lg border border-line bg-raised px-2 py-1"
-        >
-          {keys.map((k) => (
-            <option key={k}>{k}</option>
-          ))}
-        </select>
+          options={keys.map((k) => ({ value: k, label: k }))}
+        />
       </div>
       {error ? <p role="alert">{error.message}</p> : null}
       {series.length > 0 ? (
