@@ -1,7 +1,8 @@
 import { KEYS } from '@shared/schemas/history';
+import type { ColumnDef } from '@tanstack/react-table';
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
-import { TableScroll } from '@/components/ui/table-scroll';
+import { DataTable } from '@/components/ui/data-table';
 import { type MapFilters, useKeyMap } from '../api/maps';
 import { cellWords, heatColour, pct } from './heat';
 import { HeatLegend } from './heat-legend';
@@ -16,6 +17,43 @@ export function KeyMap({ filters, historyBase = '/history' }: { filters: MapFilt
   const at = new Map(cells.map((c) => [`${c.key}|${c.pattern}`, c]));
   const link = (key: string, pattern: string) =>
     `${historyBase}?${new URLSearchParams({ key, pattern, ...(filters.player ? { player: filters.player } : {}) })}`;
+  const columns: ColumnDef<string>[] = [
+    {
+      id: 'pattern',
+      header: 'Pattern',
+      cell: ({ row }) => row.original,
+      meta: { hiddenHeader: true, rowHeader: true, cellClassName: 'pr-2 text-right font-semibold' },
+    },
+    ...KEYS.map(
+      (k): ColumnDef<string> => ({
+        id: k,
+        header: k,
+        cell: ({ row: { original: p } }) => {
+          const c = at.get(`${k}|${p}`);
+          if (!c) return null;
+          const words = cellWords(`${k}, ${p}`, c);
+          return (
+            <Link
+              to={link(k, p)}
+              title={words}
+              aria-label={`${words}. Open these takes`}
+              className="flex h-10 w-12 items-center justify-center rounded font-semibold tabular-nums focus:outline-2 focus:outline-offset-2"
+              style={heatColour(c.rate)}
+            >
+              {pct(c.rate)}
+            </Link>
+          );
+        },
+        meta: {
+          headerClassName: 'w-12 text-center font-bold',
+          // a key not played in this pattern: an empty dashed cell, apart from every step of the scale
+          cellClassName: (p) =>
+            at.has(`${k}|${p}`) ? 'h-10 w-12 p-0' : 'h-10 w-12 rounded border border-dashed border-muted',
+          cellProps: (p) => (at.has(`${k}|${p}`) ? {} : { title: `${k}, ${p}: not played` }),
+        },
+      }),
+    ),
+  ];
   return (
     <MapFrame title="Key map" tableView={tableView} onToggle={() => setTableView((v) => !v)}>
       {isPending ? <p className="text-muted">Counting…</p> : null}
@@ -30,57 +68,15 @@ export function KeyMap({ filters, historyBase = '/history' }: { filters: MapFilt
       ) : null}
       {cells.length > 0 && !tableView ? <HeatLegend noData="dashed" /> : null}
       {cells.length > 0 && !tableView ? (
-        <TableScroll label="Key map, scrolls sideways">
-          <table className="border-separate border-spacing-1 text-caption" data-testid="key-map">
-            <caption className="sr-only">Key map: error rate per key (columns) and pattern (rows)</caption>
-            <thead>
-              <tr>
-                <th scope="col" className="sr-only">
-                  Pattern
-                </th>
-                {KEYS.map((k) => (
-                  <th key={k} scope="col" className="w-12 text-center font-bold">
-                    {k}
-                  </th>
-                ))}
-              </tr>
-            </thead>
-            <tbody>
-              {patterns.map((p) => (
-                <tr key={p}>
-                  <th scope="row" className="pr-2 text-right font-semibold">
-                    {p}
-                  </th>
-                  {KEYS.map((k) => {
-                    const c = at.get(`${k}|${p}`);
-                    if (!c)
-                      return (
-                        <td
-                          key={k}
-                          className="h-10 w-12 rounded border border-dashed border-muted"
-                          title={`${k}, ${p}: not played`}
-                        />
-                      );
-                    const words = cellWords(`${k}, ${p}`, c);
-                    return (
-                      <td key={k} className="h-10 w-12 p-0">
-                        <Link
-                          to={link(k, p)}
-                          title={words}
-                          aria-label={`${words}. Open these takes`}
-                          className="flex h-10 w-12 items-center justify-center rounded font-semibold tabular-nums focus:outline-2 focus:outline-offset-2"
-                          style={heatColour(c.rate)}
-                        >
-                          {pct(c.rate)}
-                        </Link>
-                      </td>
-                    );
-                  })}
-                </tr>
-              ))}
-            </tbody>
-          </table>
-        </TableScroll>
+        <DataTable
+          variant="grid"
+          data={patterns}
+          columns={columns}
+          getRowId={(p) => p}
+          caption="Key map: error rate per key (columns) and pattern (rows)"
+          scrollLabel="Key map, scrolls sideways"
+          testId="key-map"
+        />
       ) : null}
     </MapFrame>
   );

@@ -1,34 +1,24 @@
+import type { ColumnDef } from '@tanstack/react-table';
 import type { ReactNode } from 'react';
+import { DataTable } from '@/components/ui/data-table';
 
-/** The same numbers as a map, as a plain table (for screen readers and for reading exact values). */
+/** A figure on its own ("12", "0.5", "40%"), which reads best right-aligned. */
+const FIGURE = /^-?[\d.,]+\s?%?$/;
+
+/**
+ * The same numbers as a map, as a plain table (for screen readers and for reading exact values).
+ * Columns holding only figures are right-aligned in tabular numbers.
+ */
 export function MapTable({ caption, head, rows }: { caption: string; head: string[]; rows: ReactNode[][] }) {
-  return (
-    <div className="overflow-x-auto rounded-card border border-line bg-raised">
-      <table className="w-full text-left text-body">
-        <caption className="sr-only">{caption}</caption>
-        <thead className="border-b border-line text-caption uppercase tracking-wider text-muted">
-          <tr>
-            {head.map((h) => (
-              <th key={h} scope="col" className="px-3 py-2">
-                {h}
-              </th>
-            ))}
-          </tr>
-        </thead>
-        <tbody>
-          {rows.map((r, i) => (
-            <tr key={i} className="border-b border-line last:border-0">
-              {r.map((c, j) => (
-                <td key={j} className="px-3 py-1.5 tabular-nums">
-                  {c}
-                </td>
-              ))}
-            </tr>
-          ))}
-        </tbody>
-      </table>
-    </div>
-  );
+  const columns: ColumnDef<ReactNode[]>[] = head.map((h, j) => ({
+    id: String(j),
+    header: h,
+    cell: ({ row }) => row.original[j],
+    meta: {
+      numeric: rows.every((r) => typeof r[j] === 'number' || (typeof r[j] === 'string' && FIGURE.test(r[j]))),
+    },
+  }));
+  return <DataTable data={rows} columns={columns} caption={caption} />;
 }
 
 /** A map with a "table view" switch; the switch is remembered only while the page is open. */
