@@ -1,4 +1,5 @@
 import { Router } from 'express';
+import type { AdminPurchaseResponse, AdminPurchasesResponse } from '../../shared/schemas/books';
 import { PurchaseParams } from '../../shared/schemas/books';
 import type { AppContext } from '../context';
 import { requireRole, requireUser } from '../middleware/auth';
@@ -11,11 +12,11 @@ export function adminPurchasesRouter({ db, env }: AppContext) {
   const router = Router();
   router.use(requireRole('admin'));
   router.get('/', async (_req, res) => {
-    res.json({ purchases: await listPurchases(db) });
+    res.json({ purchases: await listPurchases(db) } satisfies AdminPurchasesResponse);
   });
   router.post('/:id/refund', async (req, res) => {
     const { id } = parseParams(PurchaseParams, req);
-    res.json({ purchase: await refundPurchase(db, env, requireUser(req), id) });
+    res.json({ purchase: await refundPurchase(db, env, requireUser(req), id) } satisfies AdminPurchaseResponse);
   });
   return router;
 }

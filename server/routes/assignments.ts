@@ -1,4 +1,5 @@
 import { Router } from 'express';
+import type { AssignmentsResponse, AssignmentWeeklyResponse } from '../../shared/schemas/assignments';
 import { AssignmentParams, AssignmentWeeklyQuery } from '../../shared/schemas/assignments';
 import type { AppContext } from '../context';
 import { requireRole, signedIn, requireUser } from '../middleware/auth';
@@ -12,12 +13,12 @@ export function assignmentsRouter({ db }: AppContext) {
   const router = Router();
   router.use(signedIn);
   router.get('/', requireRole('player'), async (req, res) => {
-    res.json({ assignments: await listMyAssignments(db, requireUser(req)) });
+    res.json({ assignments: await listMyAssignments(db, requireUser(req)) } satisfies AssignmentsResponse);
   });
   router.get('/:id/weekly', async (req, res) => {
     const { id } = parseParams(AssignmentParams, req);
     const { tz } = parseQuery(AssignmentWeeklyQuery, req);
-    res.json(await assignmentWeekly(db, requireUser(req), id, tz));
+    res.json((await assignmentWeekly(db, requireUser(req), id, tz)) satisfies AssignmentWeeklyResponse);
   });
   router.delete('/:id', async (req, res) => {
     const { id } = parseParams(AssignmentParams, req);

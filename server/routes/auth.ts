@@ -1,4 +1,5 @@
 import { type Request, Router } from 'express';
+import type { CsrfResponse, OkResponse, SessionResponse, UserResponse } from '../../shared/schemas/auth';
 import {
   ChangePasswordInput,
   PasswordResetConfirmInput,
@@ -48,15 +49,15 @@ export function authRouter(deps: AppContext) {
   const router = Router();
 
   router.get('/csrf', (req, res) => {
-    res.json({ token: issueCsrfToken(req, res, deps.env) });
+    res.json({ token: issueCsrfToken(req, res, deps.env) } satisfies CsrfResponse);
   });
 
   router.get('/session', (req, res) => {
-    res.json({ user: req.user ?? null });
+    res.json({ user: req.user ?? null } satisfies SessionResponse);
   });
 
   router.get('/me', signedIn, (req, res) => {
-    res.json({ user: req.user });
+    res.json({ user: requireUser(req) } satisfies UserResponse);
   });
 
   router.post('/sign-up', async (req, res) => {
@@ -64,31 +65,31 @@ export function authRouter(deps: AppContext) {
     await takeLimit(db, signUpLimit(req, deps.env));
     const user = await signUp(db, input);
     await startSession(req, user.id);
-    res.status(201).json({ user });
+    res.status(201).json({ user } satisfies UserResponse);
   });
 
   router.post('/sign-in', async (req, res) => {
     const input = parseBody(SignInInput, req);
     const user = await signIn(db, { ...input, ip: req.ip ?? 'unknown' }, { sourceLimit: deps.env.SIGN_IN_IP_LIMIT });
     await startSession(req, user.id);
-    res.json({ user });
+    res.json({ user } satisfies UserResponse);
   });
 
   router.post('/sign-out', signedIn, async (req, res) => {
     await destroySession(req);
     res.clearCookie(SESSION_COOKIE, { path: '/', httpOnly: true, sameSite: 'lax' });
-    res.json({ ok: true });
+    res.json({ ok: true } satisfies OkResponse);
   });
 
   router.patch('/me', signedIn, async (req, res) => {
     const input = parseBody(UpdateAccountInput, req);
-    res.json({ user: await updateAccount(db, requireUser(req).id, input) });
+    res.json({ user: await updateAccount(db, requireUser(req).id, input) } satisfies UserResponse);
   });
 
   router.post('/password', signedIn, async (req, res) => {
     const input = parseBody(ChangePasswordInput, req);
     await changePassword(db, requireUser(req).id, input, req.sessionID);
-    res.json({ ok: true });
+    res.json({ ok: true } satisfies OkResponse);
   });
 
   router.post('/password-reset', async (req, res) => {
@@ -111,13 +112,13 @@ export function authRouter(deps: AppContext) {
     requestPasswordReset(db, deps.mailer, { ...input, origin: linkOrigin(req, deps.env) }).catch((err: unknown) => {
       console.error('[mail] password reset failed:', err instanceof Error ? err.message : err);
     });
-    res.json({ ok: true });
+    res.json({ ok: true } satisfies OkResponse);
   });
 
   router.post('/password-reset/confirm', async (req, res) => {
     const input = parseBody(PasswordResetConfirmInput, req);
     await confirmPasswordReset(db, input);
-    res.json({ ok: true });
+    res.json({ ok: true } satisfies OkResponse);
   });
 
   return router;

@@ -2,9 +2,15 @@ import { Router } from 'express';
 import {
   AddBookDrillInput,
   BookDrillParams,
+  type BookDrillResponse,
+  type BookEditionResponse,
   BookParams,
+  type BookResponse,
+  type BooksResponse,
+  type CheckoutResponse,
   CreateBookInput,
   ReorderBookInput,
+  type SalesResponse,
   UpdateBookDrillInput,
   UpdateBookInput,
 } from '../../shared/schemas/books';
@@ -37,56 +43,63 @@ export function booksRouter({ db, env }: AppContext) {
   const teacher = requireRole('teacher');
 
   router.get('/', async (req, res) => {
-    res.json({ books: await listPublishedBooks(db, req.user) });
+    res.json({ books: await listPublishedBooks(db, req.user) } satisfies BooksResponse);
   });
   router.get('/mine', teacher, async (req, res) => {
-    res.json({ books: await listTeacherBooks(db, requireUser(req)) });
+    res.json({ books: await listTeacherBooks(db, requireUser(req)) } satisfies BooksResponse);
   });
   router.get('/sales', teacher, async (req, res) => {
-    res.json(await bookSales(db, requireUser(req)));
+    res.json((await bookSales(db, requireUser(req))) satisfies SalesResponse);
   });
   router.post('/', teacher, async (req, res) => {
-    res.status(201).json({ book: await createBook(db, requireUser(req), parseBody(CreateBookInput, req)) });
+    const book = await createBook(db, requireUser(req), parseBody(CreateBookInput, req));
+    res.status(201).json({ book } satisfies BookResponse);
   });
 
   router.get('/:id', async (req, res) => {
-    res.json({ book: await getBook(db, req.user, parseParams(BookParams, req).id) });
+    res.json({ book: await getBook(db, req.user, parseParams(BookParams, req).id) } satisfies BookResponse);
   });
   router.get('/:id/edition', async (req, res) => {
-    res.json(await getBookEdition(db, req.user, parseParams(BookParams, req).id));
+    res.json((await getBookEdition(db, req.user, parseParams(BookParams, req).id)) satisfies BookEditionResponse);
   });
   router.get('/:id/drills/:drillId', async (req, res) => {
     const { id, drillId } = parseParams(BookDrillParams, req);
-    res.json({ drill: await getBookDrill(db, req.user, id, drillId) });
+    res.json({ drill: await getBookDrill(db, req.user, id, drillId) } satisfies BookDrillResponse);
   });
 
   router.post('/:id/checkout', signedIn, async (req, res) => {
     const { id } = parseParams(BookParams, req);
     const origin = linkOrigin(req, env);
     if (!origin) throw new AppError('unavailable', 'Checkout needs PUBLIC_URL set on the server');
-    res.json(await startCheckout(db, env, requireUser(req), id, origin));
+    res.json((await startCheckout(db, env, requireUser(req), id, origin)) satisfies CheckoutResponse);
   });
 
   // The teacher's own book: the ownership check comes first, so an outsider learns nothing from a 400.
   router.patch('/:id', teacher, async (req, res) => {
     const { id } = parseParams(BookParams, req);
-    res.json({ book: await updateBook(db, requireUser(req), id, parseBody(UpdateBookInput, req)) });
+    res.json({
+      book: await updateBook(db, requireUser(req), id, parseBody(UpdateBookInput, req)),
+    } satisfies BookResponse);
   });
   router.post('/:id/drills', teacher, async (req, res) => {
     const { id } = parseParams(BookParams, req);
-    res.status(201).json({ book: await addBookDrill(db, requireUser(req), id, parseBody(AddBookDrillInput, req)) });
+    const book = await addBookDrill(db, requireUser(req), id, parseBody(AddBookDrillInput, req));
+    res.status(201).json({ book } satisfies BookResponse);
   });
   router.put('/:id/order', teacher, async (req, res) => {
     const { id } = parseParams(BookParams, req);
-    res.json({ book: await reorderBook(db, requireUser(req), id, parseBody(ReorderBookInput, req)) });
+    res.json({
+      book: await reorderBook(db, requireUser(req), id, parseBody(ReorderBookInput, req)),
+    } satisfies BookResponse);
   });
   router.patch('/:id/drills/:drillId', teacher, async (req, res) => {
     const { id, drillId } = parseParams(BookDrillParams, req);
-    res.json({ book: await updateBookDrill(db, requireUser(req), id, drillId, parseBody(UpdateBookDrillInput, req)) });
+    const book = await updateBookDrill(db, requireUser(req), id, drillId, parseBody(UpdateBookDrillInput, req));
+    res.json({ book } satisfies BookResponse);
   });
   router.delete('/:id/drills/:drillId', teacher, async (req, res) => {
     const { id, drillId } = parseParams(BookDrillParams, req);
-    res.json({ book: await removeBookDrill(db, requireUser(req), id, drillId) });
+    res.json({ book: await removeBookDrill(db, requireUser(req), id, drillId) } satisfies BookResponse);
   });
   return router;
 }

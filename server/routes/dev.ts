@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import { OutboxQuery } from '../../shared/schemas/dev';
+import { OutboxQuery, type OutboxResponse } from '../../shared/schemas/dev';
 import type { AppDeps } from '../context';
 import { requireRole } from '../middleware/auth';
 import { parseQuery } from '../middleware/validate';
@@ -11,7 +11,7 @@ export function devRouter({ db }: AppDeps) {
   router.use(requireRole('admin'));
   router.get('/outbox', async (req, res) => {
     const { to } = parseQuery(OutboxQuery, req);
-    res.json({ messages: await listOutbox(db, { to }) });
+    res.json({ messages: await listOutbox(db, { to }) } satisfies OutboxResponse);
   });
   return router;
 }

@@ -1,5 +1,13 @@
 import { Router } from 'express';
-import { CreateSavedDrillInput, IdParams, PreviewQuery, UpdateSavedDrillInput } from '../../shared/schemas/drills';
+import {
+  CreateSavedDrillInput,
+  IdParams,
+  PreviewQuery,
+  type PreviewResponse,
+  type SavedDrillResponse,
+  type SavedDrillsResponse,
+  UpdateSavedDrillInput,
+} from '../../shared/schemas/drills';
 import type { AppDeps } from '../context';
 import { signedIn, requireUser } from '../middleware/auth';
 import { parseBody, parseParams, parseQuery } from '../middleware/validate';
@@ -14,23 +22,25 @@ import { updateSavedDrill } from '../services/drills/update';
 export function drillsRouter({ db }: AppDeps) {
   const router = Router();
   router.get('/preview', (req, res) => {
-    res.json({ drill: previewDrill(parseQuery(PreviewQuery, req)) });
+    res.json({ drill: previewDrill(parseQuery(PreviewQuery, req)) } satisfies PreviewResponse);
   });
   router.use(signedIn);
   router.get('/', async (req, res) => {
-    res.json({ drills: await listSavedDrills(db, requireUser(req)) });
+    res.json({ drills: await listSavedDrills(db, requireUser(req)) } satisfies SavedDrillsResponse);
   });
   router.post('/', async (req, res) => {
-    res
-      .status(201)
-      .json({ drill: await createSavedDrill(db, requireUser(req), parseBody(CreateSavedDrillInput, req)) });
+    const drill = await createSavedDrill(db, requireUser(req), parseBody(CreateSavedDrillInput, req));
+    res.status(201).json({ drill } satisfies SavedDrillResponse);
   });
   router.get('/:id', async (req, res) => {
-    res.json({ drill: await getSavedDrill(db, requireUser(req), parseParams(IdParams, req).id) });
+    res.json({
+      drill: await getSavedDrill(db, requireUser(req), parseParams(IdParams, req).id),
+    } satisfies SavedDrillResponse);
   });
   router.patch('/:id', async (req, res) => {
     const { id } = parseParams(IdParams, req);
-    res.json({ drill: await updateSavedDrill(db, requireUser(req), id, parseBody(UpdateSavedDrillInput, req)) });
+    const drill = await updateSavedDrill(db, requireUser(req), id, parseBody(UpdateSavedDrillInput, req));
+    res.json({ drill } satisfies SavedDrillResponse);
   });
   router.delete('/:id', async (req, res) => {
     await deleteSavedDrill(db, requireUser(req), parseParams(IdParams, req).id);

@@ -1,5 +1,11 @@
 import { Router } from 'express';
-import { InviteSignUpInput, InviteTokenParams } from '../../shared/schemas/studios';
+import type { UserResponse } from '../../shared/schemas/auth';
+import {
+  type AcceptInviteResponse,
+  type InvitePreviewResponse,
+  InviteSignUpInput,
+  InviteTokenParams,
+} from '../../shared/schemas/studios';
 import type { AppContext } from '../context';
 import { signedIn, requireUser } from '../middleware/auth';
 import { csrfTokenFor } from '../middleware/csrf';
@@ -17,12 +23,12 @@ export function invitesRouter({ db, env }: AppContext) {
 
   router.get('/:token', async (req, res) => {
     const { token } = parseParams(InviteTokenParams, req);
-    res.json({ invite: await previewInvite(db, token) });
+    res.json({ invite: await previewInvite(db, token) } satisfies InvitePreviewResponse);
   });
 
   router.post('/:token/accept', signedIn, async (req, res) => {
     const { token } = parseParams(InviteTokenParams, req);
-    res.json({ studio: await acceptInvite(db, requireUser(req), token) });
+    res.json({ studio: await acceptInvite(db, requireUser(req), token) } satisfies AcceptInviteResponse);
   });
 
   router.post('/:token/sign-up', async (req, res) => {
@@ -35,7 +41,7 @@ export function invitesRouter({ db, env }: AppContext) {
     req.session.userId = user.id;
     csrfTokenFor(req);
     await saveSession(req);
-    res.status(201).json({ user });
+    res.status(201).json({ user } satisfies UserResponse);
   });
 
   return router;

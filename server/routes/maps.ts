@@ -1,5 +1,16 @@
 import { Router } from 'express';
-import { ChartQuery, MapQuery, NextQuery } from '../../shared/schemas/maps';
+import {
+  type BeatMapResponse,
+  type CalendarResponse,
+  ChartQuery,
+  type KeyMapResponse,
+  MapQuery,
+  NextQuery,
+  type NextResponse,
+  type RangeMapResponse,
+  type TimelineResponse,
+  type WeeklyResponse,
+} from '../../shared/schemas/maps';
 import type { AppContext } from '../context';
 import { signedIn, requireUser } from '../middleware/auth';
 import { parseQuery } from '../middleware/validate';
@@ -19,37 +30,44 @@ export function mapsRouter({ db }: AppContext) {
 
   router.get('/keys', async (req, res) => {
     const q = parseQuery(MapQuery, req);
-    res.json({ cells: await keyMap(db, await subjectPlayerId(db, requireUser(req), q.player), q) });
+    const cells = await keyMap(db, await subjectPlayerId(db, requireUser(req), q.player), q);
+    res.json({ cells } satisfies KeyMapResponse);
   });
 
   router.get('/range', async (req, res) => {
     const q = parseQuery(MapQuery, req);
-    res.json({ cells: await rangeMap(db, await subjectPlayerId(db, requireUser(req), q.player), q) });
+    const cells = await rangeMap(db, await subjectPlayerId(db, requireUser(req), q.player), q);
+    res.json({ cells } satisfies RangeMapResponse);
   });
 
   router.get('/beats', async (req, res) => {
     const q = parseQuery(MapQuery, req);
-    res.json({ cells: await beatMap(db, await subjectPlayerId(db, requireUser(req), q.player), q) });
+    const cells = await beatMap(db, await subjectPlayerId(db, requireUser(req), q.player), q);
+    res.json({ cells } satisfies BeatMapResponse);
   });
 
   router.get('/timeline', async (req, res) => {
     const q = parseQuery(ChartQuery, req);
-    res.json({ points: await timeline(db, await subjectPlayerId(db, requireUser(req), q.player), q) });
+    const points = await timeline(db, await subjectPlayerId(db, requireUser(req), q.player), q);
+    res.json({ points } satisfies TimelineResponse);
   });
 
   router.get('/calendar', async (req, res) => {
     const q = parseQuery(ChartQuery, req);
-    res.json(await practiceCalendar(db, await subjectPlayerId(db, requireUser(req), q.player), q));
+    const calendar = await practiceCalendar(db, await subjectPlayerId(db, requireUser(req), q.player), q);
+    res.json(calendar satisfies CalendarResponse);
   });
 
   router.get('/weekly', async (req, res) => {
     const q = parseQuery(ChartQuery, req);
-    res.json(await weeklyByDrill(db, await subjectPlayerId(db, requireUser(req), q.player), q));
+    const weekly = await weeklyByDrill(db, await subjectPlayerId(db, requireUser(req), q.player), q);
+    res.json(weekly satisfies WeeklyResponse);
   });
 
   router.get('/next', async (req, res) => {
     const q = parseQuery(NextQuery, req);
-    res.json({ items: await whatNext(db, await subjectPlayerId(db, requireUser(req), q.player)) });
+    const items = await whatNext(db, await subjectPlayerId(db, requireUser(req), q.player));
+    res.json({ items } satisfies NextResponse);
   });
 
   return router;

@@ -1,5 +1,11 @@
 import { Router } from 'express';
-import { CreateCustomPatternInput, IdParams, UpdateCustomPatternInput } from '../../shared/schemas/drills';
+import {
+  CreateCustomPatternInput,
+  type CustomPatternResponse,
+  type CustomPatternsResponse,
+  IdParams,
+  UpdateCustomPatternInput,
+} from '../../shared/schemas/drills';
 import type { AppDeps } from '../context';
 import { signedIn, requireUser } from '../middleware/auth';
 import { parseBody, parseParams } from '../middleware/validate';
@@ -14,21 +20,21 @@ export function patternsRouter({ db }: AppDeps) {
   const router = Router();
   router.use(signedIn);
   router.get('/', async (req, res) => {
-    res.json({ patterns: await listCustomPatterns(db, requireUser(req)) });
+    res.json({ patterns: await listCustomPatterns(db, requireUser(req)) } satisfies CustomPatternsResponse);
   });
   router.post('/', async (req, res) => {
-    res
-      .status(201)
-      .json({ pattern: await createCustomPattern(db, requireUser(req), parseBody(CreateCustomPatternInput, req)) });
+    const pattern = await createCustomPattern(db, requireUser(req), parseBody(CreateCustomPatternInput, req));
+    res.status(201).json({ pattern } satisfies CustomPatternResponse);
   });
   router.get('/:id', async (req, res) => {
-    res.json({ pattern: await getCustomPattern(db, requireUser(req), parseParams(IdParams, req).id) });
+    res.json({
+      pattern: await getCustomPattern(db, requireUser(req), parseParams(IdParams, req).id),
+    } satisfies CustomPatternResponse);
   });
   router.patch('/:id', async (req, res) => {
     const { id } = parseParams(IdParams, req);
-    res.json({
-      pattern: await updateCustomPattern(db, requireUser(req), id, parseBody(UpdateCustomPatternInput, req)),
-    });
+    const pattern = await updateCustomPattern(db, requireUser(req), id, parseBody(UpdateCustomPatternInput, req));
+    res.json({ pattern } satisfies CustomPatternResponse);
   });
   router.delete('/:id', async (req, res) => {
     await deleteCustomPattern(db, requireUser(req), parseParams(IdParams, req).id);

@@ -1,4 +1,5 @@
 import type { RequestHandler } from 'express';
+import type { PaymentWebhookResponse } from '../../shared/schemas/books';
 import type { AppContext } from '../context';
 import { AppError } from '../errors';
 import { linkOrigin } from '../mail/link-origin';
@@ -21,6 +22,6 @@ export function paymentsWebhook({ db, env, mailer }: AppContext): RequestHandler
       throw new AppError('bad_request', 'The webhook signature does not match');
     }
     const granted = await completeCheckout(db, mailer, linkOrigin(req, env), event);
-    res.json({ received: true, granted });
+    res.json({ received: true, granted } satisfies PaymentWebhookResponse);
   };
 }

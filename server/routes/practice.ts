@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import { SuggestTempoQuery } from '../../shared/schemas/settings';
+import { SuggestTempoQuery, type SuggestTempoResponse } from '../../shared/schemas/settings';
 import type { AppContext } from '../context';
 import { requireRole, requireUser } from '../middleware/auth';
 import { parseQuery } from '../middleware/validate';
@@ -11,7 +11,8 @@ export function practiceRouter({ db }: AppContext) {
   /** GET /api/practice/tempo?spec=<DrillSpec JSON> -> { climb: { tempo, lastTempo, lastVerdict } | null } */
   router.get('/tempo', requireRole('player'), async (req, res) => {
     const { spec } = parseQuery(SuggestTempoQuery, req);
-    res.json({ climb: await suggestTempo(db, requireUser(req).id, specFromQuery(spec, 'spec')) });
+    const climb = await suggestTempo(db, requireUser(req).id, specFromQuery(spec, 'spec'));
+    res.json({ climb } satisfies SuggestTempoResponse);
   });
   return router;
 }

@@ -1,5 +1,10 @@
 import { Router } from 'express';
-import { CreateRemarkInput, TakeRemarksParams } from '../../shared/schemas/remarks';
+import {
+  CreateRemarkInput,
+  type RemarkResponse,
+  type RemarksResponse,
+  TakeRemarksParams,
+} from '../../shared/schemas/remarks';
 import type { AppContext } from '../context';
 import { linkOrigin } from '../mail/link-origin';
 import { signedIn, requireUser } from '../middleware/auth';
@@ -14,7 +19,7 @@ export function remarksRouter(deps: AppContext) {
   router.use(signedIn);
   router.get('/', async (req, res) => {
     const { takeId } = parseParams(TakeRemarksParams, req);
-    res.json({ remarks: await listRemarks(db, requireUser(req), takeId) });
+    res.json({ remarks: await listRemarks(db, requireUser(req), takeId) } satisfies RemarksResponse);
   });
   router.post('/', async (req, res) => {
     const { takeId } = parseParams(TakeRemarksParams, req);
@@ -23,7 +28,7 @@ export function remarksRouter(deps: AppContext) {
       ...input,
       origin: linkOrigin(req, env),
     });
-    res.status(201).json({ remark });
+    res.status(201).json({ remark } satisfies RemarkResponse);
   });
   return router;
 }

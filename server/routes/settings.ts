@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import { SetLatencyInput, UpdateSettingsInput } from '../../shared/schemas/settings';
+import { SetLatencyInput, type SettingsResponse, UpdateSettingsInput } from '../../shared/schemas/settings';
 import type { AppContext } from '../context';
 import { signedIn, requireUser } from '../middleware/auth';
 import { parseBody } from '../middleware/validate';
@@ -12,15 +12,15 @@ export function settingsRouter({ db }: AppContext) {
   const router = Router();
   router.use(signedIn);
   router.get('/', async (req, res) => {
-    res.json({ settings: await getSettings(db, requireUser(req).id) });
+    res.json({ settings: await getSettings(db, requireUser(req).id) } satisfies SettingsResponse);
   });
   router.put('/', async (req, res) => {
     const input = parseBody(UpdateSettingsInput, req);
-    res.json({ settings: await updateSettings(db, requireUser(req).id, input) });
+    res.json({ settings: await updateSettings(db, requireUser(req).id, input) } satisfies SettingsResponse);
   });
   router.put('/latency', async (req, res) => {
     const { device, offsetMs } = parseBody(SetLatencyInput, req);
-    res.json({ settings: await setLatency(db, requireUser(req).id, device, offsetMs) });
+    res.json({ settings: await setLatency(db, requireUser(req).id, device, offsetMs) } satisfies SettingsResponse);
   });
   return router;
 }

@@ -1,6 +1,21 @@
 import { Router } from 'express';
+import type {
+  AssignmentResponse,
+  AssignmentsResponse,
+  BoardResponse,
+  StudioPlayerResponse,
+} from '../../shared/schemas/assignments';
 import { CreateAssignmentInput } from '../../shared/schemas/assignments';
-import { CreateInviteInput, CreateStudioInput, StudioParams, StudioPlayerParams } from '../../shared/schemas/studios';
+import {
+  CreateInviteInput,
+  CreateStudioInput,
+  type InviteResponse,
+  type InvitesResponse,
+  StudioParams,
+  StudioPlayerParams,
+  type StudioResponse,
+  type StudiosResponse,
+} from '../../shared/schemas/studios';
 import type { AppContext } from '../context';
 import { linkOrigin } from '../mail/link-origin';
 import { takeLimit } from '../services/rate-limit/take';
@@ -29,27 +44,27 @@ export function studiosRouter(deps: AppContext) {
   router.use(signedIn);
 
   router.get('/', async (req, res) => {
-    res.json({ studios: await listStudios(db, requireUser(req)) });
+    res.json({ studios: await listStudios(db, requireUser(req)) } satisfies StudiosResponse);
   });
 
   router.post('/', requireRole('teacher'), async (req, res) => {
     const input = parseBody(CreateStudioInput, req);
-    res.status(201).json({ studio: await createStudio(db, requireUser(req), input) });
+    res.status(201).json({ studio: await createStudio(db, requireUser(req), input) } satisfies StudioResponse);
   });
 
   router.get('/:id', async (req, res) => {
     const { id } = parseParams(StudioParams, req);
-    res.json({ studio: await getStudio(db, requireUser(req), id) });
+    res.json({ studio: await getStudio(db, requireUser(req), id) } satisfies StudioResponse);
   });
 
   router.get('/:id/board', async (req, res) => {
     const { id } = parseParams(StudioParams, req);
-    res.json(await getStudioBoard(db, requireUser(req), id));
+    res.json((await getStudioBoard(db, requireUser(req), id)) satisfies BoardResponse);
   });
 
   router.get('/:id/players/:playerId', async (req, res) => {
     const { id, playerId } = parseParams(StudioPlayerParams, req);
-    res.json(await getStudioPlayer(db, requireUser(req), id, playerId));
+    res.json((await getStudioPlayer(db, requireUser(req), id, playerId)) satisfies StudioPlayerResponse);
   });
 
   router.delete('/:id/membership', async (req, res) => {
@@ -60,7 +75,7 @@ export function studiosRouter(deps: AppContext) {
 
   router.get('/:id/invites', async (req, res) => {
     const { id } = parseParams(StudioParams, req);
-    res.json({ invites: await listInvites(db, requireUser(req), id) });
+    res.json({ invites: await listInvites(db, requireUser(req), id) } satisfies InvitesResponse);
   });
 
   router.post('/:id/invites', async (req, res) => {
@@ -77,19 +92,21 @@ export function studiosRouter(deps: AppContext) {
       ...input,
       origin: linkOrigin(req, env),
     });
-    res.status(201).json({ invite });
+    res.status(201).json({ invite } satisfies InviteResponse);
   });
 
   router.get('/:id/assignments', async (req, res) => {
     const { id } = parseParams(StudioParams, req);
-    res.json({ assignments: await listStudioAssignments(db, requireUser(req), id) });
+    res.json({ assignments: await listStudioAssignments(db, requireUser(req), id) } satisfies AssignmentsResponse);
   });
 
   router.post('/:id/assignments', async (req, res) => {
     const { id } = parseParams(StudioParams, req);
     await teacherAccess(db, requireUser(req), id);
     const input = parseBody(CreateAssignmentInput, req);
-    res.status(201).json({ assignment: await createAssignment(db, requireUser(req), id, input) });
+    res
+      .status(201)
+      .json({ assignment: await createAssignment(db, requireUser(req), id, input) } satisfies AssignmentResponse);
   });
 
   return router;

@@ -1,7 +1,12 @@
 import { type RequestHandler, Router } from 'express';
 import multer from 'multer';
-import { ImportTakeFields, ListTakesQuery, MAX_IMPORT_BYTES } from '../../shared/schemas/history';
-import { CreateTakeInput, TakeIdParams } from '../../shared/schemas/takes';
+import {
+  ImportTakeFields,
+  ListTakesQuery,
+  type ListTakesResponse,
+  MAX_IMPORT_BYTES,
+} from '../../shared/schemas/history';
+import { CreateTakeInput, TakeIdParams, type TakeResponse } from '../../shared/schemas/takes';
 import type { AppContext } from '../context';
 import { requireRole, signedIn, requireUser } from '../middleware/auth';
 import { parseBody, parseParams, parseQuery } from '../middleware/validate';
@@ -26,13 +31,13 @@ export function takesRouter({ db }: AppContext) {
       startedAt: new Date(input.startedAt),
       measures: input.measures ?? null,
     });
-    res.status(created ? 201 : 200).json({ take: presentTake(take) });
+    res.status(created ? 201 : 200).json({ take: presentTake(take) } satisfies TakeResponse);
   });
 
   router.get('/', signedIn, async (req, res) => {
     const query = parseQuery(ListTakesQuery, req);
     const playerId = await subjectPlayerId(db, requireUser(req), query.player);
-    res.json(await listTakes(db, playerId, query));
+    res.json((await listTakes(db, playerId, query)) satisfies ListTakesResponse);
   });
 
   router.post('/import', requireRole('player'), midiUpload, async (req, res) => {
@@ -44,12 +49,12 @@ export function takesRouter({ db }: AppContext) {
       bytes: new Uint8Array(req.file.buffer),
       ...fields,
     });
-    res.status(201).json({ take: presentTake(take) });
+    res.status(201).json({ take: presentTake(take) } satisfies TakeResponse);
   });
 
   router.get('/:id', signedIn, async (req, res) => {
     const { id } = parseParams(TakeIdParams, req);
-    res.json({ take: presentTake(await getTake(db, requireUser(req), id)) });
+    res.json({ take: presentTake(await getTake(db, requireUser(req), id)) } satisfies TakeResponse);
   });
 
   router.get('/:id/midi', signedIn, async (req, res) => {

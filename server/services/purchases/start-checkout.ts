@@ -1,4 +1,5 @@
 import type { User } from '../../../shared/schemas/auth';
+import type { CheckoutResponse } from '../../../shared/schemas/books';
 import type { Db } from '../../db/client';
 import { purchases } from '../../db/schema';
 import type { Env } from '../../env';
@@ -16,7 +17,7 @@ export async function startCheckout(
   buyer: User,
   bookId: string,
   origin: string,
-): Promise<{ url: string }> {
+): Promise<CheckoutResponse> {
   const { book, access } = await loadVisibleBook(db, buyer, bookId);
   if (access === 'owner') throw new AppError('bad_request', 'This is your own book');
   if (access === 'free-book') throw new AppError('bad_request', 'This book is free: open any drill in it');
