@@ -1,10 +1,25 @@
+import type { ColumnDef } from '@tanstack/react-table';
 import { useEffect, useState } from 'react';
 import { InputPanel } from '@/components/midi/input-panel';
+import { DataTable } from '@/components/ui/data-table';
 import { KeyboardDiagram, type KeyMark, keyLabel } from '@/components/midi/keyboard-diagram';
 import { useNoteInput } from '@/hooks/use-note-input';
 import type { NoteEvent } from '@/lib/midi-input';
 
 const HELD: KeyMark = { className: 'fill-brass-300', label: 'held' };
+
+const columns: ColumnDef<NoteEvent>[] = [
+  { id: 'event', header: 'Event', cell: ({ row }) => (row.original.type === 'on' ? 'on' : 'off') },
+  { id: 'note', header: 'Note', cell: ({ row }) => keyLabel(row.original.midi) },
+  { id: 'velocity', header: 'Velocity', accessorKey: 'velocity', meta: { numeric: true } },
+  { id: 'time', header: 'Time (ms)', cell: ({ row }) => row.original.timeStamp.toFixed(1), meta: { numeric: true } },
+  {
+    id: 'from',
+    header: 'From',
+    cell: ({ row: { original: e } }) =>
+      e.source === 'midi' ? 'MIDI' : e.source === 'screen' ? 'screen' : 'computer keys',
+  },
+];
 
 /** A sound check before practice: which input is live, and what arrives from it. */
 export function InputCheckRoute() {
@@ -51,35 +66,20 @@ export function InputCheckRoute() {
         {events.length === 0 ? (
           <p className="mt-2 text-muted">Nothing yet.</p>
         ) : (
-          <table className="mt-2 w-full text-left text-body" data-testid="note-log">
-            <thead className="text-caption text-muted">
-              <tr>
-                <th className="py-1">Event</th>
-                <th>Note</th>
-                <th>Velocity</th>
-                <th>Time (ms)</th>
-                <th>From</th>
-              </tr>
-            </thead>
-            <tbody>
-              {events.map((e, i) => (
-                <tr
-                  key={`${e.timeStamp}-${i}`}
-                  className="border-t border-line"
-                  data-midi={e.midi}
-                  data-type={e.type}
-                  data-time={e.timeStamp}
-                  data-source={e.source}
-                >
-                  <td className="py-1">{e.type === 'on' ? 'on' : 'off'}</td>
-                  <td>{keyLabel(e.midi)}</td>
-                  <td>{e.velocity}</td>
-                  <td>{e.timeStamp.toFixed(1)}</td>
-                  <td>{e.source === 'midi' ? 'MIDI' : e.source === 'screen' ? 'screen' : 'computer keys'}</td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
+          <DataTable
+            className="mt-2"
+            data={events}
+            columns={columns}
+            getRowId={(e, i) => `${e.timeStamp}-${i}`}
+            caption="Last notes, newest first"
+            testId="note-log"
+            rowProps={(e) => ({
+              'data-midi': e.midi,
+              'data-type': e.type,
+              'data-time': e.timeStamp,
+              'data-source': e.source,
+            })}
+          />
         )}
       </section>
     </div>
