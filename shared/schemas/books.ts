@@ -57,6 +57,24 @@ export const UpdateBookInput = z
   .refine((v) => Object.keys(v).length > 0, { error: 'Send at least one field to change' });
 export type UpdateBookInput = z.infer<typeof UpdateBookInput>;
 
+/** A price as typed ("12.00", "12,5"), in minor units, then held to the same bounds. */
+const PriceText = z
+  .string({ error: 'Type a price such as 12.00' })
+  .trim()
+  .regex(/^\d+([.,]\d{1,2})?$/, { error: 'Type a price such as 12.00' })
+  .transform((t) => Math.round(Number(t.replace(',', '.')) * 100))
+  .pipe(PriceMinor);
+
+/** The book details form in the browser: the fields `UpdateBookInput` takes, the price as typed. */
+export const BookDetailsInput = z.object({
+  title: Title,
+  description: Description,
+  coverColour: CoverColour,
+  priceMinor: PriceText,
+  currency: Currency,
+});
+export type BookDetailsInput = z.infer<typeof BookDetailsInput>;
+
 export const AddBookDrillInput = z.object({
   savedDrillId: z.uuid({ error: 'Choose one of your saved drills' }),
   title: DrillTitle.optional(),
