@@ -1,3 +1,5 @@
+import type { CsrfResponse } from '@shared/schemas/auth';
+
 /** One fetch wrapper for the API: JSON in and out, the CSRF header, and typed errors. */
 export class ApiError extends Error {
   constructor(
@@ -17,7 +19,7 @@ async function getCsrfToken(): Promise<string> {
   if (csrfToken) return csrfToken;
   const res = await fetch('/api/auth/csrf', { credentials: 'same-origin' });
   if (!res.ok) throw new ApiError(res.status, 'csrf', 'Could not start a secure session; reload the page');
-  csrfToken = ((await res.json()) as { token: string }).token;
+  csrfToken = ((await res.json()) as CsrfResponse).token;
   return csrfToken;
 }
 

@@ -1,5 +1,5 @@
 import { createStore, del, entries, set } from 'idb-keyval';
-import type { CreateTakeInput } from '@shared/schemas/takes';
+import type { CreateTakeInput, TakeResponse } from '@shared/schemas/takes';
 import { ApiError, api } from './api-client';
 
 /**
@@ -79,7 +79,7 @@ async function doFlush() {
   for (const [id, p] of await all()) {
     if (p.refused || p.nextAt > now) continue;
     try {
-      await api.post('/api/takes', p.take);
+      await api.post<TakeResponse>('/api/takes', p.take);
       await del(id, store);
       busy = false;
     } catch (err) {

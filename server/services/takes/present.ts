@@ -28,5 +28,3 @@ export function presentTake(row: TakeRow): Take {
     createdAt: row.createdAt.toISOString(),
   };
 }
-
-export type PresentedTake = Take;

@@ -1,9 +1,10 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { OkResponse } from '@shared/schemas/auth';
 import { api, resetCsrfToken } from '@/lib/api-client';
 import { switchAccount } from './session';
 
-export function signOut(): Promise<unknown> {
-  return api.post('/api/auth/sign-out');
+export function signOut(): Promise<OkResponse> {
+  return api.post<OkResponse>('/api/auth/sign-out');
 }
 
 export function useSignOut() {

@@ -1,13 +1,11 @@
 import { keepPreviousData, queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { ListTakesQuery, ListTakesResponse } from '@shared/schemas/history';
-import type { CreateTakeInput, Take } from '@shared/schemas/takes';
+import type { CsrfResponse } from '@shared/schemas/auth';
+import type { CreateTakeInput, TakeResponse } from '@shared/schemas/takes';
 import { ApiError, api } from '@/lib/api-client';
 import { takeKeys, takeQueryOptions, useTake } from '@/lib/queries/take';
 
 export const takesKey = takeKeys.all;
-
-/** A stored take as GET /api/takes/:id shows it (the one shape every page reads). */
-export type TakeDetail = Take;
 
 export type TakeListParams = Partial<ListTakesQuery>;
 
@@ -60,11 +58,11 @@ export interface ImportInput {
 
 async function csrfToken(): Promise<string> {
   const res = await fetch('/api/auth/csrf', { credentials: 'same-origin' });
-  return ((await res.json()) as { token: string }).token;
+  return ((await res.json()) as CsrfResponse).token;
 }
 
 /** Sends a MIDI file with XMLHttpRequest, whose upload events give the progress bar. */
-export async function importTake({ file, spec, offsetMs, onProgress }: ImportInput): Promise<{ take: TakeDetail }> {
+export async function importTake({ file, spec, offsetMs, onProgress }: ImportInput): Promise<TakeResponse> {
   const form = new FormData();
   form.set('file', file);
   form.set('spec', JSON.stringify(spec));
@@ -80,8 +78,10 @@ export async function importTake({ file, spec, offsetMs, onProgress }: ImportInp
     xhr.onerror = () =>
       reject(new ApiError(0, 'offline', 'The server could not be reached; check the connection and try again'));
     xhr.onload = () => {
-      let body: { take?: TakeDetail; error?: { code?: string; message?: string; fields?: Record<string, string[]> } } =
-        {};
+      let body: {
+        take?: TakeResponse['take'];
+        error?: { code?: string; message?: string; fields?: Record<string, string[]> };
+      } = {};
       try {
         body = JSON.parse(xhr.responseText);
       } catch {

@@ -1,6 +1,7 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { UserResponse } from '@shared/schemas/auth';
 import type {
+  AcceptInviteResponse,
   CreateInviteInput,
   InvitePreviewResponse,
   InviteResponse,
@@ -40,10 +41,7 @@ export function useInvitePreview(token: string) {
 export function useAcceptInvite(token: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: () =>
-      api.post<{ studio: { studioId: string; studioName: string } }>(
-        `/api/invites/${encodeURIComponent(token)}/accept`,
-      ),
+    mutationFn: () => api.post<AcceptInviteResponse>(`/api/invites/${encodeURIComponent(token)}/accept`),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: studiosKey }),
   });
 }

@@ -1,4 +1,5 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { OkResponse } from '@shared/schemas/auth';
 import type {
   CreateRemarkInput,
   NotificationsResponse,
@@ -38,7 +39,7 @@ export function useNotifications() {
 export function useMarkNotificationsRead() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: () => api.post<{ ok: true }>('/api/notifications/read'),
+    mutationFn: () => api.post<OkResponse>('/api/notifications/read'),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: notificationsKey }),
   });
 }

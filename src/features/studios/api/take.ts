@@ -1,5 +1,2 @@
-import type { Take } from '@shared/schemas/takes';
-
-/** A stored take as GET /api/takes/:id answers: the same shape and cache as the player's page. */
-export type ReviewTake = Take;
+/** GET /api/takes/:id: the same query and cache as the player's take page. */
 export { useTake } from '@/lib/queries/take';

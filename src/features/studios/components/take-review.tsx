@@ -1,4 +1,5 @@
 import { type Drill, generateDrill, sliceDrill } from '@shared/engine';
+import type { Take } from '@shared/schemas/takes';
 import { useMemo, useState } from 'react';
 import type { NoteMarks } from '@/components/notation/drill-staff';
 import { readNotes } from '@/components/review/note-readings';
@@ -10,14 +11,14 @@ import { Button } from '@/components/ui/button';
 import { FormMessage } from '@/components/ui/form-message';
 import { SelectField } from '@/components/ui/select-field';
 import { useCreateRemark, useRemarks } from '../api/remarks';
-import { type ReviewTake, useTake } from '../api/take';
+import { useTake } from '../api/take';
 import { useTakeReplay } from '../hooks/use-take-replay';
 import { noteLabel, RemarkThread } from './remark-thread';
 import { pct } from './status-badge';
 import './take-review.css';
 import { formatDateTime } from '@/lib/format-date';
 
-function drillOf(take: ReviewTake): Drill | null {
+function drillOf(take: Take): Drill | null {
   try {
     const full = generateDrill(take.spec);
     return take.measures ? sliceDrill(full, take.measures[0], take.measures[1]) : full;
@@ -32,7 +33,7 @@ function RemarkForm({
   pin,
   setPin,
 }: {
-  take: ReviewTake;
+  take: Take;
   drill: Drill;
   pin: string;
   setPin: (pin: string) => void;
