@@ -103,6 +103,9 @@ describe('the table component', () => {
     expect(html.indexOf('Starter pairs')).toBeLessThan(html.indexOf('Weaves in 7/8'));
     const down = render({ sorting: { state: [{ id: 'sold', desc: true }], onChange: () => {} } });
     expect(down).toContain('aria-sort="descending"');
+    // an order the holder keeps by a column without a button is still said
+    const byNote = render({ sorting: { state: [{ id: 'note', desc: true }], onChange: () => {} } });
+    expect(byNote).toMatch(/<th scope="col" aria-sort="descending"[^>]*><span class="sr-only">Note<\/span><\/th>/);
   });
 
   it('a grid lays cells apart with no padding or rules of its own', () => {

@@ -118,7 +118,7 @@ export function DataTable<T>({
                   <th
                     key={h.id}
                     scope="col"
-                    aria-sort={h.column.getCanSort() ? ariaSort(sorted) : undefined}
+                    aria-sort={sorting ? ariaSort(sorted) : undefined}
                     className={cx(
                       !grid && 'px-3 py-2 font-semibold',
                       !grid && !meta?.wrapHeader && 'whitespace-nowrap',

@@ -13,6 +13,7 @@ const columns: ColumnDef<TakeSummary>[] = [
   {
     id: 'startedAt',
     header: 'Date',
+    accessorKey: 'startedAt',
     meta: { nowrap: true },
     cell: ({ row }) => (
       <Link to={`/history/${row.original.id}`} className="font-semibold underline-offset-2 hover:underline">
@@ -28,6 +29,7 @@ const columns: ColumnDef<TakeSummary>[] = [
   {
     id: 'accuracy',
     header: 'Accuracy',
+    accessorKey: 'accuracy',
     cell: ({ row }) => `${Math.round(row.original.accuracy * 100)}%`,
     meta: { numeric: true },
   },
