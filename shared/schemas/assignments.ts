@@ -115,3 +115,25 @@ export const AssignmentWeeklyResponse = z.object({
 export type AssignmentWeeklyResponse = z.infer<typeof AssignmentWeeklyResponse>;
 
 export const AssignmentWeeklyQuery = z.object({ tz: TimeZone.default('UTC') });
+
+/** A typed day ("2026-03-01") as the end of that day in the browser's own time zone, or '' when it is no day. */
+function endOfDay(day: string): string {
+  const t = new Date(`${day}T23:59:00`);
+  return Number.isNaN(t.getTime()) ? '' : t.toISOString();
+}
+
+/**
+ * The assignment form in the browser: the accuracy typed in percent and the due date as a day
+ * (due at its end), then held to `CreateAssignmentInput`'s own rules under the same names.
+ */
+export const AssignmentFormInput = CreateAssignmentInput.extend({
+  targetAccuracy: z
+    .number({ error: 'Set a target accuracy' })
+    .transform((percent) => percent / 100)
+    .pipe(CreateAssignmentInput.shape.targetAccuracy),
+  dueAt: z
+    .string({ error: 'Pick a due date' })
+    .regex(/^\d{4}-\d{2}-\d{2}$/, { error: 'Pick a due date' })
+    .transform(endOfDay)
+    .pipe(CreateAssignmentInput.shape.dueAt),
+});
