@@ -4,11 +4,15 @@ import type { ColumnDef } from '@tanstack/react-table';
 import { useState } from 'react';
 import { ConfirmDialog } from '@/components/ui/confirm-dialog';
 import { DataTable } from '@/components/ui/data-table';
+import { SelectField } from '@/components/ui/select-field';
 import { useMe } from '@/features/auth/api/session';
 import { useAdminUsers, useUpdateAdminUser } from '../api/users';
 import { formatDate } from '@/lib/format-date';
 
-const ROLES: Role[] = ['player', 'teacher', 'admin'];
+const ROLE_OPTIONS = (['player', 'teacher', 'admin'] as const satisfies readonly Role[]).map((r) => ({
+  value: r,
+  label: r,
+}));
 
 /** Every account on this Sixfold, for the admin: change a role, switch an account off or on. */
 export function UsersTable() {
@@ -33,19 +37,15 @@ export function UsersTable() {
         u.id === me?.id ? (
           <span className="capitalize">{u.role}</span>
         ) : (
-          <select
-            aria-label={`Role of ${u.name}`}
+          <SelectField
+            label={`Role of ${u.name}`}
+            hideLabel
+            className="capitalize"
+            options={ROLE_OPTIONS}
             value={pending?.id === u.id ? pending.to : u.role}
             disabled={update.isPending}
             onChange={(e) => setPending({ id: u.id, name: u.name, from: u.role, to: e.target.value as Role })}
-            className="rounded-lg border border-line bg-raised px-2 py-1 capitalize"
-          >
-            {ROLES.map((r) => (
-              <option key={r} value={r}>
-                {r}
-              </option>
-            ))}
-          </select>
+          />
         ),
     },
     {
