@@ -1,12 +1,11 @@
-import { CreateSavedDrillInput, type DrillSpec, type KeyOrder, type SavedDrill } from '@shared/schemas/drills';
+import type { DrillSpec, KeyOrder, SavedDrill } from '@shared/schemas/drills';
 import { drillMaterial } from '@shared/practice/drill-identity';
 import { type FormEvent, useState } from 'react';
 import { Link } from 'react-router-dom';
+import { useSchemaForm } from '@/components/form/use-schema-form';
 import { Button } from '@/components/ui/button';
 import { FormMessage } from '@/components/ui/form-message';
 import { TextField } from '@/components/ui/text-field';
-import { ApiError } from '@/lib/api-client';
-import { fieldErrors } from '@/lib/field-errors';
 import { useDeleteSavedDrill, useSaveDrill, useSavedDrills } from '../api/saved-drills';
 
 /** Save the drill under a name; open a saved one (yours, or your teacher's). */
@@ -21,32 +20,29 @@ export function SavedDrillsPanel({
   onOpen: (d: SavedDrill) => void;
   canPractise?: boolean;
 }) {
-  const [name, setName] = useState('');
   const [saved, setSaved] = useState<string | null>(null);
-  const [fields, setFields] = useState<Record<string, string[]>>({});
-  const [formError, setFormError] = useState<string | null>(null);
   const list = useSavedDrills();
   const save = useSaveDrill();
   const remove = useDeleteSavedDrill();
+  const form = useSchemaForm(() => import('@shared/schemas/drills').then((m) => m.CreateSavedDrillInput), {
+    defaultValues: { name: '' },
+  });
 
-  function submit(e: FormEvent) {
-    e.preventDefault();
+  // The drill itself comes from the settings above; it is checked with the name, as the server will.
+  const submit = (e: FormEvent) => {
     setSaved(null);
-    setFormError(null);
-    const parsed = CreateSavedDrillInput.safeParse({ name, spec, keyOrder: order });
-    setFields(parsed.success ? {} : fieldErrors(parsed.error));
-    if (!parsed.success) return;
-    save.mutate(parsed.data, {
-      onSuccess: ({ drill }) => {
-        setSaved(`Saved “${drill.name}”.`);
-        setName('');
-      },
-      onError: (err) => {
-        if (err instanceof ApiError && err.fields) setFields(err.fields);
-        else setFormError(err.message);
-      },
-    });
-  }
+    form.setValue('spec', spec as DrillSpec);
+    form.setValue('keyOrder', order);
+    return form.handleSubmit((input) =>
+      save.mutate(input, {
+        onSuccess: ({ drill }) => {
+          setSaved(`Saved “${drill.name}”.`);
+          form.reset({ name: '' });
+        },
+        onError: form.fromError,
+      }),
+    )(e);
+  };
 
   const drills = list.data?.drills ?? [];
   const mine = drills.filter((d) => d.mine);
@@ -94,17 +90,16 @@ export function SavedDrillsPanel({
         <TextField
           className="flex-1"
           label="Name for this drill"
-          value={name}
-          errors={fields.name}
-          onChange={(e) => setName(e.target.value)}
+          errors={form.errorsOf('name')}
           placeholder="D/C over D7, slow"
+          {...form.register('name')}
         />
         <Button type="submit" disabled={save.isPending || !spec}>
           {save.isPending ? 'Saving…' : 'Save drill'}
         </Button>
       </form>
-      {formError ? <FormMessage tone="error">{formError}</FormMessage> : null}
-      {Object.keys(fields).some((k) => k.startsWith('spec')) ? (
+      {form.formError ? <FormMessage tone="error">{form.formError}</FormMessage> : null}
+      {form.formState.errors.spec ? (
         <FormMessage tone="error">Fix the drill above before saving it.</FormMessage>
       ) : null}
       {saved ? <FormMessage tone="success">{saved}</FormMessage> : null}

@@ -2,7 +2,7 @@ import { type Drill, EngineError, inAllKeys, type InstrumentId, instruments } fr
 import { generateChecked } from '@shared/engine/patterns/checked';
 import { type ChordChange, DrillSpec, type FieldErrors, type KeyOrder } from '@shared/schemas/drills';
 import { useMemo, useState } from 'react';
-import { fieldErrors } from '@/lib/field-errors';
+import { fieldErrors } from '@shared/schemas/field-errors';
 
 /** What the form holds: a DrillSpec with the instrument's range standing in until one is set. */
 export interface Draft {
@@ -78,7 +78,7 @@ export interface DraftResult {
 export function evaluateDraft(d: Draft): DraftResult {
   const parsed = DrillSpec.safeParse(specOf(d));
   if (!parsed.success) {
-    return { spec: null, fields: fieldErrors(parsed.error), cycle: [], cycleError: null };
+    return { spec: null, fields: fieldErrors(parsed.error.issues), cycle: [], cycleError: null };
   }
   const first = generateChecked(parsed.data);
   if (!first.ok) return { spec: parsed.data, fields: first.fields, cycle: [], cycleError: null };
