@@ -1,11 +1,10 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { AuditResponse } from '@shared/schemas/admin';
 import { api } from '@/lib/api-client';
-
-export const auditKey = ['admin', 'audit'] as const;
+import { adminKeys } from '@/lib/queries/keys';
 
 export const auditQueryOptions = queryOptions({
-  queryKey: auditKey,
+  queryKey: adminKeys.audit,
   queryFn: () => api.get<AuditResponse>('/api/admin/audit'),
 });
 

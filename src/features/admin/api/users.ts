@@ -1,14 +1,13 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { AdminUserResponse, AdminUsersResponse, UpdateAdminUserInput } from '@shared/schemas/admin';
 import { api } from '@/lib/api-client';
-
-export const adminUsersKey = ['admin', 'users'] as const;
+import { adminKeys } from '@/lib/queries/keys';
 
 export function fetchAdminUsers(): Promise<AdminUsersResponse> {
   return api.get<AdminUsersResponse>('/api/admin/users');
 }
 
-export const adminUsersQueryOptions = queryOptions({ queryKey: adminUsersKey, queryFn: fetchAdminUsers });
+export const adminUsersQueryOptions = queryOptions({ queryKey: adminKeys.users, queryFn: fetchAdminUsers });
 
 export function useAdminUsers() {
   return useQuery(adminUsersQueryOptions);
@@ -20,6 +19,6 @@ export function useUpdateAdminUser() {
   return useMutation({
     mutationFn: ({ id, ...input }: UpdateAdminUserInput & { id: string }) =>
       api.patch<AdminUserResponse>(`/api/admin/users/${encodeURIComponent(id)}`, input),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: ['admin'] }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: adminKeys.all }),
   });
 }

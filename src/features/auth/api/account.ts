@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { ChangePasswordInput, OkResponse, UpdateAccountInput, UserResponse } from '@shared/schemas/auth';
 import { api } from '@/lib/api-client';
-import { sessionKey } from './session';
+import { sessionKeys } from '@/lib/queries/keys';
 
 export function updateAccount(input: UpdateAccountInput): Promise<UserResponse> {
   return api.patch<UserResponse>('/api/auth/me', input);
@@ -11,7 +11,7 @@ export function useUpdateAccount() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: updateAccount,
-    onSuccess: ({ user }) => queryClient.setQueryData(sessionKey, { user }),
+    onSuccess: ({ user }) => queryClient.setQueryData(sessionKeys.session, { user }),
   });
 }
 

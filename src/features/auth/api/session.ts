@@ -1,15 +1,18 @@
 import { type QueryClient, queryOptions, useQuery } from '@tanstack/react-query';
 import type { SessionResponse, User } from '@shared/schemas/auth';
 import { api } from '@/lib/api-client';
-
-export const sessionKey = ['auth', 'session'] as const;
+import { sessionKeys } from '@/lib/queries/keys';
 
 /** Who is signed in (null for a visitor; this route never answers 401). */
 export function fetchSession(): Promise<SessionResponse> {
   return api.get<SessionResponse>('/api/auth/session');
 }
 
-export const sessionQueryOptions = queryOptions({ queryKey: sessionKey, queryFn: fetchSession, staleTime: 60_000 });
+export const sessionQueryOptions = queryOptions({
+  queryKey: sessionKeys.session,
+  queryFn: fetchSession,
+  staleTime: 60_000,
+});
 
 /** The signed-in user, which drives navigation, guards and the home page. */
 export function useMe(): { user: User | null; isLoading: boolean } {
@@ -22,6 +25,6 @@ export function useMe(): { user: User | null; isLoading: boolean } {
  * previous account, but keep the session query itself, which mounted components watch.
  */
 export function switchAccount(queryClient: QueryClient, user: User | null) {
-  queryClient.setQueryData(sessionKey, { user });
-  queryClient.removeQueries({ predicate: (q) => q.queryKey[0] !== sessionKey[0] });
+  queryClient.setQueryData(sessionKeys.session, { user });
+  queryClient.removeQueries({ predicate: (q) => q.queryKey[0] !== sessionKeys.all[0] });
 }

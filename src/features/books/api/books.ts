@@ -13,13 +13,13 @@ import type {
   UpdateBookInput,
 } from '@shared/schemas/books';
 import { api } from '@/lib/api-client';
+import { bookKeys } from '@/lib/queries/keys';
 import { useSavedDrills } from '@/lib/queries/saved-drills';
 
-export const booksKey = ['books'] as const;
 const enc = encodeURIComponent;
 
 export const catalogueQueryOptions = queryOptions({
-  queryKey: [...booksKey, 'catalogue'],
+  queryKey: bookKeys.catalogue,
   queryFn: () => api.get<BooksResponse>('/api/books'),
 });
 
@@ -31,14 +31,14 @@ export function useCatalogue() {
 /** A teacher's own books, drafts included. */
 export function useMyBooks(enabled = true) {
   return useQuery({
-    queryKey: [...booksKey, 'mine'],
+    queryKey: bookKeys.mine,
     queryFn: () => api.get<BooksResponse>('/api/books/mine'),
     enabled,
   });
 }
 
 export const bookQueryOptions = (id: string) =>
-  queryOptions({ queryKey: [...booksKey, id], queryFn: () => api.get<BookResponse>(`/api/books/${enc(id)}`) });
+  queryOptions({ queryKey: bookKeys.detail(id), queryFn: () => api.get<BookResponse>(`/api/books/${enc(id)}`) });
 
 /** One book; `pollMs` keeps asking (after checkout, until the payment has come through). */
 export function useBook(id: string, pollMs: number | false = false) {
@@ -51,7 +51,7 @@ export function fetchBookDrill(bookId: string, drillId: string): Promise<BookDri
 
 export function useBookDrill(bookId: string, drillId: string | null) {
   return useQuery({
-    queryKey: [...booksKey, bookId, 'drill', drillId],
+    queryKey: bookKeys.drill(bookId, drillId),
     queryFn: () => fetchBookDrill(bookId, drillId!),
     enabled: !!drillId,
     retry: false,
@@ -60,14 +60,14 @@ export function useBookDrill(bookId: string, drillId: string | null) {
 
 export function useBookEdition(id: string) {
   return useQuery({
-    queryKey: [...booksKey, id, 'edition'],
+    queryKey: bookKeys.edition(id),
     queryFn: () => api.get<BookEditionResponse>(`/api/books/${enc(id)}/edition`),
     retry: false,
   });
 }
 
 export function useSales() {
-  return useQuery({ queryKey: [...booksKey, 'sales'], queryFn: () => api.get<SalesResponse>('/api/books/sales') });
+  return useQuery({ queryKey: bookKeys.sales, queryFn: () => api.get<SalesResponse>('/api/books/sales') });
 }
 
 /** The teacher's saved drills, to add to a book. */
@@ -80,8 +80,8 @@ function useBookMutation<I>(fn: (input: I) => Promise<BookResponse>) {
   return useMutation({
     mutationFn: fn,
     onSuccess: (data) => {
-      queryClient.setQueryData(bookQueryOptions(data.book.id).queryKey, data);
-      return queryClient.invalidateQueries({ queryKey: booksKey });
+      queryClient.setQueryData(bookKeys.detail(data.book.id), data);
+      return queryClient.invalidateQueries({ queryKey: bookKeys.all });
     },
   });
 }

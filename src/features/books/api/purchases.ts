@@ -1,11 +1,13 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { AdminPurchaseResponse, AdminPurchasesResponse } from '@shared/schemas/books';
 import { api } from '@/lib/api-client';
-
-export const purchasesKey = ['admin', 'purchases'] as const;
+import { adminKeys } from '@/lib/queries/keys';
 
 export function usePurchases() {
-  return useQuery({ queryKey: purchasesKey, queryFn: () => api.get<AdminPurchasesResponse>('/api/admin/purchases') });
+  return useQuery({
+    queryKey: adminKeys.purchases,
+    queryFn: () => api.get<AdminPurchasesResponse>('/api/admin/purchases'),
+  });
 }
 
 /** An admin refunds a purchase: the player loses the book, the audit log records it. */
@@ -16,8 +18,8 @@ export function useRefundPurchase() {
       api.post<AdminPurchaseResponse>(`/api/admin/purchases/${encodeURIComponent(id)}/refund`),
     onSuccess: () =>
       Promise.all([
-        queryClient.invalidateQueries({ queryKey: purchasesKey }),
-        queryClient.invalidateQueries({ queryKey: ['admin', 'audit'] }),
+        queryClient.invalidateQueries({ queryKey: adminKeys.purchases }),
+        queryClient.invalidateQueries({ queryKey: adminKeys.audit }),
       ]),
   });
 }

@@ -1,14 +1,16 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { CreateCustomPatternInput, CustomPatternResponse, CustomPatternsResponse } from '@shared/schemas/drills';
 import { api } from '@/lib/api-client';
-
-export const customPatternsKey = ['patterns', 'custom'] as const;
+import { customPatternKeys } from '@/lib/queries/keys';
 
 export function fetchCustomPatterns(): Promise<CustomPatternsResponse> {
   return api.get<CustomPatternsResponse>('/api/patterns');
 }
 
-export const customPatternsQueryOptions = queryOptions({ queryKey: customPatternsKey, queryFn: fetchCustomPatterns });
+export const customPatternsQueryOptions = queryOptions({
+  queryKey: customPatternKeys.list,
+  queryFn: fetchCustomPatterns,
+});
 
 /** The user's own patterns and their studios' teachers'. */
 export function useCustomPatterns() {
@@ -23,6 +25,6 @@ export function useSaveCustomPattern() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: saveCustomPattern,
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: customPatternsKey }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: customPatternKeys.all }),
   });
 }

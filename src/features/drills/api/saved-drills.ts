@@ -3,7 +3,6 @@ import type { CreateSavedDrillInput, SavedDrillResponse } from '@shared/schemas/
 import { api } from '@/lib/api-client';
 import { fetchSavedDrills, savedDrillKeys, savedDrillsQueryOptions, useSavedDrills } from '@/lib/queries/saved-drills';
 
-export const savedDrillsKey = savedDrillKeys.all;
 export { fetchSavedDrills, savedDrillsQueryOptions, useSavedDrills };
 
 export function saveDrill(input: CreateSavedDrillInput): Promise<SavedDrillResponse> {
@@ -14,7 +13,7 @@ export function useSaveDrill() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: saveDrill,
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: savedDrillsKey }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: savedDrillKeys.all }),
   });
 }
 
@@ -26,6 +25,6 @@ export function useDeleteSavedDrill() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: deleteSavedDrill,
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: savedDrillsKey }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: savedDrillKeys.all }),
   });
 }

@@ -3,9 +3,8 @@ import type { ListTakesQuery, ListTakesResponse } from '@shared/schemas/history'
 import type { CsrfResponse } from '@shared/schemas/auth';
 import type { CreateTakeInput, TakeResponse } from '@shared/schemas/takes';
 import { ApiError, api } from '@/lib/api-client';
+import { mapKeys } from '@/lib/queries/keys';
 import { takeKeys, takeQueryOptions, useTake } from '@/lib/queries/take';
-
-export const takesKey = takeKeys.all;
 
 export type TakeListParams = Partial<ListTakesQuery>;
 
@@ -41,8 +40,8 @@ export function useDeleteTake() {
     // The maps count every take, so they go stale with it.
     onSuccess: () =>
       Promise.all([
-        queryClient.invalidateQueries({ queryKey: takesKey }),
-        queryClient.invalidateQueries({ queryKey: ['maps'] }),
+        queryClient.invalidateQueries({ queryKey: takeKeys.all }),
+        queryClient.invalidateQueries({ queryKey: mapKeys.all }),
       ]),
   });
 }
@@ -108,8 +107,8 @@ export function useImportTake() {
     mutationFn: importTake,
     onSuccess: () =>
       Promise.all([
-        queryClient.invalidateQueries({ queryKey: takesKey }),
-        queryClient.invalidateQueries({ queryKey: ['maps'] }),
+        queryClient.invalidateQueries({ queryKey: takeKeys.all }),
+        queryClient.invalidateQueries({ queryKey: mapKeys.all }),
       ]),
   });
 }

@@ -11,8 +11,7 @@ import type {
 } from '@shared/schemas/maps';
 import type { SettingsResponse } from '@shared/schemas/settings';
 import { api } from '@/lib/api-client';
-
-export const mapsKey = ['maps'] as const;
+import { type MapName, mapKeys, settingsKeys } from '@/lib/queries/keys';
 
 export type MapFilters = Partial<MapQuery>;
 
@@ -26,9 +25,9 @@ const search = (params: Record<string, string | undefined>) => {
 /** The browser's own time zone: charts count days the way the player lives them. */
 export const localTimeZone = () => Intl.DateTimeFormat().resolvedOptions().timeZone || 'UTC';
 
-const mapQuery = <T>(name: string, filters: MapFilters) =>
+const mapQuery = <T>(name: MapName, filters: MapFilters) =>
   queryOptions({
-    queryKey: [...mapsKey, name, filters],
+    queryKey: mapKeys.filtered(name, filters),
     queryFn: () => api.get<T>(`/api/maps/${name}${search(filters)}`),
   });
 
@@ -49,8 +48,8 @@ export function useSetWeeklyGoal() {
   return useMutation({
     mutationFn: (weeklyMinutesGoal: number | null) => api.put<SettingsResponse>('/api/settings', { weeklyMinutesGoal }),
     onSuccess: (data) => {
-      queryClient.setQueryData(['settings'], data);
-      void queryClient.invalidateQueries({ queryKey: [...mapsKey, 'calendar'] });
+      queryClient.setQueryData(settingsKeys.mine, data);
+      void queryClient.invalidateQueries({ queryKey: mapKeys.map('calendar') });
     },
   });
 }

@@ -1,15 +1,14 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { SettingsResponse, UpdateSettingsInput } from '@shared/schemas/settings';
 import { api } from '@/lib/api-client';
-
-export const settingsKey = ['settings'] as const;
+import { settingsKeys } from '@/lib/queries/keys';
 
 export function fetchSettings(): Promise<SettingsResponse> {
   return api.get<SettingsResponse>('/api/settings');
 }
 
 export const settingsQueryOptions = queryOptions({
-  queryKey: settingsKey,
+  queryKey: settingsKeys.mine,
   queryFn: fetchSettings,
   staleTime: 5 * 60_000,
 });
@@ -25,7 +24,10 @@ export function updateSettings(input: UpdateSettingsInput): Promise<SettingsResp
 
 export function useUpdateSettings() {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: updateSettings, onSuccess: (data) => queryClient.setQueryData(settingsKey, data) });
+  return useMutation({
+    mutationFn: updateSettings,
+    onSuccess: (data) => queryClient.setQueryData(settingsKeys.mine, data),
+  });
 }
 
 export function setLatency(input: { device: string; offsetMs: number }): Promise<SettingsResponse> {
@@ -34,5 +36,8 @@ export function setLatency(input: { device: string; offsetMs: number }): Promise
 
 export function useSetLatency() {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: setLatency, onSuccess: (data) => queryClient.setQueryData(settingsKey, data) });
+  return useMutation({
+    mutationFn: setLatency,
+    onSuccess: (data) => queryClient.setQueryData(settingsKeys.mine, data),
+  });
 }

@@ -1,8 +1,8 @@
 import type { DrillSpec, ScoreOptions } from '@shared/engine';
 import { useQueryClient } from '@tanstack/react-query';
 import { useCallback, useEffect, useState } from 'react';
+import { tempoKeys } from '@/lib/queries/keys';
 import { dismissRefused, onQueueChange, type QueueState, saveTake } from '@/lib/take-queue';
-import { tempoKey } from '../api/tempo';
 import type { FinishedTake } from '../lib/take-session';
 
 export interface TakeToSave {
@@ -38,7 +38,7 @@ export function useTakeQueue() {
         stoppedAtMs: take.stoppedAtMs,
         inputKind: take.inputKind,
         assignmentId,
-      }).then(() => queryClient.invalidateQueries({ queryKey: tempoKey(spec) }));
+      }).then(() => queryClient.invalidateQueries({ queryKey: tempoKeys.forSpec(spec) }));
     },
     [queryClient],
   );

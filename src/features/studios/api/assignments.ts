@@ -7,14 +7,12 @@ import type {
 } from '@shared/schemas/assignments';
 import { api } from '@/lib/api-client';
 import { useSavedDrills } from '@/lib/queries/saved-drills';
-import { studiosKey } from './studios';
-
-export const myAssignmentsKey = ['assignments', 'mine'] as const;
+import { assignmentKeys, studioKeys } from '@/lib/queries/keys';
 
 /** A player's assignments across their studios, with their own status. */
 export function useMyAssignments(enabled = true) {
   return useQuery({
-    queryKey: myAssignmentsKey,
+    queryKey: assignmentKeys.mine,
     queryFn: () => api.get<AssignmentsResponse>('/api/assignments'),
     enabled,
   });
@@ -25,7 +23,7 @@ export function useCreateAssignment(studioId: string) {
   return useMutation({
     mutationFn: (input: CreateAssignmentInput) =>
       api.post<AssignmentResponse>(`/api/studios/${encodeURIComponent(studioId)}/assignments`, input),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: [...studiosKey, studioId] }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: studioKeys.detail(studioId) }),
   });
 }
 
@@ -33,7 +31,7 @@ export function useDeleteAssignment(studioId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (id: string) => api.delete<void>(`/api/assignments/${encodeURIComponent(id)}`),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: [...studiosKey, studioId] }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: studioKeys.detail(studioId) }),
   });
 }
 
@@ -57,7 +55,7 @@ export function practiceLink(
 export function useAssignmentWeekly(id: string) {
   const tz = Intl.DateTimeFormat().resolvedOptions().timeZone || 'UTC';
   return useQuery({
-    queryKey: ['assignments', id, 'weekly', tz],
+    queryKey: assignmentKeys.weekly(id, tz),
     queryFn: () =>
       api.get<AssignmentWeeklyResponse>(
         `/api/assignments/${encodeURIComponent(id)}/weekly?tz=${encodeURIComponent(tz)}`,

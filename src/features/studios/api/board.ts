@@ -1,11 +1,11 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { BoardResponse, StudioPlayerResponse } from '@shared/schemas/assignments';
 import { api } from '@/lib/api-client';
-import { studiosKey } from './studios';
+import { studioKeys } from '@/lib/queries/keys';
 
 export const boardQueryOptions = (studioId: string) =>
   queryOptions({
-    queryKey: [...studiosKey, studioId, 'board'],
+    queryKey: studioKeys.board(studioId),
     queryFn: () => api.get<BoardResponse>(`/api/studios/${encodeURIComponent(studioId)}/board`),
   });
 
@@ -16,7 +16,7 @@ export function useBoard(studioId: string) {
 
 export function useStudioPlayer(studioId: string, playerId: string) {
   return useQuery({
-    queryKey: [...studiosKey, studioId, 'players', playerId],
+    queryKey: studioKeys.player(studioId, playerId),
     queryFn: () =>
       api.get<StudioPlayerResponse>(
         `/api/studios/${encodeURIComponent(studioId)}/players/${encodeURIComponent(playerId)}`,

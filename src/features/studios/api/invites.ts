@@ -9,13 +9,11 @@ import type {
   InviteSignUpInput,
 } from '@shared/schemas/studios';
 import { api, resetCsrfToken } from '@/lib/api-client';
-import { studiosKey } from './studios';
-
-const invitesKey = (studioId: string) => [...studiosKey, studioId, 'invites'] as const;
+import { inviteKeys, studioKeys } from '@/lib/queries/keys';
 
 export function useInvites(studioId: string) {
   return useQuery({
-    queryKey: invitesKey(studioId),
+    queryKey: studioKeys.invites(studioId),
     queryFn: () => api.get<InvitesResponse>(`/api/studios/${encodeURIComponent(studioId)}/invites`),
   });
 }
@@ -25,14 +23,14 @@ export function useCreateInvite(studioId: string) {
   return useMutation({
     mutationFn: (input: CreateInviteInput) =>
       api.post<InviteResponse>(`/api/studios/${encodeURIComponent(studioId)}/invites`, input),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: invitesKey(studioId) }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: studioKeys.invites(studioId) }),
   });
 }
 
 /** What an invite link is for (no sign-in needed). */
 export function useInvitePreview(token: string) {
   return useQuery({
-    queryKey: ['invite', token],
+    queryKey: inviteKeys.preview(token),
     queryFn: () => api.get<InvitePreviewResponse>(`/api/invites/${encodeURIComponent(token)}`),
     enabled: token.length > 0,
   });
@@ -42,7 +40,7 @@ export function useAcceptInvite(token: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: () => api.post<AcceptInviteResponse>(`/api/invites/${encodeURIComponent(token)}/accept`),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: studiosKey }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: studioKeys.all }),
   });
 }
 

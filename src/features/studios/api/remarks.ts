@@ -7,12 +7,11 @@ import type {
   RemarksResponse,
 } from '@shared/schemas/remarks';
 import { api } from '@/lib/api-client';
-
-const remarksKey = (takeId: string) => ['takes', takeId, 'remarks'] as const;
+import { notificationKeys, remarkKeys } from '@/lib/queries/keys';
 
 export function useRemarks(takeId: string) {
   return useQuery({
-    queryKey: remarksKey(takeId),
+    queryKey: remarkKeys.forTake(takeId),
     queryFn: () => api.get<RemarksResponse>(`/api/takes/${encodeURIComponent(takeId)}/remarks`),
   });
 }
@@ -22,15 +21,13 @@ export function useCreateRemark(takeId: string) {
   return useMutation({
     mutationFn: (input: CreateRemarkInput) =>
       api.post<RemarkResponse>(`/api/takes/${encodeURIComponent(takeId)}/remarks`, input),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: remarksKey(takeId) }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: remarkKeys.forTake(takeId) }),
   });
 }
 
-export const notificationsKey = ['notifications'] as const;
-
 export function useNotifications() {
   return useQuery({
-    queryKey: notificationsKey,
+    queryKey: notificationKeys.list,
     queryFn: () => api.get<NotificationsResponse>('/api/notifications'),
     refetchInterval: 60_000,
   });
@@ -40,6 +37,6 @@ export function useMarkNotificationsRead() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: () => api.post<OkResponse>('/api/notifications/read'),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: notificationsKey }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: notificationKeys.all }),
   });
 }

@@ -1,14 +1,13 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { CreateStudioInput, StudioResponse, StudiosResponse } from '@shared/schemas/studios';
 import { api } from '@/lib/api-client';
-
-export const studiosKey = ['studios'] as const;
+import { studioKeys } from '@/lib/queries/keys';
 
 export function fetchStudios(): Promise<StudiosResponse> {
   return api.get<StudiosResponse>('/api/studios');
 }
 
-export const studiosQueryOptions = queryOptions({ queryKey: studiosKey, queryFn: fetchStudios });
+export const studiosQueryOptions = queryOptions({ queryKey: studioKeys.list, queryFn: fetchStudios });
 
 /** The studios the signed-in user teaches or belongs to. */
 export function useStudios() {
@@ -17,7 +16,7 @@ export function useStudios() {
 
 export const studioQueryOptions = (id: string) =>
   queryOptions({
-    queryKey: [...studiosKey, id],
+    queryKey: studioKeys.detail(id),
     queryFn: () => api.get<StudioResponse>(`/api/studios/${encodeURIComponent(id)}`),
   });
 
@@ -29,7 +28,7 @@ export function useCreateStudio() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (input: CreateStudioInput) => api.post<StudioResponse>('/api/studios', input),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: studiosKey }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: studioKeys.all }),
   });
 }
 
@@ -38,6 +37,6 @@ export function useLeaveStudio() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (id: string) => api.delete<void>(`/api/studios/${encodeURIComponent(id)}/membership`),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: studiosKey }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: studioKeys.all }),
   });
 }
