@@ -120,7 +120,7 @@ export function DataTable<T>({
                     scope="col"
                     aria-sort={sorting ? ariaSort(sorted) : undefined}
                     className={cx(
-                      !grid && 'px-3 py-2 font-semibold',
+                      !grid && 'px-3 py-2 align-bottom font-semibold',
                       !grid && !meta?.wrapHeader && 'whitespace-nowrap',
                       meta?.numeric && 'text-right',
                       meta?.headerClassName,

@@ -15,6 +15,7 @@ export function MapTable({ caption, head, rows }: { caption: string; head: strin
     header: h,
     cell: ({ row }) => row.original[j],
     meta: {
+      nowrap: true,
       numeric: rows.every((r) => typeof r[j] === 'number' || (typeof r[j] === 'string' && FIGURE.test(r[j]))),
     },
   }));
