@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { instruments, PRESET_IDS } from '../engine';
 import { chordTones } from '../engine/theory/chord-tones';
-import type { Drill, InstrumentId, PatternId as EnginePatternId } from '../engine';
+import type { InstrumentId, PatternId as EnginePatternId } from '../engine';
 
 /**
  * The drill contracts used by the browser and the API alike: a DrillSpec and a PatternDef as
@@ -167,7 +167,38 @@ export const PreviewQuery = z.object({
     .max(8000, { error: 'The spec is too long' }),
 });
 export type PreviewQuery = z.infer<typeof PreviewQuery>;
-export const PreviewResponse = z.object({ drill: z.custom<Drill>() });
+/** One written note of a generated drill. */
+export const DrillNote = z.object({
+  midi: z.number().int(),
+  name: z.string(),
+  written: z.string(),
+  beat: z.number(),
+  duration: z.number(),
+  measure: z.number().int(),
+  beatInMeasure: z.number(),
+  source: z.enum(['a', 'b', 'scale']),
+  cell: z.number().int(),
+  chordIndex: z.number().int().optional(),
+});
+
+/** A generated drill as the preview sends it: its filled-in spec, its notes and, over changes, the chords played. */
+export const GeneratedDrill = z.object({
+  spec: DrillSpec,
+  notes: z.array(DrillNote),
+  measures: z.number().int(),
+  changes: z
+    .array(
+      z.object({
+        chord: z.string(),
+        pair: z.tuple([z.string(), z.string()]),
+        startBeat: z.number(),
+        beats: z.number(),
+      }),
+    )
+    .optional(),
+});
+
+export const PreviewResponse = z.object({ drill: GeneratedDrill });
 export type PreviewResponse = z.infer<typeof PreviewResponse>;
 
 /* ---------- saved drills and custom patterns ---------- */
