@@ -196,6 +196,31 @@ describe('review and progress in Chromium', () => {
     await checkEverywhere('history', (p) => p.getByTestId('history-table').locator('tbody tr').first().waitFor());
   }, 240_000);
 
+  it('the history sorts by a heading: the server orders the rows, the heading says which way', async () => {
+    await signIn('player@sixfold.test');
+    await open('/history', (p) => p.getByTestId('history-table').locator('tbody tr').first().waitFor());
+    const { page } = browser;
+    const table = page.getByTestId('history-table');
+    const heading = (name: string) => table.getByRole('columnheader', { name });
+    // newest first by default
+    expect(await heading('Date').getAttribute('aria-sort')).toBe('descending');
+    expect(await heading('Accuracy').getAttribute('aria-sort')).toBeNull();
+    await heading('Accuracy').getByRole('button', { name: 'Accuracy' }).click();
+    await page.waitForURL(/sort=accuracy/);
+    await expect.poll(() => heading('Accuracy').getAttribute('aria-sort')).toBe('descending');
+    expect(await heading('Date').getAttribute('aria-sort')).toBeNull();
+    // the accuracy column (the seventh) reads highest first down the page the server sent
+    await expect
+      .poll(async () => {
+        const shown = (await table.locator('tbody tr td:nth-child(7)').allTextContents()).map((t) => parseInt(t, 10));
+        return shown.length > 1 && shown.every((v, i) => i === 0 || shown[i - 1] >= v);
+      })
+      .toBe(true);
+    await heading('Accuracy').getByRole('button').click();
+    await page.waitForURL(/dir=asc/);
+    await expect.poll(() => heading('Accuracy').getAttribute('aria-sort')).toBe('ascending');
+  }, 240_000);
+
   it('the keyboard diagram keeps keys a finger can find on a phone, and scrolls to the rest', async () => {
     const { page } = browser;
     await page.setViewportSize(PHONE);
