@@ -5,10 +5,12 @@ type Props = TextareaHTMLAttributes<HTMLTextAreaElement> & {
   label: string;
   errors?: string[];
   hint?: string;
+  /** extra classes for the text area itself (e.g. a monospaced chart) */
+  inputClassName?: string;
 };
 
 /** A labelled text area whose errors sit right under it (and are tied to it for screen readers). */
-export function TextAreaField({ label, errors, hint, id, className = '', ...props }: Props) {
+export function TextAreaField({ label, errors, hint, id, className = '', inputClassName = '', ...props }: Props) {
   const auto = useId();
   const inputId = id ?? auto;
   const { invalid, describedBy } = helpIds(inputId, hint, errors);
@@ -21,7 +23,7 @@ export function TextAreaField({ label, errors, hint, id, className = '', ...prop
         id={inputId}
         aria-invalid={invalid || undefined}
         aria-describedby={describedBy}
-        className={fieldClass(invalid)}
+        className={`${fieldClass(invalid)} ${inputClassName}`}
         {...props}
       />
       <FieldHelp inputId={inputId} hint={hint} errors={errors} />

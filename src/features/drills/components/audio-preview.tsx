@@ -1,6 +1,7 @@
 import type { Drill } from '@shared/engine';
 import { useEffect, useId, useRef, useState } from 'react';
 import { Button } from '@/components/ui/button';
+import { CheckboxField } from '@/components/ui/check-field';
 import type { Playback } from '@/lib/audio/player';
 import { downloadBytes, fileBase } from './download-file';
 
@@ -85,27 +86,20 @@ export function AudioPreview({ drill, onNote }: { drill: Drill; onNote: (index: 
             {state === 'loading' ? 'Starting…' : 'Play the drill'}
           </Button>
         )}
-        <label htmlFor={clickId} className="flex items-center gap-2 text-body">
-          <input
-            id={clickId}
-            type="checkbox"
-            checked={click}
-            onChange={(e) => setClick(e.target.checked)}
-            disabled={state === 'playing'}
-          />
-          Click
-        </label>
-        <label htmlFor={padId} className="flex items-center gap-2 text-body">
-          <input
-            id={padId}
-            type="checkbox"
-            checked={pad}
-            onChange={(e) => setPad(e.target.checked)}
-            disabled={!hasChords || state === 'playing'}
-          />
-          Chord pad
-          {drill.changes ? ' (follows the changes)' : drill.spec.chord ? ` (${drill.spec.chord})` : ' (no chord set)'}
-        </label>
+        <CheckboxField
+          id={clickId}
+          label="Click"
+          checked={click}
+          onChange={(e) => setClick(e.target.checked)}
+          disabled={state === 'playing'}
+        />
+        <CheckboxField
+          id={padId}
+          label={`Chord pad${drill.changes ? ' (follows the changes)' : drill.spec.chord ? ` (${drill.spec.chord})` : ' (no chord set)'}`}
+          checked={pad}
+          onChange={(e) => setPad(e.target.checked)}
+          disabled={!hasChords || state === 'playing'}
+        />
         <Button variant="quiet" onClick={renderWav} disabled={state !== 'idle'}>
           {state === 'rendering' ? 'Rendering…' : 'Audio (WAV)'}
         </Button>

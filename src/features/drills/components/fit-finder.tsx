@@ -1,6 +1,9 @@
 import { type ChordFit, EngineError, type NoteRole, pairsForChord } from '@shared/engine';
-import { type FormEvent, useEffect, useId, useMemo, useRef, useState } from 'react';
+import { useEffect, useId, useMemo, useRef, useState } from 'react';
+import { useSchemaForm } from '@/components/form/use-schema-form';
 import { Button } from '@/components/ui/button';
+import { CheckboxField } from '@/components/ui/check-field';
+import { TextField } from '@/components/ui/text-field';
 import type { Playback } from '@/lib/audio/player';
 
 type Found = { chord: string; fits: ChordFit[]; error: null } | { chord: string; fits: []; error: string };
@@ -87,7 +90,9 @@ export function FitFinder({
   initialChord: string;
   onPick: (fit: ChordFit, chord: string) => void;
 }) {
-  const [text, setText] = useState(initialChord);
+  const form = useSchemaForm(() => import('@shared/schemas/chords').then((m) => m.FindPairsInput), {
+    defaultValues: { chord: initialChord },
+  });
   const [asked, setAsked] = useState<string | null>(null);
   const [all, setAll] = useState(false);
   const [showAltered, setShowAltered] = useState(true);
@@ -95,17 +100,18 @@ export function FitFinder({
   const [audioError, setAudioError] = useState<string | null>(null);
   const playback = useRef<Playback | null>(null);
   const found = useMemo(() => (asked ? find(asked) : null), [asked]);
-  const inputId = useId();
-  const errorId = `${inputId}-error`;
   const alteredId = useId();
 
   useEffect(() => () => playback.current?.stop(), []);
 
-  function submit(e: FormEvent) {
-    e.preventDefault();
-    setAll(false);
-    setAsked(text.trim() || ' ');
-  }
+  // The chord is checked by the engine (through the shared schema) before any pairs are listed.
+  const submit = form.handleSubmit(
+    ({ chord }) => {
+      setAll(false);
+      setAsked(chord);
+    },
+    () => setAsked(null),
+  );
 
   async function hear(fit: ChordFit, chord: string) {
     const key = pairName(fit);
@@ -136,30 +142,25 @@ export function FitFinder({
       <h2 id="fit-finder-heading" className="text-lead font-bold">
         Fit finder
       </h2>
-      <form onSubmit={submit} className="flex flex-wrap items-end gap-2" aria-label="Find pairs for a chord">
-        <div className="grid flex-1 gap-1">
-          <label htmlFor={inputId} className="text-body font-semibold">
-            Chord symbol
-          </label>
-          <input
-            id={inputId}
-            value={text}
-            onChange={(e) => setText(e.target.value)}
-            placeholder="D7, Bbm7, Cmaj7#11, G7alt …"
-            autoComplete="off"
-            spellCheck={false}
-            aria-invalid={found?.error ? true : undefined}
-            aria-describedby={found?.error ? errorId : undefined}
-            className={`rounded-lg border bg-raised px-3 py-2 text-body text-text ${found?.error ? 'border-ember-500' : 'border-line'}`}
-          />
-        </div>
-        <Button type="submit">Find pairs</Button>
+      <form
+        onSubmit={submit}
+        className="flex flex-wrap items-start gap-2"
+        aria-label="Find pairs for a chord"
+        noValidate
+      >
+        <TextField
+          label="Chord symbol"
+          className="flex-1"
+          placeholder="D7, Bbm7, Cmaj7#11, G7alt …"
+          autoComplete="off"
+          spellCheck={false}
+          errors={form.errorsOf('chord') ?? (found?.error ? [found.error] : undefined)}
+          {...form.register('chord')}
+        />
+        <Button type="submit" className="mt-7">
+          Find pairs
+        </Button>
       </form>
-      {found?.error ? (
-        <p id={errorId} role="alert" className="text-caption font-semibold text-ember-700 dark:text-ember-100">
-          {found.chord.trim() ? found.error : 'Type a chord symbol first, such as D7.'}
-        </p>
-      ) : null}
       {found && !found.error ? (
         <div className="grid gap-2">
           <p className="text-caption text-muted" role="status">
@@ -168,18 +169,15 @@ export function FitFinder({
             tensions the chord names, two major triads a whole step apart, then its third and seventh.
           </p>
           {alteredCount > 0 ? (
-            <label htmlFor={alteredId} className="flex items-center gap-2 text-body">
-              <input
-                id={alteredId}
-                type="checkbox"
-                checked={showAltered}
-                onChange={(e) => {
-                  setShowAltered(e.target.checked);
-                  setAll(false);
-                }}
-              />
-              Show altered pairs ({alteredCount}), whose scale leaves out the chord's fifth
-            </label>
+            <CheckboxField
+              id={alteredId}
+              label={`Show altered pairs (${alteredCount}), whose scale leaves out the chord's fifth`}
+              checked={showAltered}
+              onChange={(e) => {
+                setShowAltered(e.target.checked);
+                setAll(false);
+              }}
+            />
           ) : null}
           <p className="text-caption text-muted">
             Hear plays the pair's six-note scale over the chord; keep headphones at a moderate volume.

@@ -3,7 +3,9 @@ import { chartOf, parseChart, STARTING_PROGRESSIONS } from '@shared/practice/pro
 import type { FieldErrors } from '@shared/schemas/drills';
 import { useEffect, useId, useMemo, useRef, useState } from 'react';
 import { SelectField } from '@/components/ui/select-field';
-import { TextField } from '@/components/ui/text-field';
+import { CheckboxField } from '@/components/ui/check-field';
+import { NumberField } from '@/components/ui/number-field';
+import { TextAreaField } from '@/components/ui/text-area-field';
 import type { Draft } from '../hooks/use-drill-draft';
 
 /** Fits offered for pinning a chord's pair. */
@@ -110,18 +112,15 @@ export function ProgressionEditor({
       <h2 id={`${toggleId}-heading`} className="text-lead font-bold">
         Over changes
       </h2>
-      <label htmlFor={toggleId} className="flex items-center gap-2 text-body">
-        <input
-          id={toggleId}
-          type="checkbox"
-          checked={on}
-          onChange={(e) => {
-            if (e.target.checked) apply(text);
-            else setChanges(null);
-          }}
-        />
-        Play the pattern through a progression, a pair for each chord
-      </label>
+      <CheckboxField
+        id={toggleId}
+        label="Play the pattern through a progression, a pair for each chord"
+        checked={on}
+        onChange={(e) => {
+          if (e.target.checked) apply(text);
+          else setChanges(null);
+        }}
+      />
       {on ? (
         <>
           <div className="grid items-end gap-3 sm:grid-cols-[2fr_1fr]">
@@ -137,9 +136,8 @@ export function ProgressionEditor({
                 if (p) apply(p.chart);
               }}
             />
-            <TextField
+            <NumberField
               label="Choruses"
-              type="number"
               min={1}
               max={16}
               value={String(draft.choruses)}
@@ -147,23 +145,18 @@ export function ProgressionEditor({
             />
           </div>
           <div className="grid gap-1">
-            <label htmlFor={chartId} className="text-body font-semibold">
-              Bars
-            </label>
-            <textarea
+            <TextAreaField
               id={chartId}
+              label="Bars"
               rows={3}
               value={text}
               spellCheck={false}
+              hint="Chord symbols between bar lines: two chords in a bar share it, % repeats the bar before."
               aria-invalid={error ? true : undefined}
-              aria-describedby={`${chartId}-help`}
               onChange={(e) => apply(e.target.value)}
-              className={`w-full rounded-lg border bg-raised px-3 py-2 font-mono text-body text-text ${error ? 'border-ember-500' : 'border-line focus:border-ink-500'}`}
+              inputClassName="font-mono"
               data-testid="progression-chart"
             />
-            <p id={`${chartId}-help`} className="text-caption text-muted">
-              Chord symbols between bar lines: two chords in a bar share it, % repeats the bar before.
-            </p>
             {error || problems.length > 0 ? (
               <p
                 role="alert"
