@@ -1,6 +1,6 @@
 import { type Drill, instruments, type Notation, notate, writtenPair } from '@shared/engine';
 import { useEffect, useLayoutEffect, useMemo, useRef, useState } from 'react';
-import { type NoteMark, markFromClass } from './marks';
+import { type MarkSource, type NoteMark, markFromClass } from './marks';
 import type { MarkLayer } from './marks';
 import { MarksLegend } from './marks-legend';
 import { ShortDrillNotice } from './short-drill-notice';
@@ -19,6 +19,8 @@ interface Props {
   verdicts?: NoteVerdicts;
   /** the same as class strings ('sf-mark-late sf-provisional'), as the practice pages keep them */
   marks?: NoteMarks;
+  /** marks that change during a take, painted on the staff as they change (no re-render) */
+  source?: MarkSource;
   /** the note being played, shown by a band behind it */
   current?: number | null;
   /** fade the notes (for memorising) */
@@ -67,6 +69,7 @@ export function DrillStaff({
   drill,
   verdicts,
   marks,
+  source,
   current,
   faded,
   label,
@@ -83,7 +86,7 @@ export function DrillStaff({
   const [error, setError] = useState<string | null>(null);
   const [version, setVersion] = useState(0);
   const width = fixedWidth ?? measured;
-  const marksRow = verdicts !== undefined || marks !== undefined;
+  const marksRow = verdicts !== undefined || marks !== undefined || source !== undefined;
   const notation = useMemo((): Notation | Error => {
     try {
       return notate(drill);
@@ -141,7 +144,7 @@ export function DrillStaff({
   // biome-ignore lint/correctness/useExhaustiveDependencies: version changes when the staff is redrawn
   useLayoutEffect(() => {
     const l = layer.current;
-    if (!l) return;
+    if (!l || source) return;
     l.setAll(verdictsOf(verdicts, marks));
     l.setCurrent(current ?? null);
     const want = extrasOf(marks);
@@ -149,6 +152,20 @@ export function DrillStaff({
     for (const [i, cls] of want) noteEls.current[i]?.classList.add(...cls);
     extras.current = want;
   }, [verdicts, marks, current, version]);
+
+  // A take's marks, painted by the store's own listener (again after a redraw).
+  // biome-ignore lint/correctness/useExhaustiveDependencies: version changes when the staff is redrawn
+  useLayoutEffect(() => {
+    const l = layer.current;
+    if (!l || !source) return;
+    const paint = () => {
+      const now = source.marksFor(drill);
+      l.setAll(now.marks);
+      l.setCurrent(now.current);
+    };
+    paint();
+    return source.subscribePaint(paint);
+  }, [source, drill, version]);
 
   const inst = instruments[drill.spec.instrument];
   const staves = notation instanceof Error ? [] : notation.staves;

@@ -13,6 +13,18 @@ export interface NoteMark {
   settled: boolean;
 }
 
+/**
+ * Marks that change while a staff is shown (a running take). The staff paints them itself, in
+ * the listener, the moment they change: a played note's mark is in the page before the input
+ * event's handler returns, with no React render in between.
+ */
+export interface MarkSource {
+  /** Calls `paint` on every change, before any other listener; returns the unsubscribe. */
+  subscribePaint(paint: () => void): () => void;
+  /** The marks and the current note for this drill (none when the marks belong to another). */
+  marksFor(drill: unknown): { marks: ReadonlyMap<number, NoteMark>; current: number | null };
+}
+
 /** Where a drawn note is, for its mark and the band behind it. */
 export interface NoteGeometry {
   /** the notehead's centre */

@@ -2,7 +2,7 @@ import type { Drill } from '@shared/engine';
 import { useEffect, useMemo, useState } from 'react';
 import { isBlackKey, KeyboardDiagram, type KeyMark } from '@/components/midi/keyboard-diagram';
 import { getNoteInput } from '@/hooks/use-note-input';
-import { type LiveMarks, useLiveMarks } from '../lib/live-marks';
+import { type LiveMarks, useLiveCurrent } from '../lib/live-marks';
 import type { PitchFrame } from '../lib/pitch-frame';
 
 const IN_DRILL: KeyMark = { className: 'fill-dusk-100', label: 'in the drill' };
@@ -32,7 +32,7 @@ export function LiveKeyboard({
   playedToConcert: number;
   label: string;
 }) {
-  const { current } = useLiveMarks(live, drill);
+  const current = useLiveCurrent(live, drill);
   const [held, setHeld] = useState<ReadonlySet<number>>(new Set());
   useEffect(
     () =>

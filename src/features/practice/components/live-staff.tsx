@@ -1,13 +1,13 @@
 import type { Drill } from '@shared/engine';
 import { DrillStaff } from '@/components/notation/drill-staff';
-import { type LiveMarks, useLiveMarks } from '../lib/live-marks';
+import type { LiveMarks } from '../lib/live-marks';
 
 /**
- * The staff of the running take: the only part of the page a played note re-renders. During a
+ * The staff of the running take: it paints each mark as the take's store changes, without a
+ * render of its own. During a
  * take the staff carries the first downbeat's performance.now() time (data-downbeat-ms), so a
  * test or a tool can line its own clock up with the marks.
  */
 export function LiveStaff({ drill, live, downbeatMs }: { drill: Drill; live: LiveMarks; downbeatMs: number | null }) {
-  const { marks, current } = useLiveMarks(live, drill);
-  return <DrillStaff drill={drill} verdicts={marks} current={current} downbeatMs={downbeatMs} />;
+  return <DrillStaff drill={drill} source={live} downbeatMs={downbeatMs} />;
 }

@@ -23,10 +23,15 @@ export function useSoundRouting() {
       // An acoustic instrument is heard already, and the microphone would hear the echo.
       if (e.source === 'mic') return;
       if (hear.outputId) sendNote(hear.outputId, e.type, e.midi, e.velocity);
-      else if (e.type === 'on') {
-        void synth.current.ensure();
-        synth.current.noteOn(e.midi, e.velocity);
-      } else synth.current.noteOff(e.midi);
+      // The synth starts as soon as the input's other listeners are done (a microtask, in the
+      // same task): the take paints the note's mark first, and the sound follows well under a
+      // millisecond later.
+      else if (e.type === 'on')
+        queueMicrotask(() => {
+          void synth.current.ensure();
+          synth.current.noteOn(e.midi, e.velocity);
+        });
+      else queueMicrotask(() => synth.current.noteOff(e.midi));
     });
     const offBreath = getNoteInput().onBreath((v) => synth.current.breath(v));
     return () => {

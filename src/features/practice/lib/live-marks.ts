@@ -1,18 +1,23 @@
 import type { Drill } from '@shared/engine';
 import { useSyncExternalStore } from 'react';
+import type { MarkSource } from '@/components/notation/marks';
 import type { LiveMark } from './take-session';
 
+const NONE: ReadonlyMap<number, LiveMark> = new Map();
+
 /**
- * The marks and the current note of a running take, kept outside React state so that a note
- * re-renders only the staff and the keyboard that show it, never the whole practice page.
+ * The marks and the current note of a running take, kept outside React state. The staff paints
+ * them itself when they change (a painter, called first); the keyboard re-renders only when
+ * the current note moves; the rest of the practice page never does.
  */
-export class LiveMarks {
+export class LiveMarks implements MarkSource {
   marks: ReadonlyMap<number, LiveMark> = new Map();
   current: number | null = null;
   /** the drill the marks belong to: a staff showing another drill (the next ladder step) shows none */
   drill: Drill | null = null;
   private version = 0;
   private listeners = new Set<() => void>();
+  private painters = new Set<() => void>();
 
   subscribe = (fn: () => void) => {
     this.listeners.add(fn);
@@ -20,6 +25,18 @@ export class LiveMarks {
       this.listeners.delete(fn);
     };
   };
+
+  subscribePaint = (paint: () => void) => {
+    this.painters.add(paint);
+    return () => {
+      this.painters.delete(paint);
+    };
+  };
+
+  marksFor(drill: unknown) {
+    if (this.drill !== drill) return { marks: NONE, current: null };
+    return { marks: this.marks, current: this.current };
+  }
 
   getVersion = () => this.version;
 
@@ -44,19 +61,16 @@ export class LiveMarks {
 
   private emit() {
     this.version += 1;
+    for (const paint of this.painters) paint();
     for (const fn of this.listeners) fn();
   }
 }
 
-const NONE: ReadonlyMap<number, LiveMark> = new Map();
-
 /**
- * Re-renders the calling component (only) when the take's marks or current note change. A
- * component showing a drill other than the one marked (a new ladder step, a changed tempo)
- * gets clean marks.
+ * The note due now, for a component that shows only that (the keyboard): it re-renders when
+ * the current note moves, not on every mark. A component showing a drill other than the one
+ * marked (a new ladder step, a changed tempo) gets none.
  */
-export function useLiveMarks(store: LiveMarks, drill: Drill) {
-  useSyncExternalStore(store.subscribe, store.getVersion);
-  if (store.drill !== drill) return { marks: NONE, current: null };
-  return { marks: store.marks, current: store.current };
+export function useLiveCurrent(store: LiveMarks, drill: Drill): number | null {
+  return useSyncExternalStore(store.subscribe, () => (store.drill === drill ? store.current : null));
 }
