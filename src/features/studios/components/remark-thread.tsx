@@ -3,6 +3,7 @@ import type { Remark } from '@shared/schemas/remarks';
 import { useSchemaForm } from '@/components/form/use-schema-form';
 import { Button } from '@/components/ui/button';
 import { FormMessage } from '@/components/ui/form-message';
+import { TextAreaField } from '@/components/ui/text-area-field';
 import { useCreateRemark } from '../api/remarks';
 import { formatDateTime } from '@/lib/format-date';
 
@@ -22,20 +23,17 @@ function Reply({ takeId, parentId }: { takeId: string; parentId: string }) {
   );
   return (
     <form onSubmit={onSubmit} className="mt-2 flex flex-wrap items-end gap-2" aria-label="Answer">
-      <label className="grid flex-1 gap-1 text-caption font-semibold">
-        Your answer
-        <textarea
-          rows={2}
-          {...form.register('body')}
-          className="rounded-lg border border-line bg-raised px-3 py-2 text-body font-normal"
-        />
-      </label>
+      <TextAreaField
+        label="Your answer"
+        className="flex-1"
+        rows={2}
+        errors={form.errorsOf('body')}
+        {...form.register('body')}
+      />
       <Button type="submit" variant="quiet" disabled={create.isPending || !body.trim()}>
         Send answer
       </Button>
-      {form.formError || form.errorsOf('body') ? (
-        <FormMessage tone="error">{form.formError ?? form.errorsOf('body')?.join(' ')}</FormMessage>
-      ) : null}
+      {form.formError ? <FormMessage tone="error">{form.formError}</FormMessage> : null}
     </form>
   );
 }

@@ -10,6 +10,7 @@ import { useSchemaForm } from '@/components/form/use-schema-form';
 import { Button } from '@/components/ui/button';
 import { FormMessage } from '@/components/ui/form-message';
 import { SelectField } from '@/components/ui/select-field';
+import { TextAreaField } from '@/components/ui/text-area-field';
 import { useCreateRemark, useRemarks } from '../api/remarks';
 import { useTake } from '../api/take';
 import { useTakeReplay } from '../hooks/use-take-replay';
@@ -64,22 +65,19 @@ function RemarkForm({
         options={options}
         errors={form.errorsOf('noteIndex')}
       />
-      <label className="grid gap-1 font-semibold">
-        Remark
-        <textarea
-          id="sf-remark-body"
-          rows={3}
-          {...form.register('body')}
-          className="rounded-lg border border-line bg-raised px-3 py-2 font-normal"
-        />
-      </label>
+      <TextAreaField
+        id="sf-remark-body"
+        label="Remark"
+        rows={3}
+        errors={form.errorsOf('body')}
+        {...form.register('body')}
+      />
       <div>
         <Button type="submit" disabled={create.isPending || !body.trim()}>
           Leave the remark
         </Button>
       </div>
       {form.formError ? <FormMessage tone="error">{form.formError}</FormMessage> : null}
-      {form.errorsOf('body') ? <FormMessage tone="error">{form.errorsOf('body')!.join(' ')}</FormMessage> : null}
     </form>
   );
 }
