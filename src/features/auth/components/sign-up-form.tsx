@@ -1,6 +1,7 @@
 import { Link } from 'react-router-dom';
 import { Button } from '@/components/ui/button';
 import { FormMessage } from '@/components/ui/form-message';
+import { RadioField } from '@/components/ui/check-field';
 import { TextField } from '@/components/ui/text-field';
 import { useSchemaForm } from '@/components/form/use-schema-form';
 import { useSignUp } from '../api/sign-up';
@@ -42,16 +43,18 @@ export function SignUpForm({ onSignedUp }: { onSignedUp: () => void }) {
         <legend className="mb-1 text-body font-semibold">How will you use Sixfold?</legend>
         <div className="grid gap-2 sm:grid-cols-2">
           {roles.map((r) => (
-            <label
+            <RadioField
               key={r.value}
-              className={`flex cursor-pointer gap-3 rounded-lg border p-3 ${role === r.value ? 'border-brass-500 bg-brass-100/40 dark:bg-ink-700' : 'border-line'}`}
-            >
-              <input type="radio" value={r.value} className="mt-1" {...form.register('role')} />
-              <span>
-                <span className="block font-bold">{r.title}</span>
-                <span className="text-caption text-muted">{r.text}</span>
-              </span>
-            </label>
+              value={r.value}
+              labelClassName={`flex cursor-pointer gap-3 rounded-lg border p-3 ${role === r.value ? 'border-brass-500 bg-brass-100/40 dark:bg-ink-700' : 'border-line'}`}
+              label={
+                <span>
+                  <span className="block font-bold">{r.title}</span>
+                  <span className="text-caption text-muted">{r.text}</span>
+                </span>
+              }
+              {...form.register('role')}
+            />
           ))}
         </div>
         {roleErrors ? (
