@@ -38,14 +38,14 @@ export function StudioBoard({ studioId }: { studioId: string }) {
           {r.player.name}
         </Link>
       ),
-      meta: { rowHeader: true },
+      meta: { rowHeader: true, nowrap: true },
     },
     ...data.assignments.map(
       (a): ColumnDef<BoardRow> => ({
         id: a.id,
         header: () => (
           <>
-            <span className="block max-w-48">{a.title}</span>
+            <span className="block min-w-32 max-w-48">{a.title}</span>
             <span className="font-normal">due {formatDue(a.dueAt)}</span>
           </>
         ),
