@@ -16,7 +16,7 @@ import type {
   TriadCellDef,
 } from '../types';
 import type { Ladders } from './cells';
-import { defaultStart, laddersFor, snapStart, startLadder } from './generate';
+import { defaultStart, laddersFor, snapStart, startLadder } from './start';
 import type { Ladder } from './ladder';
 import { checkDirection, resolveInstrument, resolveMeter, resolvePattern, resolveRange, resolveTempo } from './spec';
 import { checkMeterFits, measureLength, measuresFor, noteLength, tidy } from './timing';

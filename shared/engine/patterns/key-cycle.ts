@@ -5,7 +5,8 @@ import { chromaOf, rootSpelling } from '../theory/spelling';
 import { parseTriad } from '../theory/triads';
 import type { Drill, DrillSpec, KeyOrder } from '../types';
 import { moveChanges } from './changes';
-import { cellsToFit, generateDrill } from './generate';
+import { generateDrill } from './generate';
+import { cellsToFit } from './start';
 import { resolvePattern } from './spec';
 
 const STEP: Record<KeyOrder, number> = { chromatic: 1, fourths: 5, fifths: 7 };

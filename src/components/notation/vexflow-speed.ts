@@ -41,10 +41,11 @@ export function speedUpVexFlow(): void {
     return this;
   };
   context.restore = function restore(this: ContextState) {
+    // The saved records were copies made by save() and nothing else holds them.
     const saved = this.stateStack.pop();
     if (saved) {
-      this.state = { ...saved.state };
-      this.attributes = { ...saved.attributes };
+      this.state = saved.state;
+      this.attributes = saved.attributes;
     }
     return this;
   };
