@@ -20,6 +20,7 @@ import {
   SalesResponse,
 } from './books';
 import { OutboxResponse } from './dev';
+import { ErrorResponse } from './errors';
 import {
   CustomPatternResponse,
   CustomPatternsResponse,
@@ -164,6 +165,9 @@ export const apiResponses = {
 } as const satisfies Record<`${Method} /api${string}`, ResponseContract>;
 
 export type ApiRoute = keyof typeof apiResponses;
+
+/** What every route answers on failure (4xx, 5xx); the health check's 503 keeps its own shape. */
+export const apiErrorResponse = ErrorResponse;
 
 /** The JSON body a route answers with, e.g. `ApiResponse<'GET /api/books'>`. */
 export type ApiResponse<R extends ApiRoute> = (typeof apiResponses)[R] extends z.ZodType<infer T> ? T : never;

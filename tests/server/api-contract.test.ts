@@ -37,8 +37,9 @@ describe('the registry of responses', () => {
 describe('the response check', () => {
   // A small app of its own with routes at the API's paths, standing in for presenters that drifted.
   const app = express();
-  app.get('/api/health', (_req, res) => {
-    res.json({ ok: 'yes', db: 'up' });
+  app.get('/api/health', (req, res) => {
+    if (req.query.down === '1') res.status(503).json({ ok: false, db: 'down' });
+    else res.json({ ok: 'yes', db: 'up' });
   });
   app.get('/api/auth/csrf', (_req, res) => {
     res.json({ token: 'abc' });
@@ -48,6 +49,32 @@ describe('the response check', () => {
   });
   app.get('/api/settings', (_req, res) => {
     res.status(404).json({ error: { code: 'not_found', message: 'no such thing' } });
+  });
+  app.delete('/api/drills/:id', (_req, res) => {
+    res.status(200).end();
+  });
+  app.delete('/api/patterns/:id', (_req, res) => {
+    res.status(204).end();
+  });
+  app.get('/api/takes/:id/midi', (req, res) => {
+    if (req.params.id === 'right') res.type('audio/midi').send(Buffer.from('MThd'));
+    else res.type('text/plain').send('MThd');
+  });
+  app.get('/api/settings/latency-sheet', (_req, res) => {
+    res.type('text/plain').send('no entry');
+  });
+  app.post('/api/books', (_req, res) => {
+    res.status(400).json({ message: 'a bare message' });
+  });
+  app.post('/api/studios', (_req, res) => {
+    res
+      .status(400)
+      .json({
+        error: { code: 'validation', message: 'Check these fields: name', fields: { name: ['Name the studio'] } },
+      });
+  });
+  app.get('/api/maps/keys', (_req, res) => {
+    res.status(503).json({ ok: false, db: 'down' });
   });
   checkResponseContracts(app);
 
@@ -64,9 +91,33 @@ describe('the response check', () => {
     expect(takeContractFailures()).toEqual(['GET /api/not-registered has no entry in the registry of responses']);
   });
 
-  it('passes an answer that fits, and leaves error answers to the error contract', async () => {
+  it('holds a route marked "no body" to 204 and a file route to its content type', async () => {
+    await request(app).delete('/api/drills/d1').expect(200);
+    await request(app).delete('/api/patterns/p1').expect(204);
+    await request(app).get('/api/takes/right/midi').expect(200);
+    await request(app).get('/api/takes/wrong/midi').expect(200);
+    await request(app).get('/api/settings/latency-sheet').expect(200);
+    expect(takeContractFailures()).toEqual([
+      'DELETE /api/drills/:id (DELETE /api/drills/d1) answered 200, but the registry says 204 with no body',
+      'GET /api/takes/:id/midi (GET /api/takes/wrong/midi) answered a file of type "text/plain; charset=utf-8", not audio/midi',
+      'GET /api/settings/latency-sheet (GET /api/settings/latency-sheet) has no entry in the registry of responses',
+    ]);
+  });
+
+  it('passes answers that fit, errors included', async () => {
     await request(app).get('/api/auth/csrf').expect(200);
     await request(app).get('/api/settings').expect(404);
+    await request(app).post('/api/studios').expect(400);
+    await request(app).get('/api/health?down=1').expect(503);
     expect(takeContractFailures()).toEqual([]);
+  });
+
+  it('holds every failure to the one error shape, except where the route itself describes it', async () => {
+    await request(app).post('/api/books').expect(400);
+    await request(app).get('/api/maps/keys').expect(503);
+    const [bare, mapDown, ...more] = takeContractFailures();
+    expect(more).toEqual([]);
+    expect(bare).toMatch(/^POST \/api\/books answered 400 with a body the error schema refuses:[\s\S]*at error/);
+    expect(mapDown).toContain('GET /api/maps/keys answered 503 with a body the error schema refuses');
   });
 });

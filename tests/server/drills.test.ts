@@ -214,6 +214,9 @@ describe('saved drills and custom patterns', () => {
     expect(created.body.pattern).toMatchObject({ name: 'Wide steps', def, mine: true });
     const forPlayer = await asPlayer.get('/api/patterns');
     expect(forPlayer.body.patterns.find((p: { id: string }) => p.id === id)).toMatchObject({ mine: false });
+    const readByPlayer = await asPlayer.get(`/api/patterns/${id}`);
+    expect(readByPlayer.status).toBe(200);
+    expect(readByPlayer.body.pattern).toMatchObject({ id, name: 'Wide steps', def, mine: false });
     expect((await asPlayer.patch(`/api/patterns/${id}`, { name: 'x' })).status).toBe(404);
     expect((await asStranger.get(`/api/patterns/${id}`)).status).toBe(404);
     const bad = await asTeacher.post('/api/patterns', { name: 'Bad', def: { ...def, degrees: [] } });
