@@ -24,11 +24,9 @@ export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
   }
   if (err instanceof AppError) {
     if (err.retryAfter) res.set('Retry-After', String(err.retryAfter));
-    res
-      .status(err.status)
-      .json({
-        error: { code: err.code, message: err.message, ...(err.fields ? { fields: err.fields } : {}) },
-      } satisfies ErrorResponse);
+    res.status(err.status).json({
+      error: { code: err.code, message: err.message, ...(err.fields ? { fields: err.fields } : {}) },
+    } satisfies ErrorResponse);
     return;
   }
   if (err instanceof EngineError) {
@@ -80,9 +78,7 @@ export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
   // The first line only: a failed query's message goes on to list its parameters.
   const stack = typeof err?.stack === 'string' ? err.stack.split('\n').filter((l: string) => /^\s+at /.test(l)) : [];
   console.error(`[error] ${err?.name ?? 'Error'}: ${String(err?.message ?? err).split('\n')[0]}\n${stack.join('\n')}`);
-  res
-    .status(500)
-    .json({
-      error: { code: 'internal', message: 'Something went wrong on our side; nothing you sent was lost' },
-    } satisfies ErrorResponse);
+  res.status(500).json({
+    error: { code: 'internal', message: 'Something went wrong on our side; nothing you sent was lost' },
+  } satisfies ErrorResponse);
 };

@@ -67,11 +67,9 @@ describe('the response check', () => {
     res.status(400).json({ message: 'a bare message' });
   });
   app.post('/api/studios', (_req, res) => {
-    res
-      .status(400)
-      .json({
-        error: { code: 'validation', message: 'Check these fields: name', fields: { name: ['Name the studio'] } },
-      });
+    res.status(400).json({
+      error: { code: 'validation', message: 'Check these fields: name', fields: { name: ['Name the studio'] } },
+    });
   });
   app.get('/api/maps/keys', (_req, res) => {
     res.status(503).json({ ok: false, db: 'down' });
