@@ -7,7 +7,7 @@ import { takeWhere } from './take-where';
 const dayNumber = (day: string) => Math.round(Date.parse(`${day}T00:00:00Z`) / 86_400_000);
 
 /** Runs of consecutive days: the longest, and the one that reaches today (or yesterday, not yet broken). */
-export function streaks(days: string[], today: string): { current: number; longest: number } {
+export function streaks(days: string[], today: string): CalendarResponse['streak'] {
   const nums = [...new Set(days.map(dayNumber))].sort((a, b) => a - b);
   let longest = 0;
   let run = 0;
