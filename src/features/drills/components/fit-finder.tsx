@@ -100,6 +100,8 @@ export function FitFinder({
   const [audioError, setAudioError] = useState<string | null>(null);
   const playback = useRef<Playback | null>(null);
   const found = useMemo(() => (asked ? find(asked) : null), [asked]);
+  const inputId = useId();
+  const errorId = `${inputId}-error`;
   const alteredId = useId();
 
   useEffect(() => () => playback.current?.stop(), []);
@@ -133,6 +135,7 @@ export function FitFinder({
     }
   }
 
+  const problem = form.errorsOf('chord')?.join(' ') ?? found?.error ?? null;
   const fits = found?.fits ?? [];
   const alteredCount = fits.filter((f) => f.altered).length;
   const listed = showAltered ? fits : fits.filter((f) => !f.altered);
@@ -149,18 +152,26 @@ export function FitFinder({
         noValidate
       >
         <TextField
+          id={inputId}
           label="Chord symbol"
           className="flex-1"
           placeholder="D7, Bbm7, Cmaj7#11, G7alt …"
           autoComplete="off"
           spellCheck={false}
-          errors={form.errorsOf('chord') ?? (found?.error ? [found.error] : undefined)}
+          // The reason is read out at once (an alert under the form), and tied to the field.
+          aria-invalid={problem ? true : undefined}
+          aria-describedby={problem ? errorId : undefined}
           {...form.register('chord')}
         />
         <Button type="submit" className="mt-7">
           Find pairs
         </Button>
       </form>
+      {problem ? (
+        <p id={errorId} role="alert" className="text-caption font-semibold text-ember-700 dark:text-ember-100">
+          {problem}
+        </p>
+      ) : null}
       {found && !found.error ? (
         <div className="grid gap-2">
           <p className="text-caption text-muted" role="status">
