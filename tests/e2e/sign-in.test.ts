@@ -27,6 +27,27 @@ describe('signing in through the page in Chromium', () => {
     expect(await page.getByRole('heading', { name: 'Sign in to Sixfold' }).count()).toBe(1);
   });
 
+  it('paints the form before its form kit arrives, then takes input once it has', async () => {
+    const { page } = browser;
+    // Hold back the form's own chunk: the page must already show the form's outline.
+    let release: () => void = () => {};
+    const held = new Promise<void>((r) => {
+      release = r;
+    });
+    await page.route(/\/assets\/sign-in-form-[^/]+\.js$/, async (route) => {
+      await held;
+      await route.continue();
+    });
+    await page.goto(`${server.url}/sign-in`);
+    await page.getByRole('heading', { name: 'Sign in to Sixfold' }).waitFor();
+    expect(await page.getByLabel('E-mail').isDisabled()).toBe(true);
+    expect(await page.getByRole('button', { name: 'Sign in' }).isDisabled()).toBe(true);
+    release();
+    await page.locator('form[aria-label="Sign in"]').waitFor();
+    expect(await page.getByLabel('E-mail').isEditable()).toBe(true);
+    await page.unroute(/\/assets\/sign-in-form-[^/]+\.js$/);
+  });
+
   it('shows field errors inline before sending anything', async () => {
     const { page } = browser;
     await page.getByLabel('E-mail').fill('not-an-address');
