@@ -31,7 +31,7 @@ function Choice({
         type={type}
         aria-invalid={invalid || undefined}
         aria-describedby={describedBy}
-        className={`h-4 w-4 shrink-0 accent-brass-600 ${type === 'radio' ? 'mt-1' : ''}`}
+        className={type === 'radio' ? 'mt-1 h-4 w-4 shrink-0' : 'h-4 w-4 shrink-0 accent-brass-600'}
         {...props}
       />
       {label}

@@ -31,12 +31,14 @@ export function LoopPanel({
     defaultValues: { from: 1, to: Math.min(2, measures), tempo: Math.max(20, Math.round(targetTempo * 0.8)) },
   });
   // A shorter drill or a slower tempo pulls the passage inside it.
+  // biome-ignore lint/correctness/useExhaustiveDependencies: only a new drill moves the passage
   useEffect(() => {
     const v = form.getValues();
     if (v.from > measures) form.setValue('from', measures);
     if (v.to > measures) form.setValue('to', measures);
     if (v.tempo > targetTempo) form.setValue('tempo', targetTempo);
-  }, [measures, targetTempo, form]);
+    if (Object.keys(form.formState.errors).length > 0) void form.trigger();
+  }, [measures, targetTempo]);
   const invalid = Object.keys(form.formState.errors).length > 0;
   const submit = form.handleSubmit((v) => onStart(v.from, v.to, v.tempo));
 

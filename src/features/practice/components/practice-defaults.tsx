@@ -89,7 +89,7 @@ export function PracticeDefaults({ settings }: { settings: PlayerSettings }) {
           />
           <NumberField
             label="Default tempo (bpm)"
-            className="w-36"
+            className="w-44"
             min={20}
             max={400}
             errors={form.errorsOf('defaultTempo')}
