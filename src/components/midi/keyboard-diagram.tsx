@@ -61,6 +61,12 @@ export const KeyboardDiagram = memo(function KeyboardDiagram({
     el.scrollLeft = (c4 / width) * el.scrollWidth - el.clientWidth / 3;
   }, [low, high]);
   const outside = (m: number) => (reach ? m < reach.low || m > reach.high : false);
+  // A key that plays is a button named by its note (and its mark, e.g. "E4: held"); a drawn
+  // key is part of the picture and has no name of its own.
+  const keyName = (midi: number) => {
+    const mark = marks?.get(midi);
+    return mark ? `${keyLabel(midi)}: ${mark.label}` : keyLabel(midi);
+  };
   const handlers = (midi: number) =>
     onNote
       ? {
@@ -69,8 +75,11 @@ export const KeyboardDiagram = memo(function KeyboardDiagram({
             onNote('on', midi, e.timeStamp);
           },
           onPointerUp: (e: PointerEvent) => onNote('off', midi, e.timeStamp),
+          // A finger that turns into a sideways swipe scrolls the frame: the note it began stops.
+          onPointerCancel: (e: PointerEvent) => onNote('off', midi, e.timeStamp),
           role: 'button',
           tabIndex: -1,
+          'aria-label': keyName(midi),
         }
       : {};
   return (
@@ -79,7 +88,9 @@ export const KeyboardDiagram = memo(function KeyboardDiagram({
       <svg
         viewBox={`0 0 ${width} ${height}`}
         style={{ minWidth }}
-        className="h-auto w-full touch-none select-none"
+        // Playing keys take a held or sliding-up-and-down finger as a press and only a sideways
+        // swipe as scrolling; a drawing scrolls like any picture.
+        className={`h-auto w-full select-none ${onNote ? 'touch-pan-x' : ''}`}
         role={onNote ? 'group' : 'img'}
         aria-label={label}
         preserveAspectRatio="xMidYMid meet"
@@ -96,7 +107,7 @@ export const KeyboardDiagram = memo(function KeyboardDiagram({
               rx={3}
               data-midi={m}
               className={`${mark ? mark.className : outside(m) ? 'fill-line' : 'fill-white'} stroke-ink-300`}
-              aria-label={mark ? `${keyLabel(m)}: ${mark.label}` : undefined}
+              aria-label={mark ? keyName(m) : undefined}
               {...handlers(m)}
             >
               {mark ? <title>{`${keyLabel(m)}: ${mark.label}`}</title> : null}
@@ -121,19 +132,23 @@ export const KeyboardDiagram = memo(function KeyboardDiagram({
             </rect>
           );
         })}
-        {whites
-          .filter((m) => m % 12 === 0)
-          .map((m) => (
-            <text
-              key={`c${m}`}
-              x={(whiteX.get(m) ?? 0) + w / 2}
-              y={height - 6}
-              textAnchor="middle"
-              className="pointer-events-none fill-ink-500 text-[9px]"
-            >
-              {keyLabel(m)}
-            </text>
-          ))}
+        {/* The octave names are for the eye; each key already says its own name. */}
+        {/* biome-ignore lint/a11y/noAriaHiddenOnFocusable: an SVG group of text labels is never focusable */}
+        <g aria-hidden="true">
+          {whites
+            .filter((m) => m % 12 === 0)
+            .map((m) => (
+              <text
+                key={`c${m}`}
+                x={(whiteX.get(m) ?? 0) + w / 2}
+                y={height - 6}
+                textAnchor="middle"
+                className="pointer-events-none fill-ink-500 text-[9px]"
+              >
+                {keyLabel(m)}
+              </text>
+            ))}
+        </g>
       </svg>
     </section>
   );
