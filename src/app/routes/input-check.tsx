@@ -42,7 +42,8 @@ export function InputCheckRoute() {
   );
 
   return (
-    <div className="grid gap-6">
+    // One column no wider than the screen: the keyboard scrolls inside its own frame, the page never sideways.
+    <div className="grid grid-cols-1 gap-6">
       <header>
         <h1 className="text-title">Input check</h1>
         <p className="mt-1 text-muted">
