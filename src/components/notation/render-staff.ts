@@ -131,6 +131,8 @@ export async function renderStaff(
     // staves is [measure][staff]: the line's top staff and its bottom one.
     const topLine = staves[0][0].getYForLine(0);
     const systemBottomLine = staves[0][staves[0].length - 1].getYForLine(4);
+    // What this line adds to the drawing starts here (VexFlow appends to the drawing's root).
+    const firstOfLine = svg.childElementCount;
     staves.forEach((row, k) => {
       for (const st of row) st.setContext(ctx).draw();
       if (grand) {
@@ -157,7 +159,8 @@ export async function renderStaff(
     const drawn: DrawnEvent[] = built.flatMap((parts) => parts.flatMap((p) => p.notes));
     // The drawing is not on the page yet, so VexFlow's own lookup (by document id) finds nothing.
     const groups = new Map<string, SVGElement>();
-    for (const g of svg.querySelectorAll<SVGElement>('g.vf-stavenote')) groups.set(g.id, g);
+    for (let c: Element | null = svg.children[firstOfLine] ?? null; c; c = c.nextElementSibling)
+      if (c.classList.contains('vf-stavenote')) groups.set(c.id, c as SVGElement);
     for (const { event, note } of drawn) {
       const i = event.noteIndex;
       if (i === undefined || i < 0 || i >= drill.notes.length) continue;
@@ -212,9 +215,10 @@ const isAccidentalGlyph = (t: string | null) => {
  * printed in the text colour (not the triad's) and can be found as .sf-accidental.
  */
 function liftAccidentals(note: SVGElement): void {
-  for (const head of note.querySelectorAll('.vf-notehead')) {
-    for (const text of head.querySelectorAll('text')) {
-      if (!isAccidentalGlyph(text.textContent)) continue;
+  for (const head of [...note.children]) {
+    if (!head.classList.contains('vf-notehead')) continue;
+    for (const text of [...head.children]) {
+      if (text.tagName !== 'text' || !isAccidentalGlyph(text.textContent)) continue;
       text.classList.add('sf-accidental');
       note.appendChild(text);
     }
