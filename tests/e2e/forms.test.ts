@@ -83,6 +83,33 @@ describe('forms refuse bad values on the field, in Chromium', () => {
     expect(after.rows[0].default_tempo).toBe(90);
   });
 
+  it('practice settings: a latency measured meanwhile is saved without wiping an unsaved tempo', async () => {
+    const { page } = playerBrowser;
+    const form = page.getByRole('form', { name: 'My practice settings' });
+    const tempo = form.getByLabel('Default tempo (bpm)');
+    await tempo.fill('77');
+    await page.getByRole('button', { name: 'Measure by tapping' }).click();
+    // Tap on every counted click, 15 ms late: 90 bpm, four lead clicks, eight to tap, the first
+    // 400 ms after the button (the calibration's own timing).
+    await page.evaluate(() => {
+      const first = performance.now() + 400;
+      const beat = 60000 / 90;
+      for (let i = 4; i < 12; i++) {
+        const at = first + i * beat + 15;
+        setTimeout(() => window.__fakeMidi.noteOn(62, 90, 1, at), Math.max(0, at - performance.now()));
+      }
+    });
+    await page.getByText(/^Measured -?\d+\.\d ms; saved for Fake Keyboard\.$/).waitFor({ timeout: 15_000 });
+    // The saved settings are back on the page (the latency line reads them), so the form has had them.
+    await page.getByText(/^Fake Keyboard: -?\d+\.\d ms taken off every note\.$/).waitFor();
+    const res = await server.pool.query('SELECT default_tempo, latency FROM player_settings WHERE user_id = $1', [
+      player.id,
+    ]);
+    expect(Object.keys(res.rows[0].latency)).toEqual(['Fake Keyboard']);
+    expect(res.rows[0].default_tempo).toBe(90);
+    expect(await tempo.inputValue()).toBe('77');
+  });
+
   it('loop panel: a measure past the drill is refused and the loop cannot start; a good passage starts it', async () => {
     const { page } = playerBrowser;
     const to = page.getByLabel('To measure');
