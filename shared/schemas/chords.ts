@@ -13,6 +13,8 @@ export const FindPairsInput = z.object({
     .min(1, { error: 'Type a chord symbol first, such as D7.' })
     .max(24, { error: 'That chord symbol is too long' })
     .superRefine((chord, ctx) => {
+      // an empty or overlong symbol already has its message
+      if (chord === '' || chord.length > 24) return;
       try {
         pairsForChord(chord);
       } catch (err) {
