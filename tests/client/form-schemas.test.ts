@@ -2,6 +2,7 @@ import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { join, relative } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
+import type { z } from 'zod';
 import { EngineError, pairsForChord } from '../../shared/engine';
 import { AssignmentFormInput } from '../../shared/schemas/assignments';
 import { BookDetailsInput } from '../../shared/schemas/books';
@@ -11,9 +12,9 @@ import { ImportTakeInput } from '../../shared/schemas/history';
 import { loopInput } from '../../shared/schemas/practice';
 
 /** The field map a form shows (and a 400 sends) for one input. */
-const fieldsOf = (schema: { safeParse(v: unknown): { success: boolean; error?: { issues: never[] } } }, v: unknown) => {
+const fieldsOf = (schema: z.ZodType, v: unknown) => {
   const parsed = schema.safeParse(v);
-  return parsed.success ? {} : fieldErrors(parsed.error!.issues);
+  return parsed.success ? {} : fieldErrors(parsed.error.issues);
 };
 
 describe('the browser-side schemas the form kit validates with', () => {
