@@ -34,7 +34,8 @@ export default defineConfig({
         test: {
           name: 'server',
           include: ['tests/server/**/*.test.ts'],
-          setupFiles: ['tests/helpers/fast-check-seed.ts', 'tests/helpers/response-contract-setup.ts'],
+          // Added to the root's setup files: a test fails on an answer its response schema refuses.
+          setupFiles: ['tests/helpers/response-contract-setup.ts'],
           globalSetup: ['tests/helpers/global-setup.ts'],
         },
       },
@@ -43,6 +44,8 @@ export default defineConfig({
         test: {
           name: 'browser',
           include: ['tests/e2e/**/*.test.ts'],
+          // The pages' requests go through the same checked app as the API tests.
+          setupFiles: ['tests/helpers/response-contract-setup.ts'],
           globalSetup: ['tests/helpers/global-setup.ts', 'tests/helpers/client-build.ts'],
         },
       },
