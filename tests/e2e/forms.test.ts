@@ -2,6 +2,7 @@ import type { Locator, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { EngineError, midiToPlayed, pairsForChord } from '../../shared/engine';
 import type { DrillSpec } from '../../shared/schemas/drills';
+import { violationsInBothThemes } from '../helpers/axe';
 import { type BrowserSession, openBrowser, signInThroughPage } from '../helpers/browser';
 import { createStudio, createUser, signedIn, type TestUser } from '../helpers/factories';
 import { FAKE_KEYBOARD } from '../helpers/practice-page';
@@ -245,5 +246,27 @@ describe('forms refuse bad values on the field, in Chromium', () => {
       teacher.id,
     ]);
     expect(res.rows[0].n).toBe(1);
+  });
+
+  it('the pages with converted forms, errors showing, have no serious accessibility violation (axe-core)', async () => {
+    const { page } = teacherBrowser;
+    await goto(page, `/books/${bookId}/edit`);
+    await page.getByLabel('Price').fill('lots');
+    await page.getByRole('button', { name: 'Save details' }).click();
+    await waitInvalid(page.getByLabel('Price'));
+    expect(await violationsInBothThemes(page)).toEqual({ light: [], dark: [] });
+    await goto(page, `/studio/${studioId}`);
+    expect(await violationsInBothThemes(page)).toEqual({ light: [], dark: [] });
+    const p = playerBrowser.page;
+    await goto(p, '/history');
+    await p.getByText('Import a take recorded elsewhere').click();
+    await p.getByRole('button', { name: 'Import and score' }).click();
+    await waitInvalid(p.getByLabel('MIDI file (at most 1 MB)'));
+    expect(await violationsInBothThemes(p)).toEqual({ light: [], dark: [] });
+    await goto(p, '/progress');
+    await p.getByLabel('Your weekly goal, in minutes').fill('5');
+    await p.getByRole('button', { name: 'Set the goal' }).click();
+    await waitInvalid(p.getByLabel('Your weekly goal, in minutes'));
+    expect(await violationsInBothThemes(p)).toEqual({ light: [], dark: [] });
   });
 });
