@@ -1,14 +1,6 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { MapQuery } from '@shared/schemas/maps';
-import type {
-  BeatMapResponse,
-  CalendarResponse,
-  KeyMapResponse,
-  NextResponse,
-  RangeMapResponse,
-  TimelineResponse,
-  WeeklyResponse,
-} from '@shared/schemas/maps';
+import type { ApiResponse } from '@shared/schemas/api';
 import type { SettingsResponse } from '@shared/schemas/settings';
 import { api } from '@/lib/api-client';
 import { type MapName, mapKeys, settingsKeys } from '@/lib/queries/keys';
@@ -25,22 +17,22 @@ const search = (params: Record<string, string | undefined>) => {
 /** The browser's own time zone: charts count days the way the player lives them. */
 export const localTimeZone = () => Intl.DateTimeFormat().resolvedOptions().timeZone || 'UTC';
 
-const mapQuery = <T>(name: MapName, filters: MapFilters) =>
+/** One map's query: its key, and its answer typed by the route's entry in the registry of responses. */
+const mapQuery = <N extends MapName>(name: N, filters: MapFilters) =>
   queryOptions({
     queryKey: mapKeys.filtered(name, filters),
-    queryFn: () => api.get<T>(`/api/maps/${name}${search(filters)}`),
+    queryFn: () => api.get<ApiResponse<`GET /api/maps/${N}`>>(`/api/maps/${name}${search(filters)}`),
   });
 
-export const useKeyMap = (f: MapFilters) => useQuery(mapQuery<KeyMapResponse>('keys', f));
-export const useRangeMap = (f: MapFilters) => useQuery(mapQuery<RangeMapResponse>('range', f));
-export const useBeatMap = (f: MapFilters) => useQuery(mapQuery<BeatMapResponse>('beats', f));
+export const useKeyMap = (f: MapFilters) => useQuery(mapQuery('keys', f));
+export const useRangeMap = (f: MapFilters) => useQuery(mapQuery('range', f));
+export const useBeatMap = (f: MapFilters) => useQuery(mapQuery('beats', f));
 export const useTimeline = (f: MapFilters) =>
-  useQuery(mapQuery<TimelineResponse>('timeline', { ...f, tz: localTimeZone() } as MapFilters));
+  useQuery(mapQuery('timeline', { ...f, tz: localTimeZone() } as MapFilters));
 export const useCalendar = (f: MapFilters) =>
-  useQuery(mapQuery<CalendarResponse>('calendar', { ...f, tz: localTimeZone() } as MapFilters));
-export const useWhatNext = () => useQuery(mapQuery<NextResponse>('next', {}));
-export const useWeekly = (f: MapFilters) =>
-  useQuery(mapQuery<WeeklyResponse>('weekly', { ...f, tz: localTimeZone() } as MapFilters));
+  useQuery(mapQuery('calendar', { ...f, tz: localTimeZone() } as MapFilters));
+export const useWhatNext = () => useQuery(mapQuery('next', {}));
+export const useWeekly = (f: MapFilters) => useQuery(mapQuery('weekly', { ...f, tz: localTimeZone() } as MapFilters));
 
 /** The player sets (or clears, with null) their weekly minutes goal; the practice log redraws. */
 export function useSetWeeklyGoal() {
