@@ -1,4 +1,5 @@
 import type { CsrfResponse } from '@shared/schemas/auth';
+import type { ErrorResponse } from '@shared/schemas/errors';
 
 /** One fetch wrapper for the API: JSON in and out, the CSRF header, and typed errors. */
 export class ApiError extends Error {
@@ -32,9 +33,8 @@ type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
 
 async function toError(res: Response): Promise<ApiError> {
   try {
-    const body = (await res.json()) as {
-      error?: { code?: string; message?: string; fields?: Record<string, string[]> };
-    };
+    // Read with care: a proxy in between may answer with a body of its own.
+    const body = (await res.json()) as { error?: Partial<ErrorResponse['error']> };
     const e = body.error ?? {};
     return new ApiError(res.status, e.code ?? 'error', e.message ?? res.statusText, e.fields);
   } catch {

@@ -1,6 +1,7 @@
 import { keepPreviousData, queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { ListTakesQuery, ListTakesResponse } from '@shared/schemas/history';
 import type { CsrfResponse } from '@shared/schemas/auth';
+import type { ErrorResponse } from '@shared/schemas/errors';
 import type { CreateTakeInput, TakeResponse } from '@shared/schemas/takes';
 import { ApiError, api } from '@/lib/api-client';
 import { mapKeys } from '@/lib/queries/keys';
@@ -77,10 +78,7 @@ export async function importTake({ file, spec, offsetMs, onProgress }: ImportInp
     xhr.onerror = () =>
       reject(new ApiError(0, 'offline', 'The server could not be reached; check the connection and try again'));
     xhr.onload = () => {
-      let body: {
-        take?: TakeResponse['take'];
-        error?: { code?: string; message?: string; fields?: Record<string, string[]> };
-      } = {};
+      let body: { take?: TakeResponse['take']; error?: Partial<ErrorResponse['error']> } = {};
       try {
         body = JSON.parse(xhr.responseText);
       } catch {
