@@ -8,11 +8,9 @@ import type { MapQuery } from '@shared/schemas/maps';
  * invalidates a resource (or one item of it) with the same factory the queries read.
  */
 
-export const sessionKeys = {
-  all: ['auth'] as const,
-  /** GET /api/auth/session */
-  session: ['auth', 'session'] as const,
-};
+// The session's key sits in a module of its own: the app shell (the first page) reads it, and
+// every other page's keys stay out of the first page's code.
+export { sessionKeys } from './session-keys';
 
 export const adminKeys = {
   all: ['admin'] as const,

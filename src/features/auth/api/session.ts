@@ -1,7 +1,7 @@
 import { type QueryClient, queryOptions, useQuery } from '@tanstack/react-query';
 import type { SessionResponse, User } from '@shared/schemas/auth';
 import { api } from '@/lib/api-client';
-import { sessionKeys } from '@/lib/queries/keys';
+import { sessionKeys } from '@/lib/queries/session-keys';
 
 /** Who is signed in (null for a visitor; this route never answers 401). */
 export function fetchSession(): Promise<SessionResponse> {
