@@ -1,5 +1,5 @@
-import { type InputHTMLAttributes, useId } from 'react';
-import { FieldHelp, helpIds } from './field-help';
+import type { InputHTMLAttributes } from 'react';
+import { Field } from './field-help';
 
 type Props = Omit<InputHTMLAttributes<HTMLInputElement>, 'type'> & {
   label: string;
@@ -8,24 +8,17 @@ type Props = Omit<InputHTMLAttributes<HTMLInputElement>, 'type'> & {
 };
 
 /** A labelled file picker whose errors sit right under it. */
-export function FileField({ label, errors, hint, id, className = '', ...props }: Props) {
-  const auto = useId();
-  const inputId = id ?? auto;
-  const { invalid, describedBy } = helpIds(inputId, hint, errors);
+export function FileField({ label, errors, hint, id, className, ...props }: Props) {
   return (
-    <div className={`grid min-w-0 gap-1 ${className}`}>
-      <label htmlFor={inputId} className="text-body font-semibold">
-        {label}
-      </label>
-      <input
-        id={inputId}
-        type="file"
-        aria-invalid={invalid || undefined}
-        aria-describedby={describedBy}
-        className="text-body file:mr-3 file:rounded-lg file:border file:border-line file:bg-raised file:px-3 file:py-1.5"
-        {...props}
-      />
-      <FieldHelp inputId={inputId} hint={hint} errors={errors} />
-    </div>
+    <Field label={label} hint={hint} errors={errors} id={id} className={className}>
+      {(control) => (
+        <input
+          {...control}
+          type="file"
+          className="text-body file:mr-3 file:rounded-lg file:border file:border-line file:bg-raised file:px-3 file:py-1.5"
+          {...props}
+        />
+      )}
+    </Field>
   );
 }

@@ -1,4 +1,5 @@
-import { type SelectHTMLAttributes, useId } from 'react';
+import type { SelectHTMLAttributes } from 'react';
+import { Field, fieldClass } from './field-help';
 
 type Props = SelectHTMLAttributes<HTMLSelectElement> & {
   label: string;
@@ -9,34 +10,18 @@ type Props = SelectHTMLAttributes<HTMLSelectElement> & {
 };
 
 /** A labelled select whose errors sit right under it (and are tied to it for screen readers). */
-export function SelectField({ label, options, errors, hideLabel, id, className = '', ...props }: Props) {
-  const auto = useId();
-  const selectId = id ?? auto;
-  const errorId = `${selectId}-error`;
-  const invalid = Boolean(errors && errors.length > 0);
+export function SelectField({ label, options, errors, hideLabel, id, className, ...props }: Props) {
   return (
-    <div className={`grid min-w-0 gap-1 ${className}`}>
-      <label htmlFor={selectId} className={hideLabel ? 'sr-only' : 'text-body font-semibold'}>
-        {label}
-      </label>
-      <select
-        id={selectId}
-        aria-invalid={invalid || undefined}
-        aria-describedby={invalid ? errorId : undefined}
-        className={`w-full min-w-0 rounded-lg border bg-raised px-3 py-2 text-body text-text ${invalid ? 'border-ember-500' : 'border-line focus:border-ink-500'}`}
-        {...props}
-      >
-        {options.map((o) => (
-          <option key={o.value} value={o.value}>
-            {o.label}
-          </option>
-        ))}
-      </select>
-      {invalid ? (
-        <p id={errorId} className="text-caption font-semibold text-ember-700 dark:text-ember-100">
-          {errors!.join(' ')}
-        </p>
-      ) : null}
-    </div>
+    <Field label={label} hideLabel={hideLabel} errors={errors} id={id} className={className}>
+      {(control, invalid) => (
+        <select {...control} className={fieldClass(invalid)} {...props}>
+          {options.map((o) => (
+            <option key={o.value} value={o.value}>
+              {o.label}
+            </option>
+          ))}
+        </select>
+      )}
+    </Field>
   );
 }

@@ -1,5 +1,5 @@
-import { type TextareaHTMLAttributes, useId } from 'react';
-import { FieldHelp, fieldClass, helpIds } from './field-help';
+import type { TextareaHTMLAttributes } from 'react';
+import { Field, fieldClass } from './field-help';
 
 type Props = TextareaHTMLAttributes<HTMLTextAreaElement> & {
   label: string;
@@ -10,23 +10,12 @@ type Props = TextareaHTMLAttributes<HTMLTextAreaElement> & {
 };
 
 /** A labelled text area whose errors sit right under it (and are tied to it for screen readers). */
-export function TextAreaField({ label, errors, hint, id, className = '', inputClassName = '', ...props }: Props) {
-  const auto = useId();
-  const inputId = id ?? auto;
-  const { invalid, describedBy } = helpIds(inputId, hint, errors);
+export function TextAreaField({ label, errors, hint, id, className, inputClassName = '', ...props }: Props) {
   return (
-    <div className={`grid min-w-0 gap-1 ${className}`}>
-      <label htmlFor={inputId} className="text-body font-semibold">
-        {label}
-      </label>
-      <textarea
-        id={inputId}
-        aria-invalid={invalid || undefined}
-        aria-describedby={describedBy}
-        className={`${fieldClass(invalid)} ${inputClassName}`}
-        {...props}
-      />
-      <FieldHelp inputId={inputId} hint={hint} errors={errors} />
-    </div>
+    <Field label={label} hint={hint} errors={errors} id={id} className={className}>
+      {(control, invalid) => (
+        <textarea {...control} className={`${fieldClass(invalid)} ${inputClassName}`} {...props} />
+      )}
+    </Field>
   );
 }
