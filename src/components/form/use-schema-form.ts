@@ -1,5 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useMemo, useState } from 'react';
+import { useMemo, useRef, useState } from 'react';
 import {
   type FieldPath,
   type FieldValues,
@@ -41,6 +41,27 @@ export type SchemaForm<S extends z.ZodType> = UseFormReturn<z.input<S> & FieldVa
 };
 
 /**
+ * Where a refusal's field messages go: on the fields the form shows, and everything else (the
+ * form as a whole, `_`, or a field the form has no input for) in one message above the form.
+ *
+ * @example
+ * placeFieldErrors({ email: ['Taken'], role: ['Not yours'] }, new Set(['email']))
+ * // { above: 'Not yours', onFields: [['email', 'Taken']] }
+ */
+export function placeFieldErrors(
+  fields: Record<string, string[]>,
+  shown: ReadonlySet<string>,
+): { above: string | null; onFields: Array<[string, string]> } {
+  const above: string[] = [];
+  const onFields: Array<[string, string]> = [];
+  for (const [name, messages] of Object.entries(fields)) {
+    if (name === '_' || !shown.has(name)) above.push(...messages);
+    else onFields.push([name, messages.join(' ')]);
+  }
+  return { above: above.length > 0 ? above.join(' ') : null, onFields };
+}
+
+/**
  * Sixfold's one way to write a form: react-hook-form, validated in the browser by the same zod
  * schema the server parses, with the server's field errors shown on the same fields.
  *
@@ -58,8 +79,16 @@ export function useSchemaForm<S extends z.ZodType>(
   const resolver = useMemo(() => lazyZodResolver(load), []);
   const form = useForm<z.input<S> & FieldValues, unknown, z.output<S>>({ ...options, resolver });
   const [formError, setFormError] = useState<string | null>(null);
+  // The names this form shows errors on: its registered inputs and those it asks errorsOf about.
+  const shown = useRef(new Set<string>());
+
+  const register: typeof form.register = (name, opts) => {
+    shown.current.add(name);
+    return form.register(name, opts);
+  };
 
   function errorsOf(name: string): string[] | undefined {
+    shown.current.add(name);
     let node: unknown = form.formState.errors;
     for (const part of name.split('.')) node = (node as Record<string, unknown> | undefined)?.[part];
     const message = (node as { message?: unknown } | undefined)?.message;
@@ -68,11 +97,10 @@ export function useSchemaForm<S extends z.ZodType>(
 
   function fromError(err: unknown) {
     if (err instanceof ApiError && err.fields && Object.keys(err.fields).length > 0) {
-      setFormError(err.fields._ ? err.fields._.join(' ') : null);
-      for (const [name, messages] of Object.entries(err.fields)) {
-        if (name === '_') continue;
-        form.setError(name as FieldPath<z.input<S> & FieldValues>, { type: 'server', message: messages.join(' ') });
-      }
+      const { above, onFields } = placeFieldErrors(err.fields, shown.current);
+      for (const [name, message] of onFields)
+        form.setError(name as FieldPath<z.input<S> & FieldValues>, { type: 'server', message });
+      setFormError(above);
       return;
     }
     setFormError(err instanceof Error ? err.message : 'Something went wrong; try again');
@@ -84,5 +112,5 @@ export function useSchemaForm<S extends z.ZodType>(
       return onValid(data, event);
     }, onInvalid);
 
-  return { ...form, handleSubmit, formError, errorsOf, fromError };
+  return { ...form, register, handleSubmit, formError, errorsOf, fromError };
 }
