@@ -248,6 +248,33 @@ describe('forms refuse bad values on the field, in Chromium', () => {
     expect(res.rows[0].n).toBe(1);
   });
 
+  it('drill editor: a tempo of 5 is refused on the tempo field and the last good drill stays shown', async () => {
+    const { page } = teacherBrowser;
+    const spec: DrillSpec = {
+      pair: ['D', 'C'],
+      pattern: 'four-three',
+      direction: 'up',
+      instrument: 'piano',
+      tempo: 100,
+    };
+    await goto(page, `/drills?spec=${encodeURIComponent(JSON.stringify(spec))}`);
+    await page.getByTestId('drill-staff').waitFor();
+    const title = await page.getByTestId('drill-title').textContent();
+    expect(title).toMatch(/^Key 1 of 12: D \/ C/);
+    const tempo = page.getByLabel('Tempo (quarter notes per minute)');
+    await tempo.fill('5');
+    await waitInvalid(tempo);
+    expect(await fieldError(tempo)).toBe('The tempo is at least 20');
+    // the drill built from the last good values stays on show, and the address keeps it
+    expect(await page.getByTestId('drill-title').textContent()).toBe(title);
+    expect(await page.getByTestId('drill-staff').count()).toBe(1);
+    expect(JSON.parse(new URL(page.url()).searchParams.get('spec') ?? '{}').tempo).toBe(100);
+    await tempo.fill('90');
+    await page.waitForFunction((el) => el?.getAttribute('aria-invalid') !== 'true', await tempo.elementHandle());
+    await expect.poll(() => JSON.parse(new URL(page.url()).searchParams.get('spec') ?? '{}').tempo).toBe(90);
+    expect(await page.getByTestId('drill-problem').count()).toBe(0);
+  });
+
   it('the pages with converted forms, errors showing, have no serious accessibility violation (axe-core)', async () => {
     const { page } = teacherBrowser;
     await goto(page, `/books/${bookId}/edit`);

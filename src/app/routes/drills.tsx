@@ -29,7 +29,7 @@ export function DrillsRoute() {
     const { spec, order } = specFromParams(params);
     return spec ? draftFromSpec(spec, order) : DEFAULT_DRAFT;
   });
-  const { draft, update, setDraft, spec, fields, cycle, cycleError } = useDrillDraft(initial);
+  const { form, draft, update, setDraft, spec, fields, cycle, cycleError } = useDrillDraft(initial);
   const [keyIndex, setKeyIndex] = useState(0);
   // A fresh page starts on the player's own instrument; a drill in the address keeps its own.
   const settings = useSettings();
@@ -77,10 +77,16 @@ export function DrillsRoute() {
             setKeyIndex(0);
           }}
         />
-        <DrillSettings draft={draft} update={update} fields={fields} savedPatterns={patterns.data?.patterns ?? []} />
+        <DrillSettings
+          form={form}
+          draft={draft}
+          update={update}
+          fields={fields}
+          savedPatterns={patterns.data?.patterns ?? []}
+        />
       </div>
 
-      <ProgressionEditor draft={draft} update={update} drill={cycle[0]} fields={fields} />
+      <ProgressionEditor form={form} draft={draft} update={update} drill={cycle[0]} fields={fields} />
 
       {customDef ? (
         <PatternForm

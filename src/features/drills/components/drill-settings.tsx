@@ -2,7 +2,7 @@ import { type InstrumentId, instruments, PRESET_IDS, presets } from '@shared/eng
 import { type CustomPattern, type FieldErrors, METERS } from '@shared/schemas/drills';
 import { SelectField } from '@/components/ui/select-field';
 import { TextField } from '@/components/ui/text-field';
-import type { Draft } from '../hooks/use-drill-draft';
+import type { Draft, DrillForm } from '../hooks/use-drill-draft';
 import { NEW_TRIAD_PATTERN } from './pattern-form';
 import { RangeFields } from '@/components/range/range-fields';
 
@@ -37,13 +37,18 @@ export function patternValue(draft: Draft, saved: CustomPattern[]): string {
   return match ? `saved:${match.id}` : 'custom';
 }
 
-/** Pair, pattern, direction, instrument, range, tempo, meter and key-cycle order. */
+/**
+ * Pair, pattern, direction, instrument, range, tempo, meter and key-cycle order: the typed and
+ * chosen values are the drill form's own fields; `fields` holds the schema's and engine's messages.
+ */
 export function DrillSettings({
+  form,
   draft,
   update,
   fields,
   savedPatterns,
 }: {
+  form: DrillForm;
   draft: Draft;
   update: (patch: Partial<Draft>) => void;
   fields: FieldErrors;
@@ -69,20 +74,8 @@ export function DrillSettings({
         </p>
       ) : (
         <div className="grid items-start gap-3 sm:grid-cols-2">
-          <TextField
-            className="min-w-0"
-            label="Triad a"
-            value={draft.pair[0]}
-            errors={pick(fields, 'pair.0')}
-            onChange={(e) => update({ pair: [e.target.value, draft.pair[1]] })}
-          />
-          <TextField
-            className="min-w-0"
-            label="Triad b"
-            value={draft.pair[1]}
-            errors={pick(fields, 'pair.1')}
-            onChange={(e) => update({ pair: [draft.pair[0], e.target.value] })}
-          />
+          <TextField className="min-w-0" label="Triad a" errors={pick(fields, 'pair.0')} {...form.register('pair.0')} />
+          <TextField className="min-w-0" label="Triad b" errors={pick(fields, 'pair.1')} {...form.register('pair.1')} />
         </div>
       )}
       {fields.pair && !progression ? (
@@ -111,19 +104,22 @@ export function DrillSettings({
         />
         <SelectField
           label="Direction"
-          value={draft.direction}
+          errors={pick(fields, 'direction')}
           options={[
             { value: 'up', label: 'Up' },
             { value: 'down', label: 'Down' },
             { value: 'up-down', label: 'Up, then down' },
           ]}
-          onChange={(e) => update({ direction: e.target.value as Draft['direction'] })}
+          {...form.register('direction')}
         />
         <SelectField
           label="Instrument"
-          value={draft.instrument}
           options={INSTRUMENT_OPTIONS}
-          onChange={(e) => update({ instrument: e.target.value as InstrumentId })}
+          errors={pick(fields, 'instrument')}
+          {...form.register('instrument', {
+            // A new instrument brings its own range.
+            onChange: () => form.setValue('range', null),
+          })}
         />
         <RangeFields
           instrument={draft.instrument}
@@ -138,9 +134,8 @@ export function DrillSettings({
           type="number"
           min={20}
           max={400}
-          value={String(draft.tempo)}
           errors={pick(fields, 'tempo')}
-          onChange={(e) => update({ tempo: Number(e.target.value) })}
+          {...form.register('tempo', { valueAsNumber: true })}
         />
         <SelectField
           label="Meter"
@@ -151,22 +146,20 @@ export function DrillSettings({
         />
         <SelectField
           label="Key cycle order"
-          value={draft.order}
           options={[
             { value: 'chromatic', label: 'Chromatic' },
             { value: 'fourths', label: 'Fourths' },
             { value: 'fifths', label: 'Fifths' },
           ]}
-          onChange={(e) => update({ order: e.target.value as Draft['order'] })}
+          {...form.register('order')}
         />
         {progression ? null : (
           <TextField
             className="min-w-0"
             label="Chord (for the pad)"
-            value={draft.chord}
             errors={pick(fields, 'chord')}
             placeholder="none"
-            onChange={(e) => update({ chord: e.target.value })}
+            {...form.register('chord')}
           />
         )}
       </div>

@@ -6,7 +6,7 @@ import { SelectField } from '@/components/ui/select-field';
 import { CheckboxField } from '@/components/ui/check-field';
 import { NumberField } from '@/components/ui/number-field';
 import { TextAreaField } from '@/components/ui/text-area-field';
-import type { Draft } from '../hooks/use-drill-draft';
+import type { Draft, DrillForm } from '../hooks/use-drill-draft';
 
 /** Fits offered for pinning a chord's pair. */
 const PIN_CHOICES = 8;
@@ -46,11 +46,13 @@ export function progressionTitle(drill: Drill): string {
  * `drill` is the drill in the spec's own key (the pairs the line chose).
  */
 export function ProgressionEditor({
+  form,
   draft,
   update,
   drill,
   fields,
 }: {
+  form: DrillForm;
   draft: Draft;
   update: (patch: Partial<Draft>) => void;
   drill: Drill | undefined;
@@ -71,14 +73,16 @@ export function ProgressionEditor({
     mine.current = changes;
     update({ changes });
   };
+  // The form hands back copies of the values, so they are compared as JSON.
+  const changesKey = JSON.stringify(draft.changes);
   // biome-ignore lint/correctness/useExhaustiveDependencies: only changes from outside rewrite the bars
   useEffect(() => {
-    if (draft.changes && draft.changes !== mine.current) {
+    if (draft.changes && changesKey !== JSON.stringify(mine.current)) {
       mine.current = draft.changes;
       setText(chartOf(draft.changes, draft.meter));
       setError(null);
     }
-  }, [draft.changes]);
+  }, [changesKey]);
 
   function apply(chart: string, meter = draft.meter) {
     setText(chart);
@@ -136,13 +140,7 @@ export function ProgressionEditor({
                 if (p) apply(p.chart);
               }}
             />
-            <NumberField
-              label="Choruses"
-              min={1}
-              max={16}
-              value={String(draft.choruses)}
-              onChange={(e) => update({ choruses: Number(e.target.value) })}
-            />
+            <NumberField label="Choruses" min={1} max={16} {...form.register('choruses', { valueAsNumber: true })} />
           </div>
           <div className="grid gap-1">
             <TextAreaField
@@ -184,7 +182,9 @@ function ChordPairs({
   played: NonNullable<Drill['changes']>;
   setChanges: (changes: ChordChange[]) => void;
 }) {
-  const fits = useMemo(() => changes.map((c) => fitsOf(c.chord)), [changes]);
+  const chordsKey = changes.map((c) => c.chord).join('|');
+  // biome-ignore lint/correctness/useExhaustiveDependencies: the chords, compared as text
+  const fits = useMemo(() => changes.map((c) => fitsOf(c.chord)), [chordsKey]);
   if (changes.length === 0) return null;
   const pin = (i: number, value: string) => {
     const next = changes.map((c, k) => {

@@ -1,8 +1,10 @@
 import { type Drill, EngineError, inAllKeys, type InstrumentId, instruments } from '@shared/engine';
 import { generateChecked } from '@shared/engine/patterns/checked';
 import { type ChordChange, DrillSpec, type FieldErrors, type KeyOrder } from '@shared/schemas/drills';
-import { useMemo, useState } from 'react';
-import { fieldErrors } from '@shared/schemas/field-errors';
+import { useEffect, useMemo, useRef } from 'react';
+import { useWatch } from 'react-hook-form';
+import { z } from 'zod';
+import { type SchemaForm, useSchemaForm } from '@/components/form/use-schema-form';
 
 /** What the form holds: a DrillSpec with the instrument's range standing in until one is set. */
 export interface Draft {
@@ -67,19 +69,28 @@ export function specOf(d: Draft): DrillSpec {
 
 export interface DraftResult {
   spec: DrillSpec | null;
-  /** field -> messages: from the spec's checks, or the engine's reason the drill is impossible */
+  /** field -> messages: the engine's reason the drill is impossible (the schema's are the form's) */
   fields: FieldErrors;
   /** the 12 keys of the cycle in the chosen order (empty when the spec has an error) */
   cycle: Drill[];
   cycleError: string | null;
 }
 
-/** Checks the draft with the same schema and engine call as the server, then builds the cycle. */
+/**
+ * The form's schema: the draft read as the DrillSpec it stands for, checked by the same schema
+ * the server parses, so each refusal lands on the draft's field of the same name.
+ */
+export function draftSchemaOf(spec: typeof DrillSpec) {
+  return z
+    .custom<Draft>((v) => typeof v === 'object' && v !== null)
+    .transform(specOf)
+    .pipe(spec);
+}
+
+/** Builds the drill from a draft the schema took: the engine's own refusal, or the key cycle. */
 export function evaluateDraft(d: Draft): DraftResult {
   const parsed = DrillSpec.safeParse(specOf(d));
-  if (!parsed.success) {
-    return { spec: null, fields: fieldErrors(parsed.error.issues), cycle: [], cycleError: null };
-  }
+  if (!parsed.success) return { spec: null, fields: {}, cycle: [], cycleError: null };
   const first = generateChecked(parsed.data);
   if (!first.ok) return { spec: parsed.data, fields: first.fields, cycle: [], cycleError: null };
   try {
@@ -95,17 +106,65 @@ export function evaluateDraft(d: Draft): DraftResult {
   }
 }
 
-/** The drill being built on the page, its checks, and its key cycle. */
+/**
+ * react-hook-form's nested errors as `field.path -> messages`.
+ *
+ * @example
+ * flatErrors({ pair: [undefined, { type: 'custom', message: 'Not a triad' }] }) // { 'pair.1': ['Not a triad'] }
+ */
+export function flatErrors(errors: unknown, prefix = ''): FieldErrors {
+  const out: FieldErrors = {};
+  if (!errors || typeof errors !== 'object') return out;
+  const node = errors as Record<string, unknown>;
+  if (typeof node.message === 'string' && node.message !== '') out[prefix || '_'] = [node.message];
+  for (const [key, child] of Object.entries(node)) {
+    if (key === 'message' || key === 'type' || key === 'ref' || key === 'types' || key === 'root') continue;
+    Object.assign(out, flatErrors(child, prefix ? `${prefix}.${key}` : key));
+  }
+  return out;
+}
+
+export type DrillForm = SchemaForm<ReturnType<typeof draftSchemaOf>>;
+
+/**
+ * The drill being built on the page: its fields in the form kit (checked as they change by the
+ * shared DrillSpec schema), the drill built live from them, the engine's refusals, the key cycle.
+ */
 export function useDrillDraft(initial: Draft) {
-  const [draft, setDraft] = useState<Draft>(initial);
-  const result = useMemo(() => evaluateDraft(draft), [draft]);
-  const update = (patch: Partial<Draft>) =>
-    setDraft((d) => {
-      const next = { ...d, ...patch };
-      // A new instrument brings its own range.
-      if (patch.instrument && patch.instrument !== d.instrument && !patch.range) next.range = null;
-      return next;
-    });
+  const form = useSchemaForm(() => import('@shared/schemas/drills').then((m) => draftSchemaOf(m.DrillSpec)), {
+    defaultValues: initial,
+    mode: 'onChange',
+  });
+  const draft = useWatch({ control: form.control }) as Draft;
+  const key = JSON.stringify(draft);
+  // biome-ignore lint/correctness/useExhaustiveDependencies: the values, compared as JSON
+  const evaluated = useMemo(() => evaluateDraft(draft), [key]);
+  // Every change is checked as a whole: one value can make another wrong (a pair sharing a note).
+  // biome-ignore lint/correctness/useExhaustiveDependencies: the values, compared as JSON
+  useEffect(() => {
+    void form.trigger();
+  }, [key]);
+  // A value the schema refuses leaves the last drill it took on show.
+  const lastGood = useRef<DraftResult | null>(null);
+  if (evaluated.spec) lastGood.current = evaluated;
+  const shown = evaluated.spec ? evaluated : { ...(lastGood.current ?? evaluated), spec: null };
+  // The schema's messages, from the form; once the values parse again any left are stale.
+  const schemaFields = evaluated.spec ? {} : flatErrors(form.formState.errors);
+  const fields: FieldErrors = { ...schemaFields, ...evaluated.fields };
+
+  const update = (patch: Partial<Draft>) => {
+    const newInstrument = patch.instrument !== undefined && patch.instrument !== form.getValues('instrument');
+    for (const [name, value] of Object.entries(patch) as Array<[keyof Draft, unknown]>) {
+      if (name === 'pair') {
+        const [a, b] = value as Draft['pair'];
+        form.setValue('pair.0', a);
+        form.setValue('pair.1', b);
+      } else form.setValue(name, value as never);
+    }
+    // A new instrument brings its own range.
+    if (newInstrument && !patch.range) form.setValue('range', null);
+  };
+  const setDraft = (d: Draft) => form.reset(d);
   const range = draft.range ?? instruments[draft.instrument].range;
-  return { draft, update, setDraft, range, ...result };
+  return { form, draft, update, setDraft, range, ...shown, fields };
 }
