@@ -15,8 +15,10 @@ const only = process.argv[2];
 
 if (only !== 'server') {
   process.stderr.write('[build] client (vite)\n');
+  // Always the production build of the client, whatever NODE_ENV the caller runs under.
   const res = spawnSync(process.execPath, ['node_modules/vite/bin/vite.js', 'build', '--logLevel', 'warn'], {
     cwd: projectDir,
+    env: { ...process.env, NODE_ENV: 'production' },
     stdio: 'inherit',
   });
   if (res.status !== 0) process.exit(res.status ?? 1);

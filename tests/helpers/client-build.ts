@@ -27,8 +27,10 @@ export default function setup() {
   const changedAt = Math.max(...sources.map((s) => newest(join(projectDir, s))));
   if (builtAt >= changedAt) return;
   process.stderr.write('[test] the client build is older than its sources: building it\n');
+  // The tests run with NODE_ENV=test; the client is built as it ships (React's production build).
   const res = spawnSync(process.execPath, ['node_modules/vite/bin/vite.js', 'build', '--logLevel', 'warn'], {
     cwd: projectDir,
+    env: { ...process.env, NODE_ENV: 'production' },
     stdio: 'inherit',
   });
   if (res.status !== 0) throw new Error('The client build failed, so the browser tests cannot run (see above).');
