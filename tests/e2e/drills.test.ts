@@ -74,7 +74,7 @@ describe('the drills page in Chromium', () => {
     expect(written).toEqual(expected.notes.map((n) => n.written));
     expect(expected.notes.every((n) => Note.midi(n.written) === n.midi + 9)).toBe(true);
     // The clef is drawn, and the staff's measures are numbered.
-    expect(await staff.locator('.vf-clef').count()).toBeGreaterThan(0);
+    expect(await staff.locator('.sf-clef').count()).toBeGreaterThan(0);
     // The two triads are told apart: both kinds of note are drawn, each with its class.
     expect(await staff.locator('.sf-triad-a').count()).toBeGreaterThan(0);
     expect(await staff.locator('.sf-triad-b').count()).toBeGreaterThan(0);

@@ -95,7 +95,9 @@ describe('the staff drawn from the notation model, in Chromium', () => {
     // inside it), not as text under notes.
     const tagged = await staff.locator('.sf-cell').evaluateAll((els) => els.map((el) => el.getAttribute('data-cell')));
     expect(new Set(tagged).size).toBe(new Set(drill.notes.map((n) => n.cell)).size);
-    expect(await staff.locator('.vf-annotation').count()).toBe(0);
+    expect(await staff.locator('.sf-stavenote text:not(.sf-notehead, .sf-accidental, .sf-flag, .sf-dot)').count()).toBe(
+      0,
+    );
     for (const [w, name] of [
       [1280, 'desktop'],
       [390, 'phone'],
@@ -113,8 +115,8 @@ describe('the staff drawn from the notation model, in Chromium', () => {
     const staff = b.page.getByTestId('drill-staff');
     expect(await staff.getAttribute('data-staves')).toBe('treble bass');
     // Two clefs at the start of every line, and the brace joining them.
-    expect(await staff.locator('.vf-clef').count()).toBeGreaterThanOrEqual(2);
-    expect(await staff.locator('.vf-sf-brace').count()).toBeGreaterThan(0);
+    expect(await staff.locator('.sf-clef').count()).toBeGreaterThanOrEqual(2);
+    expect(await staff.locator('.sf-brace').count()).toBeGreaterThan(0);
     // Notes below middle C sit on the bass staff (common practice for piano).
     const notation = notate(drill);
     const onBass = notation.measures.flatMap((m) => m.events.filter((e) => e.kind === 'note' && e.staff === 1));
@@ -144,7 +146,7 @@ describe('the staff drawn from the notation model, in Chromium', () => {
     // each drawn notehead's centre, by note index
     const centre = async (i: number) =>
       staff
-        .locator(`[data-index="${i}"] .vf-notehead`)
+        .locator(`[data-index="${i}"] .sf-notehead`)
         .first()
         .evaluate((el) => {
           const r = el.getBoundingClientRect();
@@ -159,9 +161,9 @@ describe('the staff drawn from the notation model, in Chromium', () => {
     expect(Math.abs((await centre(c8.noteIndex!)) - (await centre(c7.noteIndex!)))).toBeLessThan(1);
     const a7Two = events.find((e) => e.written === 'A7' && e.ottava === 15)!;
     const a7One = events.find((e) => e.written === 'A7' && e.ottava === 8 && e.noteIndex! > a7Two.noteIndex!)!;
-    // an octave is seven staff steps, three and a half line spaces (VexFlow draws a space 10 units high)
+    // an octave is seven staff steps, three and a half line spaces (the staff draws a space 10 units high)
     const scale = await staff
-      .locator('.vf-stave')
+      .locator('.sf-stave')
       .first()
       .evaluate((el) => {
         const svg = el.closest('svg')!;
@@ -267,7 +269,7 @@ describe('the staff drawn from the notation model, in Chromium', () => {
     // Every verdict the take holds is drawn by its own shape under the note.
     const verdicts = new Set(stored.score.results.map((r) => r.verdict));
     expect(verdicts.size).toBeGreaterThanOrEqual(4);
-    for (const v of verdicts) expect(await page.locator(`.vf-sf-marks .sf-verdict-${v}`).count()).toBeGreaterThan(0);
+    for (const v of verdicts) expect(await page.locator(`.sf-marks .sf-verdict-${v}`).count()).toBeGreaterThan(0);
     // The staff with what the page lays over it (the pitch played, timing ticks).
     const staff = page.getByTestId('drill-staff').first().locator('xpath=..');
     await staff.screenshot({ path: join(shots, 'take-marks-light.png') });

@@ -1,19 +1,22 @@
 /**
- * Where the lanes' contents go on a drawn line: a tag over each cell, ottava lines over the
+ * Where the lanes' contents go on an engraved line: a tag over each cell, ottava lines over the
  * notes the model puts under one, chord symbols over the events they start on.
  */
 import type { Drill, Notation, Ottava } from '@shared/engine';
-import type { Stave } from 'vexflow/core';
+import type { EngravedSystem, PlacedEvent } from './engrave';
 import { drawCellTag, drawChordSymbol, drawOttava } from './lanes';
 import type { SystemPlan } from './layout';
-import type { BuiltStaffMeasure, DrawnEvent } from './measure';
 import type { SystemLayout } from './system';
 import { triadOf } from './triad-of';
+
+/** The notes drawn on a line, every staff. */
+export const notesOf = (system: EngravedSystem): PlacedEvent[] =>
+  system.measures.flatMap((m) => m.events.flatMap((row) => row.filter((p) => p.event.kind === 'note')));
 
 export function placeCellTags(
   lanes: Element,
   drill: Drill,
-  drawn: DrawnEvent[],
+  drawn: PlacedEvent[],
   y: number,
   aChromas: Set<number>,
 ): void {
@@ -21,22 +24,17 @@ export function placeCellTags(
   // of the six-note scale, not triads: its notes keep their triad's colour and go untagged
   // (a tag per note would bury the line in letters).
   const ordered = drawn
-    .filter((d) => d.event.noteIndex !== undefined && drill.notes[d.event.noteIndex].source !== 'scale')
+    .filter((d) => d.event.noteIndex !== undefined && drill.notes[d.event.noteIndex]?.source !== 'scale')
     .sort((a, b) => (a.event.noteIndex ?? 0) - (b.event.noteIndex ?? 0));
-  let run: DrawnEvent[] = [];
+  let run: PlacedEvent[] = [];
   const flush = () => {
     if (run.length === 0) return;
     const first = drill.notes[run[0].event.noteIndex!];
-    drawCellTag(
-      lanes,
-      { x0: run[0].note.getNoteHeadBeginX(), x1: run[run.length - 1].note.getNoteHeadEndX() },
-      y,
-      triadOf(first, aChromas),
-      first.cell,
-    );
+    const last = run[run.length - 1];
+    drawCellTag(lanes, { x0: run[0].x, x1: last.x + last.w }, y, triadOf(first, aChromas), first.cell);
     run = [];
   };
-  const keyOf = (d: DrawnEvent) => {
+  const keyOf = (d: PlacedEvent) => {
     const n = drill.notes[d.event.noteIndex!];
     return `${n.cell}:${n.source}`;
   };
@@ -51,12 +49,12 @@ export function placeOttavaLines(
   lanes: Element,
   notation: Notation,
   plan: SystemPlan,
-  built: BuiltStaffMeasure[][],
+  system: EngravedSystem,
   layout: SystemLayout,
 ): void {
   // Ottava lines, per staff, over runs of notes under one sign.
   notation.staves.forEach((_clef, s) => {
-    const onStaff = built.flatMap((parts) => parts[s].notes);
+    const onStaff = system.measures.flatMap((m) => m.events[s].filter((p) => p.event.kind === 'note'));
     let start = -1;
     for (let j = 0; j <= onStaff.length; j++) {
       const o = j < onStaff.length ? onStaff[j].event.ottava : 0;
@@ -68,8 +66,13 @@ export function placeOttavaLines(
         const closes = j < onStaff.length || !next || next.ottava !== kind;
         drawOttava(
           lanes,
-          { x0: onStaff[start].note.getNoteHeadBeginX() - 2, x1: last.note.getNoteHeadEndX() + 4 },
-          ottavaY(onStaff.slice(start, j), kind > 0, kind > 0 ? layout.ottavaUp[s] : layout.ottavaDown[s]),
+          { x0: onStaff[start].x - 2, x1: last.x + last.w + 4 },
+          ottavaY(
+            onStaff.slice(start, j),
+            system.topLines[s],
+            kind > 0,
+            kind > 0 ? layout.ottavaUp[s] : layout.ottavaDown[s],
+          ),
           kind,
           closes,
         );
@@ -84,8 +87,7 @@ export function placeChordSymbols(
   lanes: Element,
   notation: Notation,
   plan: SystemPlan,
-  built: BuiltStaffMeasure[][],
-  staves: Stave[][],
+  system: EngravedSystem,
   y: number,
 ): void {
   // Chord symbols: each over the event where it starts; a chord that goes on into a new line is
@@ -93,14 +95,14 @@ export function placeChordSymbols(
   const startsGiven = notation.measures.some((m) => m.chords !== undefined);
   plan.measures.forEach((mi, k) => {
     const measure = notation.measures[mi];
+    const placed = system.measures[k];
     const symbols = [...(startsGiven ? (measure.chords ?? []) : [])];
     const atStart = symbols.some((c) => Math.abs(c.start) < 1e-6);
     if (measure.chord && !atStart && (!startsGiven || k === 0)) symbols.unshift({ start: 0, chord: measure.chord });
-    const events = built[k].flatMap((p) => [...p.notes, ...p.rests]);
+    const events = placed.events.flat();
     for (const c of symbols) {
       const at = events.find((d) => Math.abs(d.event.start - c.start) < 1e-6);
-      const x = at ? at.note.getNoteHeadBeginX() : staves[k][0].getNoteStartX();
-      drawChordSymbol(lanes, x, y, c.chord);
+      drawChordSymbol(lanes, at ? at.x : placed.noteStart, y, c.chord);
     }
   });
 }
@@ -118,23 +120,19 @@ function nextEventOnStaff(notation: Notation, measureIndex: number, staff: numbe
  * How high an ottava line sits: just clear of the notes under it (their stems, beams and
  * triplet brackets) and of the staff, never farther out than the lane kept for it on the line.
  */
-function ottavaY(run: DrawnEvent[], above: boolean, lane: number): number {
-  const stave = run[0].note.getStave();
-  if (!stave) return lane;
+function ottavaY(run: PlacedEvent[], topLine: number, above: boolean, lane: number): number {
   if (above) {
-    let top = stave.getYForLine(0) - 20;
-    for (const { note, event } of run) {
-      const { topY, baseY } = note.getStemExtents();
-      const tuplet = event.tuplet !== undefined && event.stem !== 'down' ? 16 : 0;
-      top = Math.min(top, ...note.getYs().map((y) => y - 16), Math.min(topY, baseY) - 8 - tuplet);
+    let top = topLine - 20;
+    for (const p of run) {
+      const tuplet = p.event.tuplet !== undefined && p.up ? 16 : 0;
+      top = Math.min(top, p.y - 16, Math.min(p.stemEnd, p.stemBase) - 8 - tuplet);
     }
     return Math.max(lane, top);
   }
-  let bottom = stave.getYForLine(4) + 22;
-  for (const { note, event } of run) {
-    const { topY, baseY } = note.getStemExtents();
-    const tuplet = event.tuplet !== undefined && event.stem === 'down' ? 16 : 0;
-    bottom = Math.max(bottom, ...note.getYs().map((y) => y + 14), Math.max(topY, baseY) + 10 + tuplet);
+  let bottom = topLine + 40 + 22;
+  for (const p of run) {
+    const tuplet = p.event.tuplet !== undefined && !p.up ? 16 : 0;
+    bottom = Math.max(bottom, p.y + 14, Math.max(p.stemEnd, p.stemBase) + 10 + tuplet);
   }
   return Math.min(lane, bottom);
 }

@@ -31,29 +31,9 @@ export function diatonicStep(p: SpelledPitch): number {
   return p.octave * 7 + LETTERS.indexOf(p.letter);
 }
 
-/** VexFlow's key for a printed pitch ("eb/4"): only its letter and octave place the notehead. */
-export function vexKey(p: SpelledPitch): string {
-  return `${p.letter.toLowerCase()}${p.accidental}/${p.octave}`;
-}
-
-/** VexFlow's clef for ours: a treble-8vb part is placed like treble (the little 8 is drawn beside). */
-export function vexClef(clef: Clef): 'treble' | 'bass' {
-  return clef === 'bass' ? 'bass' : 'treble';
-}
-
 /** Diatonic step of the middle line: B4 on a treble staff, D3 on a bass staff. */
 export function middleLineStep(clef: Clef): number {
   return clef === 'bass' ? 3 * 7 + 1 : 4 * 7 + 6;
-}
-
-/** A whole rest hangs from the line above the middle one. */
-export function wholeRestKey(clef: Clef): string {
-  return clef === 'bass' ? 'f/3' : 'd/5';
-}
-
-/** Where a rest sits: the middle of the staff. */
-export function restKey(clef: Clef): string {
-  return clef === 'bass' ? 'd/3' : 'b/4';
 }
 
 const CODES: Array<[number, string, number]> = [
@@ -77,18 +57,4 @@ export function printedValue(quarters: number, inTuplet: boolean): { code: strin
   const q = inTuplet ? (quarters * 3) / 2 : quarters;
   const hit = CODES.find(([d]) => Math.abs(d - q) < 1e-6);
   return hit ? { code: hit[1], dots: hit[2] } : null;
-}
-
-/** Splits a gap into plain values, largest first (for the invisible notes that hold a staff's time). */
-export function splitGap(quarters: number): Array<{ code: string; dots: number }> {
-  const out: Array<{ code: string; dots: number }> = [];
-  let left = quarters;
-  for (const [d, code] of CODES) {
-    if (d === 3 || d === 1.5 || d === 0.75 || d === 0.375) continue;
-    while (left + 1e-6 >= d) {
-      out.push({ code, dots: 0 });
-      left -= d;
-    }
-  }
-  return out;
 }

@@ -43,7 +43,7 @@ export function ReviewStaff({ drill, marks, current, label, readings, onSelect }
       if (r.offsetMs === null && r.played === null) continue;
       const el =
         root.querySelector(`[data-index="${r.index}"]`) ?? root.querySelector(`[data-note-index="${r.index}"]`);
-      const head = el?.querySelector('.sf-head') ?? el?.querySelector('.vf-notehead') ?? el;
+      const head = el?.querySelector('.sf-head') ?? el;
       if (!head) continue;
       const b = head.getBoundingClientRect();
       if (b.width === 0) continue;
