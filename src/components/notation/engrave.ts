@@ -373,7 +373,7 @@ export type NoteAttributes = (p: PlacedEvent) => { classes: string; attributes: 
 /**
  * The line as SVG markup, in drawing order: staves, barlines, clefs, time signature and
  * measure numbers; then each note as a group (ledger lines, head, accidental, stem, flag, dot,
- * and two invisible boxes: the head's own and a wider one a pointer can hit); rests, beams and
+ * and an invisible box, the head's own); rests, beams and
  * triplet brackets. `noteAttributes` gives a note's group its attributes (null leaves it bare).
  */
 export function systemMarkup(system: EngravedSystem, noteAttributes: NoteAttributes): string {
@@ -445,7 +445,10 @@ export function systemMarkup(system: EngravedSystem, noteAttributes: NoteAttribu
 }
 
 function noteMarkup(p: PlacedEvent, top: number, attrs: ReturnType<NoteAttributes>): string {
-  let s = attrs ? `<g class="sf-stavenote ${attrs.classes}" ${attrs.attributes}>` : '<g class="sf-stavenote">';
+  // A pointer anywhere in the note's box (head, stem, flag) hits the note.
+  let s = attrs
+    ? `<g class="sf-stavenote ${attrs.classes}" ${attrs.attributes} pointer-events="bounding-box">`
+    : '<g class="sf-stavenote" pointer-events="bounding-box">';
   // Ledger lines: every line between the staff and the note, a little wider than the head.
   let ledger = '';
   const x0 = r1(p.x - 0.4 * SPACE);
@@ -469,9 +472,6 @@ function noteMarkup(p: PlacedEvent, top: number, attrs: ReturnType<NoteAttribute
     }
   }
   s += dotsMarkup(p, p.pos % 2 === 0 ? p.y - 5 : p.y);
-  const hitTop = Math.min(p.y - 6, p.code === 'w' ? p.y : p.stemEnd);
-  const hitBottom = Math.max(p.y + 6, p.code === 'w' ? p.y : p.stemEnd);
-  s += `<rect class="sf-hit" x="${r1(p.x)}" y="${r1(hitTop)}" width="${r1(p.w)}" height="${r1(hitBottom - hitTop)}" opacity="0" pointer-events="auto"/>`;
   // The notehead's own box: a glyph's text box is the font's whole line, far taller than the
   // head, so a page that lays things over a note measures this instead.
   s += `<rect class="sf-head" x="${r1(p.x)}" y="${r1(p.y - 5)}" width="${r1(p.w)}" height="10" opacity="0"/>`;
