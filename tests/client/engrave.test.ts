@@ -107,7 +107,9 @@ describe('beams, triplets and a grand staff', () => {
       const first = b.notes[0].stemX;
       for (const n of b.notes) expect(n.stemEnd).toBeCloseTo(b.y0 + b.slope * (n.stemX - first), 6);
       const last = b.notes[b.notes.length - 1];
-      expect(Math.abs(b.slope * (last.stemX - first))).toBeLessThanOrEqual(10 + 1e-9);
+      // at most one space, and at most a quarter of the distance over close notes
+      const span = last.stemX - first;
+      expect(Math.abs(b.slope * span)).toBeLessThanOrEqual(Math.max(2.5, Math.min(10, span / 4)) + 1e-9);
       // every stem is at least three and a half spaces from its head
       for (const n of b.notes) expect(Math.abs(n.stemEnd - n.y)).toBeGreaterThanOrEqual(35 - 1e-9);
       expect(b.notes.every((n) => n.up === b.up)).toBe(true);
@@ -166,6 +168,69 @@ describe('beams, triplets and a grand staff', () => {
     });
     expect(reach(s, 0).above).toBeCloseTo(r.above, 9);
     expect(reach(s, 0).below).toBeCloseTo(r.below, 9);
+  });
+});
+
+describe('rests, flags and lines', () => {
+  it('prints a rest that fills the bar as a whole rest hanging from the fourth line, in any meter (common practice)', () => {
+    for (const meter of [
+      [12, 8],
+      [3, 4],
+      [5, 4],
+      [9, 8],
+    ] as const) {
+      // starting at C5 going up, the bass staff is empty: a bar rest in each of its bars
+      const { systems } = engrave({
+        pair: ['C', 'D'],
+        pattern: 'stack',
+        instrument: 'piano',
+        start: 72,
+        meter: [...meter],
+      });
+      const barRests = systems.flatMap((s) =>
+        s.measures.flatMap((m) =>
+          m.events.flat().filter((p) => p.event.kind === 'rest' && p.event.duration === (meter[0] * 4) / meter[1]),
+        ),
+      );
+      expect(barRests.length).toBeGreaterThan(0);
+      for (const r of barRests) {
+        expect(r.glyph).toBe(GLYPH.restWhole);
+        expect(r.pos).toBe(2);
+        expect(r.dots).toBe(0);
+      }
+    }
+  });
+
+  it('leaves room after a flag, so the next note, rest or accidental never runs into it', () => {
+    let flags = 0;
+    for (const pattern of ['weave', 'stack', 'four-three'] as const)
+      for (const pair of [
+        ['F', 'Eb'],
+        ['F#', 'E'],
+      ] as const) {
+        const { systems } = engrave({ pair: [...pair], pattern, instrument: 'piano', meter: [3, 4] });
+        for (const s of systems)
+          for (const m of s.measures)
+            for (const row of m.events) {
+              const sorted = [...row].sort((a, b) => a.x - b.x);
+              sorted.forEach((a, i) => {
+                const b = sorted[i + 1];
+                if (!b || !a.flag || !a.up) return;
+                flags++;
+                const accidental = b.event.accidental ? 12 : 0;
+                expect(b.x - accidental).toBeGreaterThan(a.stemX + 10);
+              });
+            }
+      }
+    expect(flags).toBeGreaterThan(0);
+  });
+
+  it('stretches every line of music to the width but a short last one', () => {
+    const drill = generateDrill({ pair: ['F', 'Eb'], pattern: 'weave', direction: 'up-down', instrument: 'alto-sax' });
+    const plans = planSystems(notate(drill).measures, 1, 960);
+    expect(plans.length).toBeGreaterThan(2);
+    for (const plan of plans.slice(0, -1))
+      expect(plan.widths.reduce((a, b) => a + b, 0)).toBeGreaterThan(960 - plan.widths.length);
   });
 });
 

@@ -153,29 +153,56 @@ function placeMeasure(
   noteStart: number,
   noteEnd: number,
 ): Pick<PlacedMeasure, 'events' | 'beams' | 'tuplets'> {
-  // A rest that fills the bar is centred in it (common practice); everything else takes a slot
-  // by its onset, shared by both staves of a grand staff so their beats line up.
+  // A rest that fills the bar is a whole rest centred in it, in any meter (common practice);
+  // everything else takes a slot by its onset, shared by both staves of a grand staff so their
+  // beats line up.
   const fillsBar = (e: NotatedEvent) => e.kind === 'rest' && Math.abs(e.duration - measureQuarters) < EPS;
-  const onsets = [...new Set(events.filter((e) => !fillsBar(e)).map((e) => Math.round(e.start * 1e6) / 1e6))].sort(
-    (a, b) => a - b,
-  );
-  const room = onsets.map((t) => {
-    let acc = 0;
-    for (const e of events)
-      if (e.accidental && Math.abs(e.start - t) < EPS) acc = Math.max(acc, widthOf(ACCIDENTAL_GLYPH[e.accidental]) + 3);
-    return acc;
-  });
+  const printedAs = (e: NotatedEvent): { code: Code; dots: number } => {
+    if (fillsBar(e)) return { code: 'w', dots: 0 };
+    // A value the model should never give is drawn as an eighth rather than breaking the page.
+    const v = printedValue(e.duration, e.tuplet !== undefined) ?? { code: '8', dots: 0 };
+    return { code: v.code as Code, dots: v.dots };
+  };
+  // A flagged value carries its own flag when no other note of its beam group shares the beam.
+  const inBeam = new Map<string, number>();
+  for (const e of events)
+    if (e.kind === 'note' && e.beam !== undefined && FLAGS[printedAs(e).code])
+      inBeam.set(`${e.staff}:${e.beam}`, (inBeam.get(`${e.staff}:${e.beam}`) ?? 0) + 1);
+  const flagged = (e: NotatedEvent) =>
+    e.kind === 'note' &&
+    Boolean(FLAGS[printedAs(e).code]) &&
+    (e.beam === undefined || (inBeam.get(`${e.staff}:${e.beam}`) ?? 0) < 2);
+
+  // Each onset needs room on its left for an accidental and on its right for its heads or
+  // rests, flags and dots; the rest of the bar is shared by duration (a longer note gets more
+  // room, less than in proportion: common practice).
+  const key = (t: number) => Math.round(t * 1e6) / 1e6;
+  const onsets = [...new Set(events.filter((e) => !fillsBar(e)).map((e) => key(e.start)))].sort((a, b) => a - b);
+  const left = onsets.map(() => 0);
+  const right = onsets.map(() => 0);
+  const slotOf = new Map(onsets.map((t, i) => [t, i]));
+  for (const e of events) {
+    const i = slotOf.get(key(e.start));
+    if (i === undefined) continue;
+    const { code, dots } = printedAs(e);
+    if (e.accidental) left[i] = Math.max(left[i], widthOf(ACCIDENTAL_GLYPH[e.accidental]) + 3);
+    const body = widthOf(e.kind === 'rest' ? REST_GLYPH[code] : headGlyph(code));
+    right[i] = Math.max(right[i], body + (flagged(e) ? 11 : 0) + (dots ? 3 + 6 * dots : 0));
+  }
+  const gaps = onsets.slice(0, -1).map((_t, i) => right[i] + 5 + left[i + 1]);
   const weights = onsets.map((t, i) => Math.max(onsets[i + 1] ?? measureQuarters, t + 1 / 16) - t).map((d) => d ** 0.6);
   const totalWeight = weights.reduce((a, b) => a + b, 0) || 1;
-  const flex = Math.max(0, noteEnd - noteStart - room.reduce((a, b) => a + b, 0));
+  const fixed = (left[0] ?? 0) + gaps.reduce((a, b) => a + b, 0) + (right[right.length - 1] ?? 0);
+  const spare = noteEnd - noteStart - fixed;
+  // Too little room (a very narrow screen): the gaps shrink alike rather than run into the barline.
+  const squeeze = spare < 0 && fixed > 0 ? Math.max(0.5, (noteEnd - noteStart) / fixed) : 1;
   const slotX = new Map<number, number>();
-  let cursor = noteStart;
+  let cursor = noteStart + (left[0] ?? 0) * squeeze;
   onsets.forEach((t, i) => {
-    cursor += room[i];
     slotX.set(t, cursor);
-    cursor += (flex * weights[i]) / totalWeight;
+    if (i < gaps.length) cursor += gaps[i] * squeeze + (Math.max(0, spare) * weights[i]) / totalWeight;
   });
-  const xAt = (t: number) => slotX.get(Math.round(t * 1e6) / 1e6) ?? noteStart;
+  const xAt = (t: number) => slotX.get(key(t)) ?? noteStart;
 
   const placed: PlacedEvent[][] = clefs.map(() => []);
   const beams: PlacedBeam[] = [];
@@ -193,9 +220,8 @@ function placeMeasure(
     const beamed = new Map<number, PlacedEvent[]>();
     const inTuplet = new Map<number, PlacedEvent[]>();
     for (const e of onStaff) {
-      // A value the model should never give is drawn as an eighth rather than breaking the page.
-      const value = printedValue(e.duration, e.tuplet !== undefined) ?? { code: '8', dots: 0 };
-      const code = value.code as Code;
+      const value = printedAs(e);
+      const code = value.code;
       let p: PlacedEvent;
       if (e.kind === 'rest') {
         const glyph = REST_GLYPH[code];
@@ -275,7 +301,7 @@ function placeMeasure(
 
 /**
  * A beam over a group (common practice): it follows the line from the first note to the last,
- * at most one space of slant, flat when an inner note reaches past both ends; every stem at
+ * at most one space of slant (less over close notes), flat when an inner note reaches past both ends; every stem at
  * least three and a half spaces long (more under two or three beams), the shortest exactly so.
  */
 function placeBeam(notes: PlacedEvent[]): PlacedBeam {
@@ -286,7 +312,9 @@ function placeBeam(notes: PlacedEvent[]): PlacedBeam {
   const ends = [first.y, last.y];
   const inner = notes.slice(1, -1);
   const pastEnds = inner.some((n) => (up ? n.y < Math.min(...ends) : n.y > Math.max(...ends)));
-  const rise = pastEnds ? 0 : Math.max(-SPACE, Math.min(SPACE, (last.y - first.y) / 2));
+  // Close notes get a gentler slant: at most a quarter of the distance between the end stems.
+  const most = Math.min(SPACE, Math.max(SPACE / 4, span / 4));
+  const rise = pastEnds ? 0 : Math.max(-most, Math.min(most, (last.y - first.y) / 2));
   const slope = rise / span;
   const levels = Math.max(...notes.map((n) => FLAGS[n.code] ?? 1));
   const length = STEM + (levels - 1) * THICK.beamStep;
@@ -321,7 +349,7 @@ function placeTuplet(members: PlacedEvent[], staff: number): PlacedTuplet {
     y = up ? Math.min(y, extent - 10) : Math.max(y, extent + 10);
   }
   const last = members[members.length - 1];
-  return { staff, x0: members[0].x - 2, x1: last.x + last.w + 2, y, up };
+  return { staff, x0: members[0].x, x1: last.x + last.w, y, up };
 }
 
 /** How far a staff's drawing reaches above its top line and below its bottom line, in px. */
@@ -332,7 +360,7 @@ export function reach(system: EngravedSystem, staff: number): { above: number; b
   let bottom = bottomLine;
   for (const m of system.measures) {
     for (const p of m.events[staff]) {
-      top = Math.min(top, p.y - (p.event.accidental ? 14 : 6));
+      top = Math.min(top, p.y - (p.event.accidental ? 18 : 6));
       bottom = Math.max(bottom, p.y + 7);
       if (p.event.kind === 'note' && p.code !== 'w') {
         top = Math.min(top, Math.min(p.stemEnd, p.stemBase) - 4);
@@ -416,12 +444,12 @@ export function systemMarkup(system: EngravedSystem, noteAttributes: NoteAttribu
     });
     if (m.number > 0)
       out.push(
-        `<text class="sf-measure-number" x="${r1(m.x)}" y="${r1(systemTop - 12)}" font-family="Academico, Georgia, serif" font-size="11">${m.number}</text>`,
+        `<text class="sf-measure-number" x="${r1(m.x)}" y="${r1(numberY(m, systemTop))}" font-family="Academico, Georgia, serif" font-size="11">${m.number}</text>`,
       );
     // Barlines run through every staff of a grand staff; the last measure ends thin-thick.
     if (m.last) {
       out.push(
-        `<path class="sf-barline" d="M${r1(right - 8)} ${systemTop}V${systemBottom}" stroke="currentColor" stroke-width="${THICK.thinBarline}"/>`,
+        `<path class="sf-barline" d="M${r1(right - THICK.thickBarline - 4.5)} ${systemTop}V${systemBottom}" stroke="currentColor" stroke-width="${THICK.thinBarline}"/>`,
         `<rect class="sf-barline" x="${r1(right - THICK.thickBarline)}" y="${systemTop}" width="${THICK.thickBarline}" height="${systemBottom - systemTop}"/>`,
       );
     } else if (grand) {
@@ -444,6 +472,19 @@ export function systemMarkup(system: EngravedSystem, noteAttributes: NoteAttribu
   return out.join('');
 }
 
+/** A measure number sits over the barline, above anything drawn near the start of the bar. */
+function numberY(m: PlacedMeasure, systemTop: number): number {
+  let y = systemTop - 12;
+  const near = m.x + 3 * SPACE;
+  for (const p of m.events[0] ?? []) {
+    if (p.x >= near) continue;
+    y = Math.min(y, p.y - 10);
+    if (p.event.kind === 'note' && p.code !== 'w') y = Math.min(y, p.stemEnd - 6);
+  }
+  for (const t of m.tuplets) if (t.staff === 0 && t.up && t.x0 < near) y = Math.min(y, t.y - 6);
+  return y;
+}
+
 function noteMarkup(p: PlacedEvent, top: number, attrs: ReturnType<NoteAttributes>): string {
   // A pointer anywhere in the note's box (head, stem, flag) hits the note.
   let s = attrs
@@ -451,7 +492,8 @@ function noteMarkup(p: PlacedEvent, top: number, attrs: ReturnType<NoteAttribute
     : '<g class="sf-stavenote" pointer-events="bounding-box">';
   // Ledger lines: every line between the staff and the note, a little wider than the head.
   let ledger = '';
-  const x0 = r1(p.x - 0.4 * SPACE);
+  // (shorter on the left beside an accidental, so the two do not touch)
+  const x0 = r1(p.x - (p.event.accidental ? 0.15 : 0.4) * SPACE);
   const x1 = r1(p.x + p.w + 0.4 * SPACE);
   for (let l = -2; l >= p.pos; l -= 2) ledger += `M${x0} ${r1(top + l * 5)}H${x1}`;
   for (let l = 10; l <= p.pos; l += 2) ledger += `M${x0} ${r1(top + l * 5)}H${x1}`;

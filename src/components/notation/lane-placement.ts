@@ -55,6 +55,13 @@ export function placeOttavaLines(
   // Ottava lines, per staff, over runs of notes under one sign.
   notation.staves.forEach((_clef, s) => {
     const onStaff = system.measures.flatMap((m) => m.events[s].filter((p) => p.event.kind === 'note'));
+    // Every ottava line on one side of a staff on this line sits at one height, clear of all the
+    // notes under any of them, so a sign never runs into the notes of the next passage.
+    const heights = ([1, -1] as const).map((side) => {
+      const under = onStaff.filter((p) => Math.sign(p.event.ottava) === side);
+      const lane = side > 0 ? layout.ottavaUp[s] : layout.ottavaDown[s];
+      return under.length ? ottavaY(under, system.topLines[s], side > 0, lane) : lane;
+    });
     let start = -1;
     for (let j = 0; j <= onStaff.length; j++) {
       const o = j < onStaff.length ? onStaff[j].event.ottava : 0;
@@ -67,12 +74,7 @@ export function placeOttavaLines(
         drawOttava(
           lanes,
           { x0: onStaff[start].x - 2, x1: last.x + last.w + 4 },
-          ottavaY(
-            onStaff.slice(start, j),
-            system.topLines[s],
-            kind > 0,
-            kind > 0 ? layout.ottavaUp[s] : layout.ottavaDown[s],
-          ),
+          kind > 0 ? heights[0] : heights[1],
           kind,
           closes,
         );

@@ -22,12 +22,12 @@ export function naturalWidth(measure: NotatedMeasure, staves: number): number {
     most = Math.max(most, events.length);
     signs = Math.max(signs, events.filter((e) => e.accidental).length);
   }
-  return Math.max(96, 30 + most * 26 + signs * 7);
+  return Math.max(96, 30 + most * 26 + signs * 12);
 }
 
 /**
- * Greedily fills lines to the usable width, then stretches each line that is full enough to the
- * edge (a last line that is short keeps its natural spacing, as printed music does).
+ * Greedily fills lines to the usable width, then stretches every line to the edge but a last
+ * line that is short, which keeps its natural spacing, as printed music does.
  */
 export function planSystems(measures: NotatedMeasure[], staves: number, usable: number): SystemPlan[] {
   const systems: SystemPlan[] = [];
@@ -51,12 +51,13 @@ export function planSystems(measures: NotatedMeasure[], staves: number, usable: 
     used += w;
   });
   if (current.measures.length) systems.push(current);
-  for (const s of systems) {
+  systems.forEach((s, i) => {
     const total = s.widths.reduce((a, b) => a + b, 0);
     const fill = usable / total;
-    const stretch = systems.length === 1 ? Math.min(fill, 1.6) : total / usable > 0.55 ? fill : 1;
+    const last = i === systems.length - 1;
+    const stretch = systems.length === 1 ? Math.min(fill, 1.6) : !last || total / usable > 0.55 ? fill : 1;
     s.widths = s.widths.map((w) => Math.floor(w * Math.max(stretch, Math.min(1, fill))));
-  }
+  });
   return systems;
 }
 
