@@ -13,7 +13,7 @@ import { engraveSystem, type EngravedSystem, moveSystem, type PlacedEvent, reach
 import { notesOf, placeCellTags, placeChordSymbols, placeOttavaLines } from './lane-placement';
 import { BRACE_ROOM, narrowestLine, planSystems } from './layout';
 import { MarkLayer, type NoteGeometry } from './marks';
-import { MUSIC_FONT_PX } from './smufl';
+import { MUSIC_FONT_PX, SPACE } from './smufl';
 import { LEFT, layoutSystem, type SystemLayout, TOP_LINE } from './system';
 import { aChromasOf, triadOf } from './triad-of';
 
@@ -105,17 +105,7 @@ export async function renderStaff(
   const parts = [
     `<svg xmlns="http://www.w3.org/2000/svg" aria-hidden="true" viewBox="0 0 ${width} ${height}" style="width: 100%; height: auto;" pointer-events="none" fill="currentColor" font-family="Bravura" font-size="${MUSIC_FONT_PX}"><g class="sf-lanes"></g>`,
   ];
-  systems.forEach((system, si) => {
-    parts.push(systemMarkup(system, noteAttributes));
-    const layout = layouts[si];
-    const topLine = system.topLines[0];
-    const bottomLine = system.topLines[system.topLines.length - 1] + 40;
-    for (const p of notesOf(system)) {
-      const i = p.event.noteIndex;
-      if (i === undefined || i < 0 || i >= drill.notes.length) continue;
-      geometry[i] = { x: p.x + p.w / 2, laneY: layout.marksY, top: topLine - 10, bottom: bottomLine + 10 };
-    }
-  });
+  for (const system of systems) parts.push(systemMarkup(system, noteAttributes));
   parts.push('<g class="sf-marks"></g></svg>');
   const holder = document.createElement('div');
   holder.innerHTML = parts.join('');
@@ -125,7 +115,15 @@ export async function renderStaff(
   plans.forEach((plan, si) => {
     const layout = layouts[si];
     const system = systems[si];
-    placeCellTags(lanes, drill, notesOf(system), layout.cellY, aChromas);
+    const drawn = notesOf(system);
+    const top = system.topLines[0] - 10;
+    const bottom = system.topLines[system.topLines.length - 1] + 4 * SPACE + 10;
+    for (const p of drawn) {
+      const i = p.event.noteIndex;
+      if (i !== undefined && i >= 0 && i < drill.notes.length)
+        geometry[i] = { x: p.x + p.w / 2, laneY: layout.marksY, top, bottom };
+    }
+    placeCellTags(lanes, drill, drawn, layout.cellY, aChromas);
     placeOttavaLines(lanes, notation, plan, system, layout);
     placeChordSymbols(lanes, notation, plan, system, layout.chordY);
   });
