@@ -1,13 +1,13 @@
 import { type DrillSpec, generateDrill, type Notation, notate } from '@shared/engine';
 import { describe, expect, it } from 'vitest';
 import {
-  type EngravedSystem,
   engraveSystem,
   moveSystem,
   type PlacedEvent,
   reach,
   systemMarkup,
 } from '../../src/components/notation/engrave';
+import { notesOf } from '../../src/components/notation/lane-placement';
 import { planSystems } from '../../src/components/notation/layout';
 import { GLYPH } from '../../src/components/notation/smufl';
 
@@ -19,9 +19,6 @@ function engrave(spec: Partial<DrillSpec> & Pick<DrillSpec, 'pattern'>, width = 
   );
   return { drill, notation, systems };
 }
-
-const notesOf = (systems: EngravedSystem[]) =>
-  systems.flatMap((s) => s.measures.flatMap((m) => m.events.flat().filter((p) => p.event.kind === 'note')));
 
 /** A one-measure model with the notes given (quarters on a treble staff unless said). */
 function single(
@@ -158,10 +155,10 @@ describe('beams, triplets and a grand staff', () => {
   it('moves a line and everything on it to the height it is given', () => {
     const { systems } = engrave({ pair: ['F', 'Eb'], pattern: 'weave', instrument: 'alto-sax' });
     const s = systems[0];
-    const before = notesOf([s]).map((p: PlacedEvent) => [p.y, p.stemEnd]);
+    const before = notesOf(s).map((p: PlacedEvent) => [p.y, p.stemEnd]);
     const r = reach(s, 0);
     moveSystem(s, [100]);
-    const after = notesOf([s]).map((p) => [p.y - 100, p.stemEnd - 100]);
+    const after = notesOf(s).map((p) => [p.y - 100, p.stemEnd - 100]);
     after.forEach(([y, stem], i) => {
       expect(y).toBeCloseTo(before[i][0], 9);
       expect(stem).toBeCloseTo(before[i][1], 9);

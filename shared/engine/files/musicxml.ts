@@ -3,6 +3,7 @@ import { instruments } from '../instruments';
 import { notate } from '../notation/notate';
 import { isCompound, quarterTempo } from '../patterns/timing';
 import type { Clef, Drill, NotatedEvent, NotatedMeasure, Notation } from '../types';
+import { escapeXml } from './xml-text';
 
 /** Divisions per quarter note: eighths (12), triplet eighths (8), sixteenths (6) and 32nds (3) are whole. */
 const DIVISIONS = 24;
@@ -40,10 +41,6 @@ const CLEF_XML: Record<Clef, string> = {
   'treble-8vb': '<sign>G</sign><line>2</line><clef-octave-change>-1</clef-octave-change>',
   bass: '<sign>F</sign><line>4</line>',
 };
-
-function escapeXml(text: string): string {
-  return text.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;');
-}
 
 /** MusicXML <transpose>: written to sounding, as diatonic steps, semitones and octaves. */
 function transposeXml(semitones: number): string {

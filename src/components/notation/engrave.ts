@@ -281,9 +281,8 @@ function placeMeasure(
           stemX,
           stemBase,
           stemEnd,
-          flag: flags > 0,
+          flag: flagged(e),
         };
-        if (code === 'w') p.flag = false;
         if (e.beam !== undefined && flags > 0) beamed.set(e.beam, [...(beamed.get(e.beam) ?? []), p]);
       }
       if (e.tuplet !== undefined) inTuplet.set(e.tuplet, [...(inTuplet.get(e.tuplet) ?? []), p]);
@@ -291,7 +290,6 @@ function placeMeasure(
     }
     for (const group of beamed.values()) {
       if (group.length < 2) continue;
-      for (const n of group) n.flag = false;
       beams.push(placeBeam(group));
     }
     for (const group of inTuplet.values()) tuplets.push(placeTuplet(group, s));

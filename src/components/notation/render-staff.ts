@@ -9,6 +9,7 @@
 import academicoUrl from '@vexflow-fonts/academico/academico.woff2?url';
 import bravuraUrl from '@vexflow-fonts/bravura/bravura.woff2?url';
 import type { Drill, Notation } from '@shared/engine';
+import { escapeXml } from '@shared/engine/files/xml-text';
 import { engraveSystem, type EngravedSystem, moveSystem, type PlacedEvent, reach, systemMarkup } from './engrave';
 import { notesOf, placeCellTags, placeChordSymbols, placeOttavaLines } from './lane-placement';
 import { BRACE_ROOM, narrowestLine, planSystems } from './layout';
@@ -94,7 +95,7 @@ export async function renderStaff(
     const i = p.event.noteIndex;
     if (i === undefined || i < 0 || i >= drill.notes.length) return null;
     const triad = triadOf(drill.notes[i], aChromas);
-    const written = escapeAttribute(p.event.written ?? drill.notes[i].written);
+    const written = escapeXml(p.event.written ?? drill.notes[i].written);
     return {
       classes: `sf-note sf-triad-${triad}`,
       attributes: `data-index="${i}" data-note-index="${i}" data-written="${written}" data-triad="${triad}" data-verdict="" data-settled="false"`,
@@ -132,5 +133,3 @@ export async function renderStaff(
   host.replaceChildren(svg);
   return { notes, height, marks: new MarkLayer(svg, notes, geometry, markGroup) };
 }
-
-const escapeAttribute = (s: string) => s.replace(/&/g, '&amp;').replace(/"/g, '&quot;').replace(/</g, '&lt;');
